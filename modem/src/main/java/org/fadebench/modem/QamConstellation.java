@@ -1,0 +1,197 @@
+package org.fadebench.modem;
+
+/**
+ * Gray-labelled square QAM (and BPSK) with unit average symbol energy, with the three operations
+ * the link needs: bit-to-symbol mapping, hard decisions by per-axis slicing, and max-log LLRs.
+ *
+ * <p>Layout (common practice, no source): a symbol carries {@code bitsPerSymbol} bits; the first
+ * half select the in-phase amplitude and the second half the quadrature amplitude (BPSK uses the
+ * in-phase axis only). On each axis the {@code L = 2^m} amplitudes {@code (L-1-2i)·scale},
+ * {@code i = 0..L-1}, carry the binary-reflected Gray code of {@code i}, most significant bit
+ * first, so neighbouring amplitudes differ in exactly one bit and the all-zero label sits at the
+ * most positive amplitude. {@code scale = sqrt(3 / (2 (M-1)))} gives unit average energy for square
+ * M-QAM; BPSK uses amplitudes ±1.
+ *
+ * <p>Complex numbers are interleaved in {@code double[]} arrays: element {@code 2k} is the real part
+ * and {@code 2k+1} the imaginary part of entry {@code k}. Bits are one per {@code byte}, 0 or 1.
+ * No method allocates.
+ */
+public final class QamConstellation {
+
+    private final Modulation modulation;
+    private final int bitsPerSymbol;
+    private final int bitsPerAxis;
+    private final int levels;
+    private final double scale;
+    private final double invScale;
+    private final boolean twoAxes;
+    /** Amplitude of the level whose Gray label (as an integer, MSB first) is the index. */
+    private final double[] amplitudeOfLabel;
+    /** Gray label (integer) of level index i, where level i has amplitude (L-1-2i)·scale. */
+    private final int[] labelOfLevel;
+    /** Amplitude of level index i. */
+    private final double[] amplitudeOfLevel;
+
+    QamConstellation(Modulation modulation) {
+        this.modulation = modulation;
+        this.bitsPerSymbol = modulation.bitsPerSymbol();
+        this.twoAxes = modulation != Modulation.BPSK;
+        this.bitsPerAxis = twoAxes ? bitsPerSymbol / 2 : 1;
+        this.levels = 1 << bitsPerAxis;
+        int order = modulation.order();
+        this.scale = twoAxes ? Math.sqrt(3.0 / (2.0 * (order - 1))) : 1.0;
+        this.invScale = 1.0 / scale;
+        this.amplitudeOfLabel = new double[levels];
+        this.labelOfLevel = new int[levels];
+        this.amplitudeOfLevel = new double[levels];
+        for (int i = 0; i < levels; i++) {
+            int gray = i ^ (i >>> 1);
+            double amplitude = (levels - 1 - 2 * i) * scale;
+            labelOfLevel[i] = gray;
+            amplitudeOfLevel[i] = amplitude;
+            amplitudeOfLabel[gray] = amplitude;
+        }
+    }
+
+    public Modulation modulation() {
+        return modulation;
+    }
+
+    public int bitsPerSymbol() {
+        return bitsPerSymbol;
+    }
+
+    /** Number of amplitude levels per axis (2 for BPSK and QPSK). */
+    public int levelsPerAxis() {
+        return levels;
+    }
+
+    /** Distance from a level to the decision boundary halfway to its neighbour. */
+    public double halfSpacing() {
+        return scale;
+    }
+
+    /**
+     * Maps {@code count} symbols' worth of bits to symbols.
+     *
+     * @param bits       one bit per byte, read from {@code bitOffset}
+     * @param symbols    interleaved complex output, written from complex index {@code symOffset}
+     */
+    public void map(byte[] bits, int bitOffset, double[] symbols, int symOffset, int count) {
+        int b = bitOffset;
+        int o = symOffset << 1;
+        final int m = bitsPerAxis;
+        for (int n = 0; n < count; n++) {
+            int labelI = 0;
+            for (int j = 0; j < m; j++) {
+                labelI = (labelI << 1) | bits[b++];
+            }
+            symbols[o++] = amplitudeOfLabel[labelI];
+            if (twoAxes) {
+                int labelQ = 0;
+                for (int j = 0; j < m; j++) {
+                    labelQ = (labelQ << 1) | bits[b++];
+                }
+                symbols[o++] = amplitudeOfLabel[labelQ];
+            } else {
+                symbols[o++] = 0.0;
+            }
+        }
+    }
+
+    /**
+     * Hard decisions by per-axis slicing (minimum Euclidean distance, no search over points).
+     *
+     * @param estimates interleaved complex symbol estimates on the unit-energy scale
+     * @param bits      decided bits, one per byte, written from {@code bitOffset}
+     */
+    public void demapHard(double[] estimates, int symOffset, byte[] bits, int bitOffset, int count) {
+        int b = bitOffset;
+        int e = symOffset << 1;
+        for (int n = 0; n < count; n++) {
+            b = writeLabel(labelOfLevel[slice(estimates[e])], bits, b);
+            if (twoAxes) {
+                b = writeLabel(labelOfLevel[slice(estimates[e + 1])], bits, b);
+            }
+            e += 2;
+        }
+    }
+
+    /** Level index nearest to amplitude {@code y}: level i sits at (L-1-2i)·scale. */
+    private int slice(double y) {
+        // i = round(((L-1) - y/scale) / 2), clamped to [0, L-1]
+        int i = (int) Math.floor(((levels - 1) - y * invScale) * 0.5 + 0.5);
+        if (i < 0) {
+            return 0;
+        }
+        return Math.min(i, levels - 1);
+    }
+
+    private int writeLabel(int label, byte[] bits, int b) {
+        for (int j = bitsPerAxis - 1; j >= 0; j--) {
+            bits[b++] = (byte) ((label >>> j) & 1);
+        }
+        return b;
+    }
+
+    /**
+     * Max-log bit log-likelihood ratios, {@code LLR = ln P(b=0|y) / P(b=1|y)} approximated by
+     * {@code (min_{s: b=1} |y-s|² - min_{s: b=0} |y-s|²) · gain / n0}: positive favours bit 0.
+     *
+     * <p>The estimate of symbol k is modelled as {@code s_k + w_k}, {@code w_k ~ CN(0, n0/gain_k)},
+     * which is what the combiners deliver. Max-log: the sum over points in each bit's subset is
+     * replaced by its largest term (e.g. J. G. Proakis and M. Salehi, Digital Communications, 5th
+     * ed.; common practice). With Gray square QAM the two axes separate, so each axis is solved on
+     * its own over its L amplitudes.
+     *
+     * @param gain per-symbol post-combining gain, read from {@code symOffset}
+     * @param n0   noise power spectral density (complex noise variance before combining)
+     * @param llr  output, {@code bitsPerSymbol} values per symbol, written from {@code llrOffset}
+     */
+    public void demapMaxLog(double[] estimates, double[] gain, int symOffset, double n0,
+                            double[] llr, int llrOffset, int count) {
+        int l = llrOffset;
+        for (int n = 0; n < count; n++) {
+            int k = symOffset + n;
+            double w = gain[k] / n0;
+            l = axisMaxLog(estimates[2 * k], w, llr, l);
+            if (twoAxes) {
+                l = axisMaxLog(estimates[2 * k + 1], w, llr, l);
+            }
+        }
+    }
+
+    private int axisMaxLog(double y, double weight, double[] llr, int l) {
+        final int m = bitsPerAxis;
+        for (int j = 0; j < m; j++) {
+            int shift = m - 1 - j;
+            double min0 = Double.POSITIVE_INFINITY;
+            double min1 = Double.POSITIVE_INFINITY;
+            for (int i = 0; i < levels; i++) {
+                double d = y - amplitudeOfLevel[i];
+                double d2 = d * d;
+                if (((labelOfLevel[i] >>> shift) & 1) == 0) {
+                    if (d2 < min0) {
+                        min0 = d2;
+                    }
+                } else if (d2 < min1) {
+                    min1 = d2;
+                }
+            }
+            llr[l++] = (min1 - min0) * weight;
+        }
+        return l;
+    }
+
+    /**
+     * Writes the symbol whose label is the integer {@code label} (bit 0 of the symbol is its most
+     * significant bit) into {@code out[0..1]}. For tests and tables, not the hot path.
+     */
+    public void point(int label, double[] out) {
+        byte[] bits = new byte[bitsPerSymbol];
+        for (int j = 0; j < bitsPerSymbol; j++) {
+            bits[j] = (byte) ((label >>> (bitsPerSymbol - 1 - j)) & 1);
+        }
+        map(bits, 0, out, 0, 1);
+    }
+}

@@ -1,0 +1,173 @@
+package org.fadebench.modem;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Random;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.EnumSource;
+
+class QamConstellationTest {
+
+    private static double[][] allPoints(QamConstellation c) {
+        int m = c.modulation().order();
+        double[][] pts = new double[m][2];
+        for (int label = 0; label < m; label++) {
+            c.point(label, pts[label]);
+        }
+        return pts;
+    }
+
+    @ParameterizedTest
+    @EnumSource(Modulation.class)
+    void unitAverageEnergyAndDistinctPoints(Modulation mod) {
+        double[][] pts = allPoints(mod.constellation());
+        double energy = 0;
+        for (double[] p : pts) {
+            energy += p[0] * p[0] + p[1] * p[1];
+        }
+        assertEquals(1.0, energy / pts.length, 1e-12, "average symbol energy");
+        for (int a = 0; a < pts.length; a++) {
+            for (int b = a + 1; b < pts.length; b++) {
+                assertTrue(Math.hypot(pts[a][0] - pts[b][0], pts[a][1] - pts[b][1]) > 1e-9);
+            }
+        }
+    }
+
+    /** Gray labelling: nearest neighbours differ in exactly one bit (definition of a Gray map). */
+    @ParameterizedTest
+    @EnumSource(Modulation.class)
+    void nearestNeighboursDifferInOneBit(Modulation mod) {
+        QamConstellation c = mod.constellation();
+        double[][] pts = allPoints(c);
+        double dmin = 2 * c.halfSpacing();
+        int pairs = 0;
+        for (int a = 0; a < pts.length; a++) {
+            for (int b = a + 1; b < pts.length; b++) {
+                double d = Math.hypot(pts[a][0] - pts[b][0], pts[a][1] - pts[b][1]);
+                if (Math.abs(d - dmin) < 1e-9) {
+                    assertEquals(1, Integer.bitCount(a ^ b), "labels " + a + " and " + b);
+                    pairs++;
+                }
+            }
+        }
+        int l = c.levelsPerAxis();
+        int expected = mod == Modulation.BPSK ? 1 : 2 * l * (l - 1);
+        assertEquals(expected, pairs, "number of nearest-neighbour pairs on the square grid");
+    }
+
+    @Test
+    void knownPoints() {
+        // Common practice, no source: BPSK bit 0 -> +1; QPSK bits (0,1) -> (+1 - j)/√2.
+        double[] p = new double[2];
+        Modulation.BPSK.constellation().point(0, p);
+        assertArrayEquals(new double[] {1, 0}, p, 0);
+        Modulation.QPSK.constellation().point(0b01, p);
+        assertArrayEquals(new double[] {Math.sqrt(0.5), -Math.sqrt(0.5)}, p, 1e-15);
+        // 16-QAM: label 0000 is the outer corner (+3 + 3j)/√10.
+        Modulation.QAM16.constellation().point(0, p);
+        assertArrayEquals(new double[] {3 / Math.sqrt(10), 3 / Math.sqrt(10)}, p, 1e-15);
+    }
+
+    /** Slicing equals exhaustive minimum-distance search over all points. */
+    @ParameterizedTest
+    @EnumSource(Modulation.class)
+    void hardDecisionEqualsExhaustiveSearch(Modulation mod) {
+        QamConstellation c = mod.constellation();
+        double[][] pts = allPoints(c);
+        int k = c.bitsPerSymbol();
+        Random rnd = new Random(7);
+        double[] y = new double[2];
+        byte[] bits = new byte[k];
+        for (int trial = 0; trial < 20_000; trial++) {
+            y[0] = 2.5 * rnd.nextGaussian();
+            y[1] = mod == Modulation.BPSK ? 0 : 2.5 * rnd.nextGaussian();
+            c.demapHard(y, 0, bits, 0, 1);
+            int best = 0;
+            double bestD = Double.MAX_VALUE;
+            for (int label = 0; label < pts.length; label++) {
+                double d = Math.pow(y[0] - pts[label][0], 2) + Math.pow(y[1] - pts[label][1], 2);
+                if (d < bestD) {
+                    bestD = d;
+                    best = label;
+                }
+            }
+            int got = 0;
+            for (byte b : bits) {
+                got = (got << 1) | b;
+            }
+            assertEquals(best, got, "y=" + y[0] + "," + y[1]);
+        }
+    }
+
+    @ParameterizedTest
+    @EnumSource(Modulation.class)
+    void mapThenDemapRoundTrips(Modulation mod) {
+        QamConstellation c = mod.constellation();
+        int n = 1000;
+        byte[] bits = new byte[n * c.bitsPerSymbol()];
+        Random rnd = new Random(3);
+        for (int i = 0; i < bits.length; i++) {
+            bits[i] = (byte) rnd.nextInt(2);
+        }
+        double[] s = new double[2 * (n + 1)];
+        c.map(bits, 0, s, 1, n);
+        byte[] back = new byte[bits.length];
+        c.demapHard(s, 1, back, 0, n);
+        assertArrayEquals(bits, back);
+    }
+
+    /**
+     * Max-log LLR equals its definition evaluated by brute force over all M points (max-log
+     * approximation of the bit LLR: Proakis and Salehi, Digital Communications, 5th ed.; common
+     * practice), and its sign agrees with the hard decision.
+     */
+    @ParameterizedTest
+    @EnumSource(Modulation.class)
+    void maxLogLlrEqualsBruteForce(Modulation mod) {
+        QamConstellation c = mod.constellation();
+        double[][] pts = allPoints(c);
+        int k = c.bitsPerSymbol();
+        Random rnd = new Random(11);
+        double[] y = new double[2];
+        double[] gain = {0};
+        double[] llr = new double[k];
+        byte[] hard = new byte[k];
+        for (int trial = 0; trial < 5000; trial++) {
+            y[0] = 1.5 * rnd.nextGaussian();
+            y[1] = mod == Modulation.BPSK ? 0 : 1.5 * rnd.nextGaussian();
+            gain[0] = 0.1 + 3 * rnd.nextDouble();
+            double n0 = 0.05 + rnd.nextDouble();
+            c.demapMaxLog(y, gain, 0, n0, llr, 0, 1);
+            c.demapHard(y, 0, hard, 0, 1);
+            for (int j = 0; j < k; j++) {
+                double min0 = Double.MAX_VALUE;
+                double min1 = Double.MAX_VALUE;
+                for (int label = 0; label < pts.length; label++) {
+                    double d = Math.pow(y[0] - pts[label][0], 2) + Math.pow(y[1] - pts[label][1], 2);
+                    if (((label >>> (k - 1 - j)) & 1) == 0) {
+                        min0 = Math.min(min0, d);
+                    } else {
+                        min1 = Math.min(min1, d);
+                    }
+                }
+                double expected = (min1 - min0) * gain[0] / n0;
+                assertEquals(expected, llr[j], 1e-9 * (1 + Math.abs(expected)));
+                if (Math.abs(llr[j]) > 1e-9) {
+                    assertEquals(llr[j] > 0 ? 0 : 1, hard[j], "sign of LLR vs hard decision");
+                }
+            }
+        }
+    }
+
+    @Test
+    void namesAndErrors() {
+        assertEquals(Modulation.QAM64, Modulation.fromCliName("64QAM"));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> Modulation.fromCliName("8psk"));
+        assertTrue(e.getMessage().contains("bpsk, qpsk, 16qam, 64qam, 256qam"), e.getMessage());
+    }
+}
