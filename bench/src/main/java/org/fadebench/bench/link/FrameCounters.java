@@ -1,0 +1,69 @@
+package org.fadebench.bench.link;
+
+/** Error counts over a number of frames. Mutable; one per batch, merged in batch order. */
+public final class FrameCounters {
+
+    private long frames;
+    private long frameErrors;
+    private long bits;
+    private long bitErrors;
+    private long symbols;
+    private long symbolErrors;
+
+    /** Records one frame. */
+    public void addFrame(int frameBits, int frameBitErrors, int frameSymbols, int frameSymbolErrors) {
+        frames++;
+        bits += frameBits;
+        bitErrors += frameBitErrors;
+        symbols += frameSymbols;
+        symbolErrors += frameSymbolErrors;
+        if (frameBitErrors > 0) {
+            frameErrors++;
+        }
+    }
+
+    public void add(FrameCounters o) {
+        frames += o.frames;
+        frameErrors += o.frameErrors;
+        bits += o.bits;
+        bitErrors += o.bitErrors;
+        symbols += o.symbols;
+        symbolErrors += o.symbolErrors;
+    }
+
+    public long frames() {
+        return frames;
+    }
+
+    public long frameErrors() {
+        return frameErrors;
+    }
+
+    public long bits() {
+        return bits;
+    }
+
+    public long bitErrors() {
+        return bitErrors;
+    }
+
+    public long symbols() {
+        return symbols;
+    }
+
+    public long symbolErrors() {
+        return symbolErrors;
+    }
+
+    public double fer() {
+        return frames == 0 ? Double.NaN : (double) frameErrors / frames;
+    }
+
+    public double ber() {
+        return bits == 0 ? Double.NaN : (double) bitErrors / bits;
+    }
+
+    public double ser() {
+        return symbols == 0 ? Double.NaN : (double) symbolErrors / symbols;
+    }
+}

@@ -1,0 +1,104 @@
+package org.fadebench.bench.link;
+
+import org.fadebench.channel.Fading;
+import org.fadebench.coding.stbc.SpaceTimeCode;
+import org.fadebench.modem.Modulation;
+
+/**
+ * What one link is: modulation, space-time code, antennas, fading and frame layout. Validated on
+ * construction, so a {@code LinkSettings} object always describes a link that can be simulated;
+ * every message names the command-line option at fault and the valid choices.
+ *
+ * @param frameBits       information bits per frame; a whole number of code blocks
+ * @param coherenceSlots  slots (symbol periods) per fading block; 0 means the whole frame
+ */
+public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas,
+                           int receiveAntennas, Fading fading, int frameBits, int coherenceSlots) {
+
+    /** Frame length used when the user gives none, rounded up to whole code blocks. */
+    public static final int DEFAULT_FRAME_BITS = 1024;
+
+    public LinkSettings {
+        if (transmitAntennas <= 0) {
+            throw new IllegalArgumentException("--tx must be a positive number of transmit antennas, got "
+                    + transmitAntennas);
+        }
+        if (receiveAntennas <= 0) {
+            throw new IllegalArgumentException("--rx must be a positive number of receive antennas, got "
+                    + receiveAntennas);
+        }
+        if (receiveAntennas > 64) {
+            throw new IllegalArgumentException("--rx " + receiveAntennas + " is more than the 64 supported");
+        }
+        if (code.transmitAntennas() != transmitAntennas) {
+            throw new IllegalArgumentException("--code " + code.name() + " needs exactly "
+                    + code.transmitAntennas() + " transmit antenna" + (code.transmitAntennas() == 1 ? "" : "s")
+                    + " (--tx " + code.transmitAntennas() + "), got --tx " + transmitAntennas);
+        }
+        int blockBits = code.symbolsPerBlock() * modulation.bitsPerSymbol();
+        if (frameBits <= 0 || frameBits % blockBits != 0) {
+            throw new IllegalArgumentException("--frame-bits " + frameBits + " does not fill whole code blocks: "
+                    + code.name() + " with " + modulation.cliName() + " carries " + blockBits
+                    + " bits per block, so use a positive multiple of " + blockBits + " (e.g. "
+                    + roundUpToBlocks(DEFAULT_FRAME_BITS, modulation, code) + ")");
+        }
+        if (frameBits > 1 << 24) {
+            throw new IllegalArgumentException("--frame-bits " + frameBits + " is more than the 16777216 supported");
+        }
+        if (coherenceSlots < 0 || coherenceSlots % code.slotsPerBlock() != 0) {
+            throw new IllegalArgumentException("--coherence " + coherenceSlots + " must be a positive multiple of "
+                    + code.name() + "'s " + code.slotsPerBlock() + " slot" + (code.slotsPerBlock() == 1 ? "" : "s")
+                    + " per block (the channel is constant over a code block), or omitted for the whole frame");
+        }
+    }
+
+    /** The smallest multiple of the code block's bits that is at least {@code bits}. */
+    public static int roundUpToBlocks(int bits, Modulation modulation, SpaceTimeCode code) {
+        int blockBits = code.symbolsPerBlock() * modulation.bitsPerSymbol();
+        return ((bits + blockBits - 1) / blockBits) * blockBits;
+    }
+
+    public int symbolsPerFrame() {
+        return frameBits / modulation.bitsPerSymbol();
+    }
+
+    public int blocksPerFrame() {
+        return symbolsPerFrame() / code.symbolsPerBlock();
+    }
+
+    /** Channel uses (slots) per frame. */
+    public int slotsPerFrame() {
+        return blocksPerFrame() * code.slotsPerBlock();
+    }
+
+    /** Slots per fading block, with 0 resolved to the whole frame and capped at the frame. */
+    public int effectiveCoherenceSlots() {
+        return coherenceSlots == 0 ? slotsPerFrame() : Math.min(coherenceSlots, slotsPerFrame());
+    }
+
+    /** Independent fading blocks per frame. */
+    public int fadingBlocksPerFrame() {
+        int c = effectiveCoherenceSlots();
+        return (slotsPerFrame() + c - 1) / c;
+    }
+
+    /** Information bits per channel use R: bits per symbol times the code's symbol rate. */
+    public double bitsPerChannelUse() {
+        return (double) frameBits / slotsPerFrame();
+    }
+
+    /** Eb/N0 in dB at a given SNR in dB: Eb/N0 = SNR / R. */
+    public double ebN0Db(double snrDb) {
+        return snrDb - 10.0 * Math.log10(bitsPerChannelUse());
+    }
+
+    /** One line for tables and file headers. */
+    public String describe() {
+        String coherence = coherenceSlots == 0 || coherenceSlots >= slotsPerFrame()
+                ? "one fading block per frame"
+                : effectiveCoherenceSlots() + " slots per fading block (" + fadingBlocksPerFrame() + " per frame)";
+        return String.format(java.util.Locale.ROOT, "%s %dx%d, %s, %s fading, %d bits/frame (%d symbols, %d slots), %s",
+                code.name(), transmitAntennas, receiveAntennas, modulation.cliName(), fading.cliName(),
+                frameBits, symbolsPerFrame(), slotsPerFrame(), coherence);
+    }
+}

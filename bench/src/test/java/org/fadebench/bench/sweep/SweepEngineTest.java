@@ -1,0 +1,80 @@
+package org.fadebench.bench.sweep;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.fadebench.bench.link.FrameCounters;
+import org.fadebench.bench.link.LinkSettings;
+import org.fadebench.channel.Fading;
+import org.fadebench.coding.stbc.SpaceTimeCodes;
+import org.fadebench.modem.Modulation;
+import org.junit.jupiter.api.Test;
+
+class SweepEngineTest {
+
+    private static final LinkSettings LINK = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1,
+            Fading.RAYLEIGH, 256, 0);
+
+    private static List<PointResult> run(int threads, StopRules rules) {
+        return new SweepEngine(LINK, rules, 99, threads, 0.95).run(new double[] {5, 10, 15}, p -> { });
+    }
+
+    /** Same seed, same numbers, whatever the number of threads. */
+    @Test
+    void resultsDoNotDependOnThreadCount() {
+        StopRules rules = new StopRules(50, 1_000_000);
+        List<PointResult> one = run(1, rules);
+        for (int threads : new int[] {2, 3, 8}) {
+            List<PointResult> many = run(threads, rules);
+            assertEquals(one.size(), many.size());
+            for (int i = 0; i < one.size(); i++) {
+                FrameCounters a = one.get(i).counts();
+                FrameCounters b = many.get(i).counts();
+                assertEquals(a.frames(), b.frames(), "threads " + threads);
+                assertEquals(a.frameErrors(), b.frameErrors());
+                assertEquals(a.bitErrors(), b.bitErrors());
+                assertEquals(a.symbolErrors(), b.symbolErrors());
+            }
+        }
+    }
+
+    @Test
+    void stopRules() {
+        // min-errors 0: exactly max-frames, not a whole number of batches
+        List<PointResult> exact = run(2, new StopRules(0, 1000));
+        for (PointResult r : exact) {
+            assertEquals(1000, r.counts().frames());
+        }
+        // min-errors: stops at the first batch boundary where the count is reached
+        SweepEngine e = new SweepEngine(LINK, new StopRules(30, 10_000_000), 99, 2, 0.95);
+        PointResult r = e.run(new double[] {10}, p -> { }).get(0);
+        assertTrue(r.counts().frameErrors() >= 30);
+        assertTrue(r.counts().frames() % e.batchFrames() == 0);
+        assertTrue(r.counts().frames() < 10_000_000);
+    }
+
+    /** A point with no errors at max-frames ends the sweep. */
+    @Test
+    void sweepStopsAfterErrorFreePoint() {
+        SweepEngine e = new SweepEngine(LINK, new StopRules(10, 300), 1, 2, 0.95);
+        List<PointResult> r = e.run(new double[] {40, 45, 50}, p -> { });
+        assertEquals(1, r.size());
+        assertEquals(0, r.get(0).counts().frameErrors());
+    }
+
+    @Test
+    void snrGrid() {
+        double[] g = SnrGrid.parse("0:2.5:10");
+        assertEquals(5, g.length);
+        assertEquals(7.5, g[3], 0);
+        assertEquals(3, SnrGrid.parse("10:-5:0").length);
+        assertEquals(1, SnrGrid.parse("3").length);
+        assertEquals(-1.5, SnrGrid.parse("1, -1.5")[1], 0);
+        for (String bad : new String[] {"0:2", "a:1:2", "0:0:5", "0:1:-5", "", "1,,2", "nan", "0:1e-6:100"}) {
+            IllegalArgumentException ex = org.junit.jupiter.api.Assertions.assertThrows(
+                    IllegalArgumentException.class, () -> SnrGrid.parse(bad), bad);
+            assertTrue(ex.getMessage().startsWith("--snr"), ex.getMessage());
+        }
+    }
+}
