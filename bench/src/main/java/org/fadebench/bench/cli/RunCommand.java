@@ -1,22 +1,40 @@
 package org.fadebench.bench.cli;
 
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Map;
 import java.util.concurrent.Callable;
+import java.util.function.Supplier;
 import org.fadebench.bench.link.LinkSettings;
+import org.fadebench.bench.report.Archive;
+import org.fadebench.bench.scenario.Scenario;
+import org.fadebench.bench.scenario.ScenarioException;
+import org.fadebench.bench.scenario.ScenarioLoader;
 import org.fadebench.bench.sweep.SnrGrid;
 import org.fadebench.bench.sweep.StopRules;
 import org.fadebench.channel.Fading;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.Modulation;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.OptionSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
 
-/** {@code fadebench run}: simulate one link over a sweep of SNR points. */
+/** {@code fadebench run [SCENARIO.yaml] [options]}: simulate one link over a sweep of SNR points. */
 @Command(name = "run", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Simulate one link over a sweep of SNR points; print a table and write results.csv.",
+        description = {"Simulate one link over a sweep of SNR points; print a table and write results.csv, "
+                + "results.json and scenario.yaml.",
             "SNR is the total transmitted energy per channel use over N0 at each receive antenna "
-                + "(E|h|^2 = 1, power split equally over the transmit antennas)."})
+                + "(E|h|^2 = 1, power split equally over the transmit antennas).",
+            "Options given on the command line override the scenario file."})
 final class RunCommand implements Callable<Integer> {
+
+    @Parameters(arity = "0..1", paramLabel = "SCENARIO", description = "A scenario file (YAML); see README.")
+    Path scenarioFile;
 
     @Option(names = "--code", paramLabel = "NAME", defaultValue = "none",
             description = "Space-time block code: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).",
@@ -33,10 +51,6 @@ final class RunCommand implements Callable<Integer> {
             description = "Modulation: bpsk, qpsk, 16qam, 64qam, 256qam (default: ${DEFAULT-VALUE}).")
     String modulation;
 
-    @Option(names = "--snr", paramLabel = "DB", defaultValue = "0:2:20",
-            description = "SNR points in dB: START:STEP:STOP, one value, or a list a,b,c (default: ${DEFAULT-VALUE}).")
-    String snr;
-
     @Option(names = "--fading", paramLabel = "NAME", defaultValue = "rayleigh",
             description = "Fading model: rayleigh, none (default: ${DEFAULT-VALUE}).")
     String fading;
@@ -49,6 +63,10 @@ final class RunCommand implements Callable<Integer> {
             description = "Symbol periods per fading block, a multiple of the code's slots (default: the whole frame).")
     int coherence;
 
+    @Option(names = "--snr", paramLabel = "DB", defaultValue = "0:2:20",
+            description = "SNR points in dB: START:STEP:STOP, one value, or a list a,b,c (default: ${DEFAULT-VALUE}).")
+    String snr;
+
     @Option(names = "--min-errors", paramLabel = "N", defaultValue = "100",
             description = "Frame errors to collect per point; 0 runs exactly --max-frames (default: ${DEFAULT-VALUE}).")
     long minErrors;
@@ -57,32 +75,124 @@ final class RunCommand implements Callable<Integer> {
             description = "Most frames per point (default: ${DEFAULT-VALUE}).")
     long maxFrames;
 
+    @Option(names = "--max-seconds", paramLabel = "S", defaultValue = "0",
+            description = "Most seconds per point, 0 for no limit; results then depend on the machine (default: ${DEFAULT-VALUE}).")
+    double maxSeconds;
+
+    @Option(names = "--fer-floor", paramLabel = "FER", defaultValue = "1e-6",
+            description = "Stop the sweep after the first point with FER below this (default: ${DEFAULT-VALUE}).")
+    double ferFloor;
+
+    @Option(names = "--confidence", paramLabel = "LEVEL", defaultValue = "0.95",
+            description = "Confidence level of the FER and BER intervals (default: ${DEFAULT-VALUE}).")
+    double confidence;
+
     @Option(names = "--seed", paramLabel = "N", defaultValue = "1", description = "Master seed (default: ${DEFAULT-VALUE}).")
     long seed;
 
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
     Integer threads;
 
-    @Option(names = "--confidence", paramLabel = "LEVEL", defaultValue = "0.95",
-            description = "Confidence level of the FER interval (default: ${DEFAULT-VALUE}).")
-    double confidence;
-
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "fadebench-out",
-            description = "Folder for results.csv (default: ${DEFAULT-VALUE}).")
+            description = "Folder for the outputs (default: ${DEFAULT-VALUE}).")
     String out;
 
-    @picocli.CommandLine.Spec
-    picocli.CommandLine.Model.CommandSpec spec;
+    @Option(names = "--archive", paramLabel = "FILE", description = "Also bundle the outputs into FILE.tar.xz or FILE.tar.gz.")
+    String archive;
+
+    @Option(names = "--resume", description = "Continue an interrupted run from the checkpoint in --out.")
+    boolean resume;
+
+    @Option(names = "--quiet", description = "Print nothing but errors; no progress bar.")
+    boolean quiet;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    /** A scenario given by the caller instead of a file (the built-in demo). */
+    Scenario preloaded;
 
     @Override
     public Integer call() {
-        SweepJob job = validate();
-        job.run(spec.commandLine().getOut());
-        return ExitCodes.OK;
+        Scenario scenario = loadScenario();
+        RunPlan plan;
+        try {
+            if (scenario != null) {
+                applyScenario(scenario);
+            }
+            plan = plan(scenario);
+        } catch (InvalidInputException e) {
+            throw locate(e, scenario);
+        }
+        return new SweepJob(plan, spec.commandLine().getOut()).run();
     }
 
-    /** Turns the options into a job, or throws {@link InvalidInputException} naming the option. */
-    SweepJob validate() {
+    private Scenario loadScenario() {
+        if (preloaded != null) {
+            return preloaded;
+        }
+        if (scenarioFile == null) {
+            return null;
+        }
+        try {
+            return ScenarioLoader.load(scenarioFile);
+        } catch (ScenarioException e) {
+            throw new InvalidInputException(e.getMessage());
+        }
+    }
+
+    /** Sets every option the scenario names and the command line does not. */
+    private void applyScenario(Scenario scenario) {
+        CommandLine.ParseResult parsed = spec.commandLine().getParseResult();
+        for (Map.Entry<String, Scenario.Setting> e : scenario.settings().entrySet()) {
+            String option = e.getKey();
+            if (parsed != null && parsed.hasMatchedOption(option)) {
+                continue;
+            }
+            OptionSpec o = spec.findOption(option);
+            Scenario.Setting s = e.getValue();
+            try {
+                o.setValue(convert(o.type(), s.value()));
+            } catch (NumberFormatException ex) {
+                throw new InvalidInputException(s.where(scenario.source()) + ": expected "
+                        + s.key().kind().description() + " in range, got '" + s.value() + "'");
+            }
+        }
+    }
+
+    private static Object convert(Class<?> type, String v) {
+        if (type == int.class || type == Integer.class) {
+            return Integer.valueOf(v);
+        }
+        if (type == long.class || type == Long.class) {
+            return Long.valueOf(v);
+        }
+        if (type == double.class || type == Double.class) {
+            return Double.valueOf(v);
+        }
+        if (type == boolean.class || type == Boolean.class) {
+            return Boolean.valueOf(v);
+        }
+        return v;
+    }
+
+    /** An error about an option the scenario set names the file, line and key too. */
+    private InvalidInputException locate(InvalidInputException e, Scenario scenario) {
+        String msg = e.getMessage();
+        if (scenario == null || !msg.startsWith("--")) {
+            return e;
+        }
+        String option = msg.split("[\\s:]", 2)[0];
+        Scenario.Setting s = scenario.settings().get(option);
+        CommandLine.ParseResult parsed = spec.commandLine().getParseResult();
+        if (s == null || (parsed != null && parsed.hasMatchedOption(option))) {
+            return e;
+        }
+        return new InvalidInputException(s.where(scenario.source()) + ": " + msg);
+    }
+
+    /** Turns the options into a plan, or throws {@link InvalidInputException} naming the option. */
+    RunPlan plan(Scenario scenario) {
         Modulation mod = parse("--mod", () -> Modulation.fromCliName(modulation));
         SpaceTimeCode stbc = parse("--code", () -> SpaceTimeCodes.byName(code));
         Fading fad = parse("--fading", () -> Fading.fromCliName(fading));
@@ -90,17 +200,26 @@ final class RunCommand implements Callable<Integer> {
         int bits = frameBits != null ? frameBits : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
         int nTx = tx != null ? tx : stbc.transmitAntennas();
         LinkSettings link = parse(null, () -> new LinkSettings(mod, stbc, nTx, rx, fad, bits, coherence));
-        StopRules rules = parse(null, () -> new StopRules(minErrors, maxFrames));
+        StopRules rules = parse(null, () -> new StopRules(minErrors, maxFrames, maxSeconds, ferFloor));
         int nThreads = SweepJob.threads(threads);
         if (!(confidence > 0 && confidence < 1)) {
             throw new InvalidInputException("--confidence must lie strictly between 0 and 1 (e.g. 0.95), got "
                     + confidence);
         }
-        return new SweepJob(link, snrDb, rules, seed, nThreads, confidence, SweepJob.checkOutDir(out));
+        Path archivePath = null;
+        if (archive != null) {
+            String problem = Archive.problem(archive);
+            if (problem != null) {
+                throw new InvalidInputException(problem);
+            }
+            archivePath = Path.of(archive);
+        }
+        return new RunPlan(link, snr.trim(), snrDb, rules, seed, nThreads, confidence, SweepJob.checkOutDir(out),
+                archivePath, resume, quiet, scenario);
     }
 
     /** Runs a parser; its IllegalArgumentException becomes invalid input, prefixed with the option. */
-    static <T> T parse(String option, java.util.function.Supplier<T> parser) {
+    static <T> T parse(String option, Supplier<T> parser) {
         try {
             return parser.get();
         } catch (IllegalArgumentException e) {
@@ -111,8 +230,8 @@ final class RunCommand implements Callable<Integer> {
     /** Catalogue names for the help text. */
     static final class CodeNames implements Iterable<String> {
         @Override
-        public java.util.Iterator<String> iterator() {
-            java.util.List<String> names = new java.util.ArrayList<>();
+        public Iterator<String> iterator() {
+            List<String> names = new ArrayList<>();
             for (SpaceTimeCode c : SpaceTimeCodes.all()) {
                 names.add(c.name());
             }

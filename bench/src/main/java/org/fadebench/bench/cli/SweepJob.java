@@ -5,19 +5,38 @@ import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.fadebench.bench.link.LinkSettings;
+import org.fadebench.bench.report.Archive;
+import org.fadebench.bench.report.AtomicFiles;
+import org.fadebench.bench.report.Checkpoint;
 import org.fadebench.bench.report.Numbers;
 import org.fadebench.bench.report.ResultsCsv;
+import org.fadebench.bench.report.ResultsJson;
 import org.fadebench.bench.report.ResultsTable;
 import org.fadebench.bench.sweep.PointResult;
-import org.fadebench.bench.sweep.StopRules;
+import org.fadebench.bench.sweep.PointState;
 import org.fadebench.bench.sweep.SweepEngine;
+import org.fadebench.bench.sweep.SweepOutcome;
 
-/** One validated sweep, ready to run: prints the table as it goes and writes the outputs at the end. */
-record SweepJob(LinkSettings link, double[] snrDb, StopRules rules, long seed, int threads,
-                double confidence, Path outDir) {
+/**
+ * Runs a {@link RunPlan}: prints the table as points finish, shows progress on a terminal, keeps a
+ * checkpoint, stops cleanly on Ctrl-C or SIGTERM, and writes results.csv, results.json, the
+ * effective scenario and, if asked, an archive.
+ */
+final class SweepJob {
+
+    /** Exit code after an interruption (128 + SIGINT), as shells report it. */
+    static final int INTERRUPTED = 130;
+
+    private final RunPlan plan;
+    private final PrintWriter out;
+
+    SweepJob(RunPlan plan, PrintWriter out) {
+        this.plan = plan;
+        this.out = out;
+    }
 
     /** Checks that the output folder can be used, before any simulation starts. */
     static Path checkOutDir(String out) {
@@ -37,32 +56,142 @@ record SweepJob(LinkSettings link, double[] snrDb, StopRules rules, long seed, i
         return n;
     }
 
-    List<PointResult> run(PrintWriter out) {
-        out.println("link: " + link.describe());
-        out.println("SNR convention: " + ResultsCsv.SNR_CONVENTION + "; Eb/N0 = SNR / "
-                + Numbers.db(link.bitsPerChannelUse()) + " information bits per channel use");
-        out.println(String.format(Locale.ROOT, "stop: %s frame errors or %d frames per point; seed %d; %d thread%s",
-                rules.minErrors() == 0 ? "no minimum of" : Long.toString(rules.minErrors()), rules.maxFrames(), seed,
-                threads, threads == 1 ? "" : "s"));
-        ResultsTable table = new ResultsTable(out);
-        table.header(confidence);
-        SweepEngine engine = new SweepEngine(link, rules, seed, threads, confidence);
-        List<PointResult> results = engine.run(snrDb, table::row);
-        if (results.size() < snrDb.length) {
-            out.println("stopped after " + Numbers.db(results.get(results.size() - 1).snrDb())
-                    + " dB: no frame errors in " + rules.maxFrames() + " frames; higher SNRs skipped");
+    /** Runs the sweep; returns the exit code. */
+    int run() {
+        var link = plan.link();
+        SweepEngine engine = new SweepEngine(link, plan.rules(), plan.seed(), plan.threads(), plan.confidence());
+        engine.progressMillis(250);
+        String fingerprint = Checkpoint.fingerprint(plan.numbersFingerprintText(engine.batchFrames()));
+        List<PointState> resume = plan.resume() ? readCheckpoint(fingerprint) : null;
+
+        boolean talk = !plan.quiet();
+        if (talk) {
+            out.println("link: " + link.describe());
+            out.println("SNR convention: " + ResultsCsv.SNR_CONVENTION + "; Eb/N0 = SNR / "
+                    + Numbers.db(link.bitsPerChannelUse()) + " information bits per channel use");
+            out.println(String.format(Locale.ROOT, "stop: %s frame errors or %d frames per point%s; seed %d; %d thread%s",
+                    plan.rules().minErrors() == 0 ? "no minimum of" : Long.toString(plan.rules().minErrors()),
+                    plan.rules().maxFrames(),
+                    plan.rules().maxSeconds() > 0 ? " or " + Numbers.db(plan.rules().maxSeconds()) + " s" : "",
+                    plan.seed(), plan.threads(), plan.threads() == 1 ? "" : "s"));
+            if (resume != null) {
+                long done = resume.stream().filter(PointState::done).count();
+                out.println("resuming from " + plan.outDir().resolve(Checkpoint.FILE_NAME) + " (" + done + " of "
+                        + resume.size() + " points finished)");
+            }
         }
-        Path csv = outDir.resolve("results.csv");
+        ResultsTable table = new ResultsTable(out);
+        if (talk) {
+            table.header(plan.confidence());
+        }
+        ProgressDisplay progress = ProgressDisplay.startIfTerminal(plan.snrDb(), plan.quiet());
+        long start = System.nanoTime();
+        SweepOutcome outcome;
+        try (SignalStop signals = SignalStop.install(engine::requestStop)) {
+            outcome = engine.run(plan.snrDb(), resume, new SweepEngine.Listener() {
+                private long lastCheckpoint;
+
+                @Override
+                public void pointDone(PointResult result) {
+                    if (talk) {
+                        ProgressDisplay.clearLine(progress, System.err);
+                        table.row(result);
+                    }
+                }
+
+                @Override
+                public void progress(SweepEngine.Progress p) {
+                    if (progress != null) {
+                        progress.update(p, System.nanoTime() - start);
+                    }
+                    long merged = p.states().stream().mapToLong(PointState::mergedBatches).sum();
+                    if (merged != lastCheckpoint) {
+                        lastCheckpoint = merged;
+                        writeCheckpoint(fingerprint, p.states());
+                    }
+                }
+            });
+        } finally {
+            if (progress != null) {
+                progress.close();
+            }
+        }
+        return finish(outcome, fingerprint);
+    }
+
+    private int finish(SweepOutcome outcome, String fingerprint) {
+        boolean interrupted = outcome.interrupted();
+        if (plan.quiet() == false) {
+            for (PointResult r : outcome.results()) {
+                if (!r.complete()) {
+                    out.println("partial: " + Numbers.db(r.snrDb()) + " dB after " + r.counts().frames() + " frames");
+                }
+            }
+            if (outcome.stopReason() != null) {
+                out.println(outcome.stopReason());
+            }
+        }
+        Path dir = plan.outDir();
+        List<Path> written = new ArrayList<>();
         try {
-            ResultsCsv.write(csv, link, seed, confidence, results);
+            Path csv = dir.resolve("results.csv");
+            ResultsCsv.write(csv, plan.link(), plan.seed(), plan.confidence(), outcome.results(), interrupted);
+            written.add(csv);
+            Path json = dir.resolve("results.json");
+            double seconds = outcome.nanos() * 1e-9;
+            ResultsJson.Run run = new ResultsJson.Run(plan.settings(), plan.link(), plan.seed(), outcome.results(),
+                    !interrupted, outcome.stopReason(), outcome.framesSimulated(), seconds, plan.threads());
+            ResultsJson.write(json, run);
+            written.add(json);
+            Path scenario = dir.resolve("scenario.yaml");
+            AtomicFiles.writeString(scenario, plan.scenario() != null ? plan.scenario().text() : plan.asScenarioYaml());
+            written.add(scenario);
+            if (interrupted) {
+                Checkpoint.write(dir, fingerprint, outcome.states());
+            } else {
+                Checkpoint.delete(dir);
+            }
+            if (plan.archive() != null && !interrupted) {
+                Archive.write(plan.archive(), written);
+                written.add(plan.archive());
+            }
+            if (!plan.quiet()) {
+                out.println(String.format(Locale.ROOT, "simulated %d frames in %.2f s: %.2f M symbols/s on %d thread%s",
+                        outcome.framesSimulated(), seconds, run.symbolsPerSecond() * 1e-6, plan.threads(),
+                        plan.threads() == 1 ? "" : "s"));
+                for (Path p : written) {
+                    out.println("wrote " + p);
+                }
+                if (interrupted) {
+                    out.println("interrupted: partial results written; run the same command with --resume to finish");
+                }
+            }
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
-        double seconds = engine.nanosSimulating() * 1e-9;
-        double symbolsPerSecond = engine.framesSimulated() * (double) link.symbolsPerFrame() / seconds;
-        out.println(String.format(Locale.ROOT, "simulated %d frames in %.2f s: %.2f M symbols/s on %d thread%s",
-                engine.framesSimulated(), seconds, symbolsPerSecond * 1e-6, threads, threads == 1 ? "" : "s"));
-        out.println("wrote " + csv);
-        return results;
+        out.flush();
+        return interrupted ? INTERRUPTED : ExitCodes.OK;
+    }
+
+    private List<PointState> readCheckpoint(String fingerprint) {
+        try {
+            List<PointState> s = Checkpoint.read(plan.outDir(), fingerprint, plan.snrDb().length);
+            if (s == null && !plan.quiet()) {
+                out.println("no checkpoint in " + plan.outDir() + "; starting from the beginning");
+            }
+            return s;
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException("--resume: " + e.getMessage());
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    private void writeCheckpoint(String fingerprint, List<PointState> states) {
+        try {
+            Checkpoint.write(plan.outDir(), fingerprint, states);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
     }
 }

@@ -9,6 +9,7 @@ public final class FrameCounters {
     private long bitErrors;
     private long symbols;
     private long symbolErrors;
+    private double bitErrorsSquared;
 
     /** Records one frame. */
     public void addFrame(int frameBits, int frameBitErrors, int frameSymbols, int frameSymbolErrors) {
@@ -17,6 +18,7 @@ public final class FrameCounters {
         bitErrors += frameBitErrors;
         symbols += frameSymbols;
         symbolErrors += frameSymbolErrors;
+        bitErrorsSquared += (double) frameBitErrors * frameBitErrors;
         if (frameBitErrors > 0) {
             frameErrors++;
         }
@@ -29,6 +31,28 @@ public final class FrameCounters {
         bitErrors += o.bitErrors;
         symbols += o.symbols;
         symbolErrors += o.symbolErrors;
+        bitErrorsSquared += o.bitErrorsSquared;
+    }
+
+    /** Restores counts saved in a checkpoint. */
+    public static FrameCounters of(long frames, long frameErrors, long bits, long bitErrors, long symbols,
+                                   long symbolErrors, double bitErrorsSquared) {
+        FrameCounters c = new FrameCounters();
+        c.frames = frames;
+        c.frameErrors = frameErrors;
+        c.bits = bits;
+        c.bitErrors = bitErrors;
+        c.symbols = symbols;
+        c.symbolErrors = symbolErrors;
+        c.bitErrorsSquared = bitErrorsSquared;
+        return c;
+    }
+
+    /** A copy of these counts. */
+    public FrameCounters copy() {
+        FrameCounters c = new FrameCounters();
+        c.add(this);
+        return c;
     }
 
     public long frames() {
@@ -53,6 +77,11 @@ public final class FrameCounters {
 
     public long symbolErrors() {
         return symbolErrors;
+    }
+
+    /** Σ over frames of (bit errors in the frame)², for the clustered BER interval. */
+    public double bitErrorsSquared() {
+        return bitErrorsSquared;
     }
 
     public double fer() {

@@ -27,7 +27,7 @@ class LinkTheoryTest {
 
     private static FrameCounters simulate(LinkSettings link, double snrDb, long frames) {
         SweepEngine engine = new SweepEngine(link, new StopRules(0, frames), 20261201L, 2, 0.95);
-        PointResult r = engine.run(new double[] {snrDb}, p -> { }).get(0);
+        PointResult r = engine.run(new double[] {snrDb}, p -> { }).results().get(0);
         return r.counts();
     }
 
@@ -145,7 +145,7 @@ class LinkTheoryTest {
 
     private static void assertSlope(LinkSettings l, int diversity) {
         SweepEngine engine = new SweepEngine(l, new StopRules(150, 20_000_000), 7, 2, 0.95);
-        var r = engine.run(new double[] {15, 25}, p -> { });
+        var r = engine.run(new double[] {15, 25}, p -> { }).results();
         double slope = Math.log10(r.get(0).counts().fer() / r.get(1).counts().fer());
         assertEquals(diversity, slope, 0.25, l.describe());
     }

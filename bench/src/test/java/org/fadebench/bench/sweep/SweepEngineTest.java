@@ -17,7 +17,7 @@ class SweepEngineTest {
             Fading.RAYLEIGH, 256, 0);
 
     private static List<PointResult> run(int threads, StopRules rules) {
-        return new SweepEngine(LINK, rules, 99, threads, 0.95).run(new double[] {5, 10, 15}, p -> { });
+        return new SweepEngine(LINK, rules, 99, threads, 0.95).run(new double[] {5, 10, 15}, p -> { }).results();
     }
 
     /** Same seed, same numbers, whatever the number of threads. */
@@ -48,7 +48,7 @@ class SweepEngineTest {
         }
         // min-errors: stops at the first batch boundary where the count is reached
         SweepEngine e = new SweepEngine(LINK, new StopRules(30, 10_000_000), 99, 2, 0.95);
-        PointResult r = e.run(new double[] {10}, p -> { }).get(0);
+        PointResult r = e.run(new double[] {10}, p -> { }).results().get(0);
         assertTrue(r.counts().frameErrors() >= 30);
         assertTrue(r.counts().frames() % e.batchFrames() == 0);
         assertTrue(r.counts().frames() < 10_000_000);
@@ -58,7 +58,7 @@ class SweepEngineTest {
     @Test
     void sweepStopsAfterErrorFreePoint() {
         SweepEngine e = new SweepEngine(LINK, new StopRules(10, 300), 1, 2, 0.95);
-        List<PointResult> r = e.run(new double[] {40, 45, 50}, p -> { });
+        List<PointResult> r = e.run(new double[] {40, 45, 50}, p -> { }).results();
         assertEquals(1, r.size());
         assertEquals(0, r.get(0).counts().frameErrors());
     }

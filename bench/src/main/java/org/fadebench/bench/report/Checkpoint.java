@@ -1,0 +1,125 @@
+package org.fadebench.bench.report;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.List;
+import org.fadebench.bench.link.FrameCounters;
+import org.fadebench.bench.sweep.PointState;
+
+/**
+ * The sweep's checkpoint, {@code DIR/checkpoint.json}: the reproducible state of every point
+ * (batches merged in order, their counts, finished or not) and a fingerprint of every setting that
+ * changes the numbers. A resumed run continues each point from its merged batches, so it ends with
+ * the same results as a run that was never interrupted.
+ */
+public final class Checkpoint {
+
+    public static final String FILE_NAME = "checkpoint.json";
+    private static final String FORMAT = "fadebench-checkpoint-1";
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    private Checkpoint() {
+    }
+
+    /** SHA-256 of a description of every setting that changes the numbers. */
+    public static String fingerprint(String settings) {
+        try {
+            MessageDigest md = MessageDigest.getInstance("SHA-256");
+            return HexFormat.of().formatHex(md.digest(settings.getBytes(StandardCharsets.UTF_8)));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    public static void write(Path dir, String fingerprint, List<PointState> states) throws IOException {
+        ObjectNode root = JSON.createObjectNode();
+        root.put("format", FORMAT);
+        root.put("fingerprint", fingerprint);
+        ArrayNode points = root.putArray("points");
+        for (PointState s : states) {
+            FrameCounters c = s.counts();
+            ObjectNode p = points.addObject();
+            p.put("merged_batches", s.mergedBatches());
+            p.put("done", s.done());
+            p.put("frames", c.frames());
+            p.put("frame_errors", c.frameErrors());
+            p.put("bits", c.bits());
+            p.put("bit_errors", c.bitErrors());
+            p.put("symbols", c.symbols());
+            p.put("symbol_errors", c.symbolErrors());
+            p.put("bit_errors_squared", c.bitErrorsSquared());
+        }
+        byte[] bytes = JSON.writerWithDefaultPrettyPrinter().writeValueAsBytes(root);
+        AtomicFiles.write(dir.resolve(FILE_NAME), out -> out.write(bytes));
+    }
+
+    /**
+     * Reads the checkpoint in {@code dir}, checked against the fingerprint of the current settings.
+     *
+     * @return the states, or null when there is no checkpoint
+     * @throws IllegalArgumentException when the file is damaged or belongs to other settings
+     */
+    public static List<PointState> read(Path dir, String fingerprint, int points) throws IOException {
+        Path file = dir.resolve(FILE_NAME);
+        if (!Files.exists(file)) {
+            return null;
+        }
+        String where = file + ": ";
+        JsonNode root;
+        try {
+            if (Files.size(file) > 64L << 20) {
+                throw new IllegalArgumentException(where + "too large to be a checkpoint");
+            }
+            root = JSON.readTree(Files.readAllBytes(file));
+        } catch (JsonProcessingException e) {
+            throw new IllegalArgumentException(where + "damaged checkpoint (not JSON); delete it or run without --resume");
+        }
+        if (root == null || !FORMAT.equals(root.path("format").asText())) {
+            throw new IllegalArgumentException(where + "not a fadebench checkpoint; delete it or run without --resume");
+        }
+        if (!fingerprint.equals(root.path("fingerprint").asText())) {
+            throw new IllegalArgumentException(where + "written for different settings; --resume needs the same "
+                    + "link, SNR points, stop rules and seed (run without --resume to start over)");
+        }
+        JsonNode list = root.path("points");
+        if (!list.isArray() || list.size() != points) {
+            throw new IllegalArgumentException(where + "damaged checkpoint (wrong number of points)");
+        }
+        List<PointState> states = new ArrayList<>();
+        for (JsonNode p : list) {
+            long merged = whole(p, "merged_batches", where);
+            FrameCounters c = FrameCounters.of(whole(p, "frames", where), whole(p, "frame_errors", where),
+                    whole(p, "bits", where), whole(p, "bit_errors", where), whole(p, "symbols", where),
+                    whole(p, "symbol_errors", where), p.path("bit_errors_squared").asDouble(-1));
+            if (c.frameErrors() > c.frames() || c.bitErrors() > c.bits() || c.bitErrorsSquared() < 0
+                    || !p.path("done").isBoolean()) {
+                throw new IllegalArgumentException(where + "damaged checkpoint (inconsistent counts)");
+            }
+            states.add(new PointState(merged, c, p.path("done").asBoolean()));
+        }
+        return states;
+    }
+
+    private static long whole(JsonNode p, String field, String where) {
+        JsonNode n = p.path(field);
+        if (!n.canConvertToLong() || !n.isIntegralNumber() || n.asLong() < 0) {
+            throw new IllegalArgumentException(where + "damaged checkpoint (" + field + ")");
+        }
+        return n.asLong();
+    }
+
+    public static void delete(Path dir) throws IOException {
+        Files.deleteIfExists(dir.resolve(FILE_NAME));
+    }
+}

@@ -1,0 +1,91 @@
+package org.fadebench.bench.report;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import org.fadebench.bench.link.FrameCounters;
+import org.fadebench.bench.link.LinkSettings;
+import org.fadebench.bench.sweep.PointResult;
+
+/**
+ * Writes {@code results.json}: the settings, seed and versions, every point with its intervals and
+ * time, and the run's throughput. Unlike results.csv this file holds timing, so it differs between
+ * runs.
+ */
+public final class ResultsJson {
+
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    private ResultsJson() {
+    }
+
+    /** Everything results.json says about one run. */
+    public record Run(Map<String, Object> settings, LinkSettings link, long seed, List<PointResult> results,
+                      boolean complete, String stopReason, long framesSimulated, double seconds, int threads) {
+
+        /** Data QAM symbols simulated per wall-clock second (speculative batches included). */
+        public double symbolsPerSecond() {
+            return seconds > 0 ? framesSimulated * (double) link.symbolsPerFrame() / seconds : 0;
+        }
+    }
+
+    public static ObjectNode tree(Run run) {
+        ObjectNode root = JSON.createObjectNode();
+        root.put("tool", "fadebench");
+        String version = ResultsJson.class.getPackage().getImplementationVersion();
+        root.put("version", version == null ? "development" : version);
+        root.put("java", System.getProperty("java.version"));
+        root.put("complete", run.complete());
+        if (run.stopReason() == null) {
+            root.putNull("stop_reason");
+        } else {
+            root.put("stop_reason", run.stopReason());
+        }
+        ObjectNode settings = root.putObject("settings");
+        run.settings().forEach((k, v) -> settings.set(k, JSON.valueToTree(v)));
+        root.put("seed", run.seed());
+        root.put("link", run.link().describe());
+        root.put("snr_convention", ResultsCsv.SNR_CONVENTION);
+        root.put("bits_per_channel_use", run.link().bitsPerChannelUse());
+        ArrayNode points = root.putArray("points");
+        for (PointResult r : run.results()) {
+            FrameCounters c = r.counts();
+            ObjectNode p = points.addObject();
+            p.put("snr_db", r.snrDb());
+            p.put("ebn0_db", r.ebN0Db());
+            p.put("complete", r.complete());
+            p.put("frames", c.frames());
+            p.put("frame_errors", c.frameErrors());
+            p.put("fer", c.fer());
+            p.put("fer_ci_low", r.ferLow());
+            p.put("fer_ci_high", r.ferHigh());
+            p.put("bits", c.bits());
+            p.put("bit_errors", c.bitErrors());
+            p.put("ber", c.ber());
+            p.put("ber_ci_low", r.berLow());
+            p.put("ber_ci_high", r.berHigh());
+            p.put("symbols", c.symbols());
+            p.put("symbol_errors", c.symbolErrors());
+            p.put("ser", c.ser());
+            p.put("seconds", r.seconds());
+        }
+        root.put("symbols_per_second", run.symbolsPerSecond());
+        ObjectNode timing = root.putObject("timing");
+        timing.put("seconds", run.seconds());
+        timing.put("frames_simulated", run.framesSimulated());
+        timing.put("threads", run.threads());
+        return root;
+    }
+
+    public static void write(Path file, Run run) throws IOException {
+        byte[] bytes = JSON.writerWithDefaultPrettyPrinter().writeValueAsBytes(tree(run));
+        AtomicFiles.write(file, out -> {
+            out.write(bytes);
+            out.write('\n');
+        });
+    }
+}

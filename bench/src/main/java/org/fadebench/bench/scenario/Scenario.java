@@ -1,0 +1,27 @@
+package org.fadebench.bench.scenario;
+
+import java.util.Collections;
+import java.util.Map;
+
+/**
+ * A loaded scenario: for each option it sets, the value as the command line would spell it and
+ * where in the file it came from.
+ *
+ * @param source the file name (or built-in name) for messages
+ * @param text   the file's text, kept for archives
+ */
+public record Scenario(String source, String text, Map<String, Setting> settings) {
+
+    /** One value: the option it sets, its text, and its place in the file. */
+    public record Setting(ScenarioKey key, String value, int line) {
+
+        /** "FILE line N, key K" for messages. */
+        public String where(String source) {
+            return source + " line " + line + ", key " + key.path();
+        }
+    }
+
+    public Scenario {
+        settings = Collections.unmodifiableMap(settings);
+    }
+}

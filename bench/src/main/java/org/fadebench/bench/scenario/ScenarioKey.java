@@ -1,0 +1,33 @@
+package org.fadebench.bench.scenario;
+
+/**
+ * One key of the scenario schema: its section and name in the file, the command-line option it
+ * stands for, and the kind of value it takes.
+ */
+public record ScenarioKey(String section, String name, String option, Kind kind, String help) {
+
+    /** The kinds of value a key takes. */
+    public enum Kind {
+        TEXT("text"),
+        WHOLE("a whole number"),
+        NUMBER("a number"),
+        /** A dB value, a START:STEP:STOP text, or a list of numbers. */
+        SNR("a number, START:STEP:STOP, or a list of numbers"),
+        FLAG("true or false");
+
+        private final String description;
+
+        Kind(String description) {
+            this.description = description;
+        }
+
+        public String description() {
+            return description;
+        }
+    }
+
+    /** {@code section.name}, as error messages show it. */
+    public String path() {
+        return section + "." + name;
+    }
+}

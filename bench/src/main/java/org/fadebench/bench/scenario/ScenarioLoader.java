@@ -1,0 +1,185 @@
+package org.fadebench.bench.scenario;
+
+import java.io.IOException;
+import java.io.StringReader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import org.yaml.snakeyaml.LoaderOptions;
+import org.yaml.snakeyaml.Yaml;
+import org.yaml.snakeyaml.constructor.SafeConstructor;
+import org.yaml.snakeyaml.error.MarkedYAMLException;
+import org.yaml.snakeyaml.error.YAMLException;
+import org.yaml.snakeyaml.nodes.MappingNode;
+import org.yaml.snakeyaml.nodes.Node;
+import org.yaml.snakeyaml.nodes.NodeTuple;
+import org.yaml.snakeyaml.nodes.ScalarNode;
+import org.yaml.snakeyaml.nodes.SequenceNode;
+
+/**
+ * Reads scenario files: YAML with the sections and keys of {@link ScenarioSchema}. The file is
+ * composed into plain nodes by SnakeYAML's safe loader (no types are ever constructed from the
+ * file), then walked here so every error can name the file, the line and the key, and suggest
+ * the closest valid key.
+ */
+public final class ScenarioLoader {
+
+    /** Largest scenario file read, in bytes. */
+    static final long MAX_BYTES = 1 << 20;
+
+    private ScenarioLoader() {
+    }
+
+    /** Loads a file; {@link ScenarioException} for anything wrong with it. */
+    public static Scenario load(Path file) {
+        String name = file.toString();
+        try {
+            if (!Files.isRegularFile(file)) {
+                throw new ScenarioException(name + ": no such scenario file");
+            }
+            if (Files.size(file) > MAX_BYTES) {
+                throw new ScenarioException(name + ": larger than " + MAX_BYTES + " bytes; not a scenario file");
+            }
+            return parse(name, Files.readString(file, StandardCharsets.UTF_8));
+        } catch (java.nio.charset.MalformedInputException e) {
+            throw new ScenarioException(name + ": not UTF-8 text");
+        } catch (IOException e) {
+            throw new ScenarioException(name + ": cannot be read (" + e.getMessage() + ")");
+        }
+    }
+
+    /** Parses scenario text; {@code name} is used in messages. */
+    public static Scenario parse(String name, String text) {
+        LoaderOptions options = new LoaderOptions();
+        options.setAllowDuplicateKeys(false);
+        options.setMaxAliasesForCollections(10);
+        options.setCodePointLimit((int) MAX_BYTES);
+        Yaml yaml = new Yaml(new SafeConstructor(options));
+        Node root;
+        try {
+            root = yaml.compose(new StringReader(text));
+        } catch (MarkedYAMLException e) {
+            int line = e.getProblemMark() != null ? e.getProblemMark().getLine() + 1 : 0;
+            throw new ScenarioException(name + " line " + line + ": not valid YAML: " + e.getProblem());
+        } catch (YAMLException e) {
+            throw new ScenarioException(name + ": not valid YAML: " + e.getMessage());
+        }
+        Map<String, Scenario.Setting> settings = new LinkedHashMap<>();
+        if (root == null) {
+            return new Scenario(name, text, settings);
+        }
+        MappingNode top = mapping(root, name, "the top level", "sections " + String.join(", ", ScenarioSchema.sections()));
+        for (NodeTuple t : top.getValue()) {
+            String section = keyText(t.getKeyNode(), name);
+            int line = line(t.getKeyNode());
+            if (!ScenarioSchema.sections().contains(section)) {
+                throw new ScenarioException(name + " line " + line + ": unknown section '" + section + "'"
+                        + suggest(section, ScenarioSchema.sections()) + "; valid sections: "
+                        + String.join(", ", ScenarioSchema.sections()));
+            }
+            MappingNode body = mapping(t.getValueNode(), name, "section '" + section + "'",
+                    "keys " + String.join(", ", ScenarioSchema.names(section)));
+            for (NodeTuple kv : body.getValue()) {
+                String key = keyText(kv.getKeyNode(), name);
+                int keyLine = line(kv.getKeyNode());
+                Optional<ScenarioKey> k = ScenarioSchema.find(section, key);
+                if (k.isEmpty()) {
+                    throw new ScenarioException(name + " line " + keyLine + ": unknown key '" + section + "." + key + "'"
+                            + suggest(key, ScenarioSchema.names(section)) + "; valid keys in " + section + ": "
+                            + String.join(", ", ScenarioSchema.names(section)));
+                }
+                String value = value(k.get(), kv.getValueNode(), name);
+                settings.put(k.get().option(), new Scenario.Setting(k.get(), value, line(kv.getValueNode())));
+            }
+        }
+        return new Scenario(name, text, settings);
+    }
+
+    private static String suggest(String word, List<String> valid) {
+        return ScenarioSchema.closest(word, valid).map(s -> " (did you mean '" + s + "'?)").orElse("");
+    }
+
+    private static MappingNode mapping(Node node, String name, String what, String expected) {
+        if (node instanceof MappingNode m) {
+            return m;
+        }
+        throw new ScenarioException(name + " line " + line(node) + ": " + what + " must be a mapping of "
+                + expected);
+    }
+
+    private static String keyText(Node node, String name) {
+        if (node instanceof ScalarNode s) {
+            return s.getValue();
+        }
+        throw new ScenarioException(name + " line " + line(node) + ": keys must be plain words");
+    }
+
+    private static int line(Node node) {
+        return node.getStartMark() == null ? 0 : node.getStartMark().getLine() + 1;
+    }
+
+    /** The value as the command line would spell it, checked against the key's kind. */
+    private static String value(ScenarioKey key, Node node, String name) {
+        String where = name + " line " + line(node) + ", key " + key.path() + ": ";
+        if (node instanceof SequenceNode seq && key.kind() == ScenarioKey.Kind.SNR) {
+            List<String> parts = new ArrayList<>();
+            for (Node item : seq.getValue()) {
+                if (!(item instanceof ScalarNode s)) {
+                    throw new ScenarioException(where + "expected " + key.kind().description() + ", got a nested structure");
+                }
+                parts.add(number(s.getValue(), where, key));
+            }
+            if (parts.isEmpty()) {
+                throw new ScenarioException(where + "the list of SNR points is empty");
+            }
+            return String.join(",", parts);
+        }
+        if (!(node instanceof ScalarNode s)) {
+            throw new ScenarioException(where + "expected " + key.kind().description() + ", got a "
+                    + (node instanceof SequenceNode ? "list" : "mapping"));
+        }
+        String v = s.getValue().trim();
+        switch (key.kind()) {
+            case WHOLE:
+                try {
+                    Long.parseLong(v);
+                } catch (NumberFormatException e) {
+                    throw new ScenarioException(where + "expected " + key.kind().description() + ", got '" + v + "'");
+                }
+                return v;
+            case NUMBER:
+                return number(v, where, key);
+            case FLAG:
+                String f = v.toLowerCase(Locale.ROOT);
+                if (!f.equals("true") && !f.equals("false")) {
+                    throw new ScenarioException(where + "expected true or false, got '" + v + "'");
+                }
+                return f;
+            case SNR:
+            case TEXT:
+            default:
+                if (v.isEmpty()) {
+                    throw new ScenarioException(where + "expected " + key.kind().description() + ", got nothing");
+                }
+                return v;
+        }
+    }
+
+    private static String number(String v, String where, ScenarioKey key) {
+        try {
+            double d = Double.parseDouble(v.trim());
+            if (!Double.isFinite(d)) {
+                throw new NumberFormatException();
+            }
+            return v.trim();
+        } catch (NumberFormatException e) {
+            throw new ScenarioException(where + "expected " + key.kind().description() + ", got '" + v + "'");
+        }
+    }
+}
