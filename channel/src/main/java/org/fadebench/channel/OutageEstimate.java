@@ -1,0 +1,94 @@
+package org.fadebench.channel;
+
+import org.apache.commons.math3.stat.interval.ConfidenceInterval;
+import org.apache.commons.math3.stat.interval.IntervalUtils;
+
+/**
+ * An outage probability, either exact (from a closed form; no draws, the interval is the point)
+ * or counted over independent channel draws, with a Wilson score interval (E. B. Wilson,
+ * "Probable inference, the law of succession, and statistical inference", J. Amer. Statist.
+ * Assoc. 22, 1927; computed with Commons Math's {@code IntervalUtils}).
+ */
+public final class OutageEstimate {
+
+    private final double probability;
+    private final int outages;
+    private final int draws;
+
+    private OutageEstimate(double probability, int outages, int draws) {
+        this.probability = probability;
+        this.outages = outages;
+        this.draws = draws;
+    }
+
+    /** An exact probability. */
+    public static OutageEstimate exact(double probability) {
+        if (!(probability >= 0.0 && probability <= 1.0)) {
+            throw new IllegalArgumentException("probability must be in [0, 1], got " + probability);
+        }
+        return new OutageEstimate(probability, 0, 0);
+    }
+
+    /** {@code outages} outages counted in {@code draws} independent draws. */
+    public static OutageEstimate counted(int outages, int draws) {
+        if (draws < 1 || outages < 0 || outages > draws) {
+            throw new IllegalArgumentException(
+                    "need 1 <= draws and 0 <= outages <= draws, got " + outages + " of " + draws);
+        }
+        return new OutageEstimate((double) outages / draws, outages, draws);
+    }
+
+    /** The exact value, or the fraction of draws in outage. */
+    public double probability() {
+        return probability;
+    }
+
+    /** Draws in outage (0 when exact). */
+    public int outages() {
+        return outages;
+    }
+
+    /** Number of channel draws (0 when exact). */
+    public int draws() {
+        return draws;
+    }
+
+    public boolean isExact() {
+        return draws == 0;
+    }
+
+    /** Lower end of the 95 % interval. */
+    public double lower() {
+        return lower(0.95);
+    }
+
+    /** Upper end of the 95 % interval. */
+    public double upper() {
+        return upper(0.95);
+    }
+
+    /** Lower end of the Wilson interval at {@code confidence} in (0, 1); the value itself when exact. */
+    public double lower(double confidence) {
+        return isExact() ? probability : Math.max(0.0, wilson(confidence).getLowerBound());
+    }
+
+    /** Upper end of the Wilson interval at {@code confidence} in (0, 1); the value itself when exact. */
+    public double upper(double confidence) {
+        return isExact() ? probability : Math.min(1.0, wilson(confidence).getUpperBound());
+    }
+
+    private ConfidenceInterval wilson(double confidence) {
+        if (!(confidence > 0.0 && confidence < 1.0)) {
+            throw new IllegalArgumentException("confidence must be in (0, 1), got " + confidence);
+        }
+        return IntervalUtils.getWilsonScoreInterval(draws, outages, confidence);
+    }
+
+    @Override
+    public String toString() {
+        if (isExact()) {
+            return "outage " + probability + " (exact)";
+        }
+        return "outage " + probability + " [" + lower() + ", " + upper() + "] from " + outages + "/" + draws;
+    }
+}
