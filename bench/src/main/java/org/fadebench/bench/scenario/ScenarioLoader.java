@@ -74,10 +74,15 @@ public final class ScenarioLoader {
         if (root == null) {
             return new Scenario(name, text, settings);
         }
+        rejectTags(root, name);
         MappingNode top = mapping(root, name, "the top level", "sections " + String.join(", ", ScenarioSchema.sections()));
+        java.util.Set<String> seenSections = new java.util.HashSet<>();
         for (NodeTuple t : top.getValue()) {
             String section = keyText(t.getKeyNode(), name);
             int line = line(t.getKeyNode());
+            if (!seenSections.add(section)) {
+                throw new ScenarioException(name + " line " + line + ": section '" + section + "' appears twice");
+            }
             if (!ScenarioSchema.sections().contains(section)) {
                 throw new ScenarioException(name + " line " + line + ": unknown section '" + section + "'"
                         + suggest(section, ScenarioSchema.sections()) + "; valid sections: "
@@ -85,9 +90,14 @@ public final class ScenarioLoader {
             }
             MappingNode body = mapping(t.getValueNode(), name, "section '" + section + "'",
                     "keys " + String.join(", ", ScenarioSchema.names(section)));
+            java.util.Set<String> seen = new java.util.HashSet<>();
             for (NodeTuple kv : body.getValue()) {
                 String key = keyText(kv.getKeyNode(), name);
                 int keyLine = line(kv.getKeyNode());
+                if (!seen.add(key)) {
+                    throw new ScenarioException(name + " line " + keyLine + ": key '" + section + "." + key
+                            + "' appears twice");
+                }
                 Optional<ScenarioKey> k = ScenarioSchema.find(section, key);
                 if (k.isEmpty()) {
                     throw new ScenarioException(name + " line " + keyLine + ": unknown key '" + section + "." + key + "'"
@@ -100,6 +110,29 @@ public final class ScenarioLoader {
         }
         return new Scenario(name, text, settings);
     }
+
+    /** Only the standard YAML types are allowed: no tags that could name a class or anything else. */
+    private static void rejectTags(Node node, String name) {
+        String tag = node.getTag().getValue();
+        boolean standard = tag.startsWith("tag:yaml.org,2002:") && STANDARD_TAGS.contains(tag.substring(18));
+        if (!standard) {
+            throw new ScenarioException(name + " line " + line(node) + ": YAML tags are not allowed ("
+                    + tag.replace("tag:yaml.org,2002:", "!!") + ")");
+        }
+        if (node instanceof MappingNode m) {
+            for (NodeTuple t : m.getValue()) {
+                rejectTags(t.getKeyNode(), name);
+                rejectTags(t.getValueNode(), name);
+            }
+        } else if (node instanceof SequenceNode q) {
+            for (Node n : q.getValue()) {
+                rejectTags(n, name);
+            }
+        }
+    }
+
+    private static final java.util.Set<String> STANDARD_TAGS =
+            java.util.Set.of("str", "int", "float", "bool", "null", "seq", "map");
 
     private static String suggest(String word, List<String> valid) {
         return ScenarioSchema.closest(word, valid).map(s -> " (did you mean '" + s + "'?)").orElse("");

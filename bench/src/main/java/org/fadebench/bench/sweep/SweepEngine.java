@@ -201,6 +201,9 @@ public final class SweepEngine {
         }
 
         synchronized Task next() {
+            if (stopRequested) {
+                interrupted = true;
+            }
             if (interrupted) {
                 return null;
             }

@@ -48,4 +48,29 @@ class BinomialIntervalTest {
             }
         }
     }
+
+    /**
+     * Limits of the clustered BER interval (Korn and Graubard 1998 effective sample size): one bit
+     * per frame is plain Clopper–Pearson over bits; all errors packed into whole frames (each erroneous
+     * frame entirely wrong) makes the frames the trials, i.e. the FER interval.
+     */
+    @Test
+    void clusteredBerLimits() {
+        double[] bits = BinomialInterval.clopperPearson(37, 5000, 0.95);
+        double[] oneBitFrames = BinomialInterval.clusteredBer(5000, 1, 37, 37, 0.95);
+        assertEquals(bits[0], oneBitFrames[0], 1e-12);
+        assertEquals(bits[1], oneBitFrames[1], 1e-12);
+        // 20 of 1000 frames of 64 bits entirely wrong: BER = FER = 0.02
+        double[] frames = BinomialInterval.clopperPearson(20, 1000, 0.95);
+        double[] packed = BinomialInterval.clusteredBer(1000, 64, 20 * 64, 20.0 * 64 * 64, 0.95);
+        assertEquals(frames[0], packed[0], 1e-9);
+        assertEquals(frames[1], packed[1], 1e-9);
+        // no errors: the frames are the trials
+        assertEquals(BinomialInterval.clopperPearson(0, 1000, 0.95)[1],
+                BinomialInterval.clusteredBer(1000, 64, 0, 0, 0.95)[1], 1e-12);
+        // independent bits spread one per frame: design effect near 1, close to the bit interval
+        double[] spread = BinomialInterval.clusteredBer(1000, 64, 50, 50, 0.95);
+        double[] asBits = BinomialInterval.clopperPearson(50, 64000, 0.95);
+        assertEquals(asBits[1], spread[1], 0.02 * asBits[1]);
+    }
 }

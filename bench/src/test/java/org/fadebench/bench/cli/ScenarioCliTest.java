@@ -1,0 +1,148 @@
+package org.fadebench.bench.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.commons.compress.archivers.tar.TarArchiveEntry;
+import org.apache.commons.compress.archivers.tar.TarArchiveInputStream;
+import org.apache.commons.compress.compressors.CompressorStreamFactory;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class ScenarioCliTest {
+
+    @TempDir
+    Path tmp;
+
+    private Path scenario(String text) throws IOException {
+        return Files.writeString(tmp.resolve("s.yaml"), text);
+    }
+
+    private static final String SMALL = String.join("\n",
+            "link:",
+            "  code: alamouti",
+            "  rx: 2",
+            "  frame_bits: 128",
+            "sweep:",
+            "  snr_db: [2, 6]",
+            "  min_errors: 20",
+            "  seed: 3",
+            "");
+
+    @Test
+    void scenarioRunsAndCommandLineOverrides() throws IOException {
+        Path s = scenario(SMALL);
+        Path a = tmp.resolve("a");
+        CliTest.Outcome o = CliTest.run("run", s.toString(), "--out", a.toString(), "--rx", "1");
+        assertEquals(0, o.code(), o.err());
+        assertTrue(o.out().contains("alamouti 2x1"), "--rx 1 overrides rx: 2 — " + o.out());
+        String csv = Files.readString(a.resolve("results.csv"));
+        assertTrue(csv.contains("\n2,") && csv.contains("\n6,"), csv);
+        assertEquals(SMALL, Files.readString(a.resolve("scenario.yaml")), "the scenario is kept with the results");
+    }
+
+    /** The effective scenario written by a plain run reproduces the run. */
+    @Test
+    void writtenScenarioReproducesTheRun() throws IOException {
+        Path a = tmp.resolve("a");
+        Path b = tmp.resolve("b");
+        assertEquals(0, CliTest.run("run", "--code", "alamouti", "--snr", "3,7", "--min-errors", "20",
+                "--seed", "9", "--out", a.toString()).code());
+        CliTest.Outcome o = CliTest.run("run", a.resolve("scenario.yaml").toString(), "--out", b.toString());
+        assertEquals(0, o.code(), o.err());
+        assertEquals(Files.readString(a.resolve("results.csv")), Files.readString(b.resolve("results.csv")));
+    }
+
+    @Test
+    void outOfRangeValueNamesFileLineAndKey() throws IOException {
+        Path s = scenario("link:\n  code: alamouti\n  rx: 0\n");
+        CliTest.Outcome o = CliTest.run("run", s.toString(), "--out", tmp.resolve("x").toString());
+        assertEquals(2, o.code());
+        assertEquals("fadebench run: " + s + " line 3, key link.rx: --rx must be a positive number of receive "
+                + "antennas, got 0", o.err().trim());
+        assertFalse(Files.exists(tmp.resolve("x")));
+    }
+
+    @Test
+    void unknownCodeInScenarioNamesFileLineAndKey() throws IOException {
+        Path s = scenario("link:\n  code: g9\n");
+        CliTest.Outcome o = CliTest.run("run", s.toString(), "--out", tmp.resolve("x").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().startsWith("fadebench run: " + s + " line 2, key link.code: --code: unknown space-time code"),
+                o.err());
+    }
+
+    @Test
+    void unknownKeySuggestsClosest() throws IOException {
+        Path s = scenario("sweep:\n  max_frame: 10\n");
+        CliTest.Outcome o = CliTest.run("run", s.toString(), "--out", tmp.resolve("x").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("line 2: unknown key 'sweep.max_frame' (did you mean 'max_frames'?)"), o.err());
+        assertFalse(o.err().trim().contains("\n"));
+    }
+
+    @Test
+    void wholeNumberTooLargeForItsOption() throws IOException {
+        Path s = scenario("link:\n  rx: 99999999999\n");
+        CliTest.Outcome o = CliTest.run("run", s.toString(), "--out", tmp.resolve("x").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("line 2, key link.rx: expected a whole number in range, got '99999999999'"),
+                o.err());
+    }
+
+    @Test
+    void missingScenarioFile() {
+        CliTest.Outcome o = CliTest.run("run", tmp.resolve("none.yaml").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("none.yaml: no such scenario file"), o.err());
+    }
+
+    /** --archive bundles CSV, JSON and scenario; both compressions read back with Commons Compress. */
+    @Test
+    void archives() throws Exception {
+        for (String name : new String[] {"run.tar.xz", "run.tar.gz"}) {
+            Path archive = tmp.resolve(name);
+            CliTest.Outcome o = CliTest.run("run", "--snr", "5", "--min-errors", "10", "--out",
+                    tmp.resolve("o-" + name).toString(), "--archive", archive.toString(), "--quiet");
+            assertEquals(0, o.code(), o.err());
+            assertEquals("", o.out(), "--quiet prints nothing");
+            List<String> entries = new ArrayList<>();
+            try (InputStream raw = Files.newInputStream(archive);
+                 InputStream in = new CompressorStreamFactory().createCompressorInputStream(
+                         new java.io.BufferedInputStream(raw));
+                 TarArchiveInputStream tar = new TarArchiveInputStream(in)) {
+                TarArchiveEntry e;
+                while ((e = tar.getNextEntry()) != null) {
+                    entries.add(e.getName());
+                }
+            }
+            assertEquals(List.of("results.csv", "results.json", "scenario.yaml"), entries);
+        }
+        CliTest.Outcome bad = CliTest.run("run", "--archive", tmp.resolve("r.zip").toString(), "--out",
+                tmp.resolve("z").toString());
+        assertEquals(2, bad.code());
+        assertTrue(bad.err().contains("valid endings: .tar.xz, .txz, .tar.gz, .tgz"), bad.err());
+        assertFalse(Files.exists(tmp.resolve("z")));
+    }
+
+    /** An archive that cannot be written is an I/O failure (exit 3) and leaves no temporary file. */
+    @Test
+    void ioFailureLeavesNoPartialFiles() throws IOException {
+        Path blocker = Files.writeString(tmp.resolve("blocker"), "a file, not a folder");
+        Path out = tmp.resolve("o");
+        CliTest.Outcome o = CliTest.run("run", "--snr", "5", "--min-errors", "10", "--out", out.toString(),
+                "--archive", blocker.resolve("r.tar.gz").toString(), "--quiet");
+        assertEquals(3, o.code(), o.err());
+        assertTrue(o.err().startsWith("fadebench run: I/O failure:"), o.err());
+        try (var s = Files.list(out)) {
+            assertTrue(s.noneMatch(p -> p.getFileName().toString().endsWith(".tmp")));
+        }
+    }
+}

@@ -1,0 +1,83 @@
+package org.fadebench.bench.scenario;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+class ScenarioLoaderTest {
+
+    @Test
+    void readsEveryKindOfValue() {
+        Scenario s = ScenarioLoader.parse("t.yaml", String.join("\n",
+                "link:",
+                "  code: alamouti",
+                "  rx: 2",
+                "sweep:",
+                "  snr_db: [0, 2.5, 5]",
+                "  fer_floor: 1e-5",
+                "output:",
+                "  quiet: true"));
+        assertEquals("alamouti", s.settings().get("--code").value());
+        assertEquals("2", s.settings().get("--rx").value());
+        assertEquals(3, s.settings().get("--rx").line());
+        assertEquals("0,2.5,5", s.settings().get("--snr").value());
+        assertEquals("true", s.settings().get("--quiet").value());
+        assertEquals(5, s.settings().size());
+    }
+
+    @Test
+    void emptyFileSetsNothing() {
+        assertTrue(ScenarioLoader.parse("e.yaml", "# nothing\n").settings().isEmpty());
+    }
+
+    /** The shipped example scenario loads and sets only known keys. */
+    @Test
+    void exampleScenarioLoads() {
+        Path example = Path.of("scenarios", "hilltop-gateway.yaml");
+        assertTrue(Files.exists(example), "bench/scenarios/hilltop-gateway.yaml is shipped");
+        Scenario s = ScenarioLoader.load(example);
+        assertTrue(s.settings().size() >= 10, "the example shows most keys");
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', value = {
+        "'link:\\n  modulaton: qpsk' | t.yaml line 2: unknown key 'link.modulaton' (did you mean 'modulation'?); valid keys in link:",
+        "'sweeps:\\n  seed: 1' | t.yaml line 1: unknown section 'sweeps' (did you mean 'sweep'?); valid sections: link, sweep, output",
+        "'link:\\n  rx: two' | t.yaml line 2, key link.rx: expected a whole number, got 'two'",
+        "'sweep:\\n  confidence: high' | t.yaml line 2, key sweep.confidence: expected a number, got 'high'",
+        "'sweep:\\n  snr_db: [0, x]' | t.yaml line 2, key sweep.snr_db: expected a number, START:STEP:STOP, or a list of numbers, got 'x'",
+        "'output:\\n  quiet: maybe' | t.yaml line 2, key output.quiet: expected true or false, got 'maybe'",
+        "'link:\\n  tx: [1, 2]' | t.yaml line 2, key link.tx: expected a whole number, got a list",
+        "'link: 3' | t.yaml line 1: section 'link' must be a mapping of keys code, tx, rx",
+        "'- a\\n- b' | t.yaml line 1: the top level must be a mapping of sections link, sweep, output",
+        "'link:\\n  rx: 1\\n  rx: 2' | t.yaml line 3: key 'link.rx' appears twice",
+        "'link: {code: [unclosed' | t.yaml line 1: not valid YAML",
+        "'link:\\n  code: !!java.lang.Object x' | t.yaml line 2: not valid YAML: Global tag is not allowed",
+        "'link:\\n  code: !custom x' | t.yaml line 2: YAML tags are not allowed (!custom)",
+    })
+    void badScenariosNameFileLineAndKey(String yaml, String expected) {
+        ScenarioException e = assertThrows(ScenarioException.class,
+                () -> ScenarioLoader.parse("t.yaml", yaml.replace("\\n", "\n")));
+        assertTrue(e.getMessage().startsWith(expected.trim()), e.getMessage());
+        assertTrue(!e.getMessage().contains("\n"), "one line");
+    }
+
+    @Test
+    void missingFile() {
+        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioLoader.load(Path.of("nope.yaml")));
+        assertEquals("nope.yaml: no such scenario file", e.getMessage());
+    }
+
+    @Test
+    void closestKey() {
+        assertEquals("max_frames", ScenarioSchema.closest("maxframes", ScenarioSchema.names("sweep")).orElseThrow());
+        assertTrue(ScenarioSchema.closest("zebra", ScenarioSchema.names("sweep")).isEmpty());
+        assertEquals(3, ScenarioSchema.editDistance("kitten", "sitting"));
+    }
+}
