@@ -146,6 +146,27 @@ public final class SpaceTimeCode {
         }
     }
 
+    /**
+     * The combiner for {@code nr} receive antennas and the given decoder. For an orthogonal code
+     * ZF and MMSE give exactly the matched filter's estimates and gains, so the matched filter
+     * (the fast kernel where there is one) serves every decoder.
+     *
+     * @param n0 noise density (complex noise variance per receive entry); read by MMSE only, which
+     *           needs it finite and not negative, and a new combiner per value
+     * @throws IllegalArgumentException for nr < 1, a bad n0 for MMSE, or ZF on a code it cannot
+     *                                  separate with nr antennas
+     */
+    public Combiner newCombiner(int nr, Decoder decoder, double n0) {
+        checkReceiveAntennas(nr);
+        if (decoder == Decoder.MMSE) {
+            LinearEqualiser.checkNoise(n0);
+        }
+        if (decoder == Decoder.MF || orthogonal) {
+            return newCombiner(nr);
+        }
+        return decoder == Decoder.ZF ? LinearEqualiser.zeroForcing(this, nr) : LinearEqualiser.mmse(this, nr, n0);
+    }
+
     static void checkReceiveAntennas(int nr) {
         if (nr < 1) {
             throw new IllegalArgumentException("receive antennas must be at least 1, got " + nr + "; valid: 1, 2, 3, ...");

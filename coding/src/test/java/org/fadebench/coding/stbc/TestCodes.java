@@ -46,4 +46,25 @@ final class TestCodes {
         }
         return new SpaceTimeCode("random", mt, k, t, a, b, "test code", SpaceTimeCode.Kernel.GENERAL);
     }
+
+    /**
+     * The noiseless receive grid Y = X Hᵀ of {@code blocks} code blocks: x holds T·blocks rows of
+     * Mt entries, h is Nr x Mt; returns T·blocks rows of Nr entries (interleaved complex).
+     */
+    static double[] receive(double[] x, double[] h, int mt, int nr, int rows) {
+        double[] y = new double[2 * rows * nr];
+        for (int slot = 0; slot < rows; slot++) {
+            for (int r = 0; r < nr; r++) {
+                for (int tx = 0; tx < mt; tx++) {
+                    double hr = h[2 * (r * mt + tx)];
+                    double hi = h[2 * (r * mt + tx) + 1];
+                    double xr = x[2 * (slot * mt + tx)];
+                    double xi = x[2 * (slot * mt + tx) + 1];
+                    y[2 * (slot * nr + r)] += hr * xr - hi * xi;
+                    y[2 * (slot * nr + r) + 1] += hr * xi + hi * xr;
+                }
+            }
+        }
+        return y;
+    }
 }
