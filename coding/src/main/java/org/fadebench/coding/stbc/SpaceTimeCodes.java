@@ -11,9 +11,10 @@ import java.util.Map;
  * <p>Each code is written out below as its published matrix, one string per slot (row) and one
  * token per antenna (column): {@code s3} is the symbol s_3, {@code -s3*} is −s_3*, {@code 0} is
  * silence. The scale factor beside each code makes the average total energy per slot 1 for
- * unit-energy symbols (the power convention of {@link SpaceTimeCode}); for an orthogonal design it
- * gives X^H X = c·(Σ|s_k|²)·I with c = T/(Mt·K). Orthogonality, full diversity and the scale are
- * checked numerically in the tests, not assumed from the names.
+ * unit-energy symbols (the power convention of {@link SpaceTimeCode}): it is 1/√E where E is the
+ * unscaled design's average energy per slot, the number of its nonzero (unit) entries over T. For
+ * an orthogonal design it gives X^H X = c·(Σ|s_k|²)·I with c = T/(Mt·K). Orthogonality, full
+ * diversity and the scale are checked numerically in the tests, not assumed from the names.
  */
 public final class SpaceTimeCodes {
 
@@ -25,7 +26,7 @@ public final class SpaceTimeCodes {
 
     /** Alamouti (S. M. Alamouti, IEEE JSAC 16(8), 1998). */
     public static final SpaceTimeCode ALAMOUTI = design("alamouti", Math.sqrt(0.5),
-            "scale 1/√2: 2 unit entries per slot",
+            "scale 1/√2: unscaled energy 2 per slot",
             SpaceTimeCode.Kernel.ALAMOUTI,
             "  s1   s2",
             " -s2*  s1*");
@@ -66,11 +67,11 @@ public final class SpaceTimeCodes {
      * (upper four rows, then the lower four). Unscaled X^H X = 2·Σ|s_k|²·I.
      */
     public static final SpaceTimeCode G3 = halfRate("g3", REAL_4, 3, 1 / Math.sqrt(3),
-            "scale 1/√3: 24 unit entries over 8 slots");
+            "scale 1/√3: unscaled energy 24/8 = 3 per slot");
 
     /** G4 of Tarokh et al. (1999), rate 1/2: the size-4 real design over its conjugate (8 x 4). */
     public static final SpaceTimeCode G4 = halfRate("g4", REAL_4, 4, 0.5,
-            "scale 1/2: 32 unit entries over 8 slots");
+            "scale 1/2: unscaled energy 32/8 = 4 per slot");
 
     /**
      * Rate-3/4 orthogonal design for 4 antennas, the form with zeros rather than the one with
@@ -78,7 +79,7 @@ public final class SpaceTimeCodes {
      * before scaling, checked numerically in the tests.
      */
     public static final SpaceTimeCode H4 = design("h4", 1 / Math.sqrt(3),
-            "scale 1/√3: 12 unit entries over 4 slots",
+            "scale 1/√3: unscaled energy 12/4 = 3 per slot",
             SpaceTimeCode.Kernel.GENERAL,
             "  s1    s2    s3    0 ",
             " -s2*   s1*   0     s3 ",
@@ -87,7 +88,7 @@ public final class SpaceTimeCodes {
 
     /** Rate-3/4 orthogonal design for 3 antennas: the first three columns of {@link #H4}. */
     public static final SpaceTimeCode H3 = design("h3", 2.0 / 3.0,
-            "scale 2/3: 9 unit entries over 4 slots",
+            "scale 2/3: unscaled energy 9/4 per slot",
             SpaceTimeCode.Kernel.GENERAL,
             "  s1    s2    s3 ",
             " -s2*   s1*   0  ",
@@ -100,13 +101,13 @@ public final class SpaceTimeCodes {
      * Unscaled X^H X = 2·Σ|s_k|²·I; scale 1/√n.
      */
     public static final SpaceTimeCode R12_5 = halfRate("r12-5", REAL_8, 5, 1 / Math.sqrt(5),
-            "scale 1/√5: 80 unit entries over 16 slots");
+            "scale 1/√5: unscaled energy 80/16 = 5 per slot");
     public static final SpaceTimeCode R12_6 = halfRate("r12-6", REAL_8, 6, 1 / Math.sqrt(6),
-            "scale 1/√6: 96 unit entries over 16 slots");
+            "scale 1/√6: unscaled energy 96/16 = 6 per slot");
     public static final SpaceTimeCode R12_7 = halfRate("r12-7", REAL_8, 7, 1 / Math.sqrt(7),
-            "scale 1/√7: 112 unit entries over 16 slots");
+            "scale 1/√7: unscaled energy 112/16 = 7 per slot");
     public static final SpaceTimeCode R12_8 = halfRate("r12-8", REAL_8, 8, 1 / Math.sqrt(8),
-            "scale 1/√8: 128 unit entries over 16 slots");
+            "scale 1/√8: unscaled energy 128/16 = 8 per slot");
 
     private static final Map<String, SpaceTimeCode> CATALOGUE = new LinkedHashMap<>();
 
