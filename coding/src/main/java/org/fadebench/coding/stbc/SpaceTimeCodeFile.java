@@ -43,8 +43,9 @@ import org.yaml.snakeyaml.error.YAMLException;
  * already within 1e-12 of unit energy is taken as written, so writing a code and reading it back
  * gives identical matrices.
  *
- * <p>Parsing uses SnakeYAML's safe constructor: only plain maps, lists, strings and numbers are
- * built, no other types. Every problem is an {@link IllegalArgumentException} with a one-line
+ * <p>Parsing uses SnakeYAML's safe constructor, which builds only standard YAML values (maps,
+ * lists, strings, numbers, booleans, ...) and never an arbitrary Java class; anything outside the
+ * layout's maps, lists, strings and numbers is then rejected. Every problem is an {@link IllegalArgumentException} with a one-line
  * message naming the file, the problem and what is valid.
  */
 public final class SpaceTimeCodeFile {
@@ -309,13 +310,17 @@ public final class SpaceTimeCodeFile {
             if (!(node instanceof List) || ((List<?>) node).size() != t) {
                 throw fail(where + " is " + describe(node), shape);
             }
-            double[] m = new double[2 * t * mt];
             List<?> rows = (List<?>) node;
             for (int r = 0; r < t; r++) {
                 Object row = rows.get(r);
                 if (!(row instanceof List) || ((List<?>) row).size() != mt) {
                     throw fail(where + " row " + (r + 1) + " is " + describe(row), shape);
                 }
+            }
+            // the shape now matches entries present in the file, so its size is safe to allocate
+            double[] m = new double[2 * t * mt];
+            for (int r = 0; r < t; r++) {
+                Object row = rows.get(r);
                 for (int c = 0; c < mt; c++) {
                     double[] z = entry(((List<?>) row).get(c), where + " row " + (r + 1) + " entry " + (c + 1));
                     m[2 * (r * mt + c)] = z[0];

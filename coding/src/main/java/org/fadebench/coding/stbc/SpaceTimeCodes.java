@@ -57,14 +57,18 @@ public final class SpaceTimeCodes {
 
     /**
      * G3 of Tarokh et al. (1999), rate 1/2: the first three columns of the size-4 real design,
-     * stacked over their conjugates (8 x 3):
+     * stacked over their conjugates (8 x 3, slots down, antennas across):
      * <pre>
-     *   s1   s2   s3      s1*  s2*  s3*
-     *  -s2   s1  -s4     -s2*  s1* -s4*
-     *  -s3   s4   s1     -s3*  s4*  s1*
-     *  -s4  -s3   s2     -s4* -s3*  s2*
+     *   s1   s2   s3
+     *  -s2   s1  -s4
+     *  -s3   s4   s1
+     *  -s4  -s3   s2
+     *   s1*  s2*  s3*
+     *  -s2*  s1* -s4*
+     *  -s3*  s4*  s1*
+     *  -s4* -s3*  s2*
      * </pre>
-     * (upper four rows, then the lower four). Unscaled X^H X = 2·Σ|s_k|²·I.
+     * Unscaled X^H X = 2·Σ|s_k|²·I.
      */
     public static final SpaceTimeCode G3 = halfRate("g3", REAL_4, 3, 1 / Math.sqrt(3),
             "scale 1/√3: unscaled energy 24/8 = 3 per slot");
@@ -157,8 +161,8 @@ public final class SpaceTimeCodes {
      * {@code -s<k>}, {@code s<k>*} or {@code -s<k>*} with k from 1 to K, every k present; every
      * entry is multiplied by {@code scale}.
      */
-    static SpaceTimeCode design(String name, double scale, String scaleNote,
-                                        SpaceTimeCode.Kernel kernel, String... rows) {
+    static SpaceTimeCode design(String name, double scale, String scaleNote, SpaceTimeCode.Kernel kernel,
+                                String... rows) {
         int t = rows.length;
         String[][] tokens = new String[t][];
         int k = 0;

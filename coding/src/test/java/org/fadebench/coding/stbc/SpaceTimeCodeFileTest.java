@@ -154,6 +154,8 @@ class SpaceTimeCodeFileTest {
             Arguments.of("symbol 1 real is a list of 2; valid: one row per slot (1), each with one entry per transmit antenna (2)",
                     with("  - real: [[1, 0]]", "  - real: [[1, 0], [0, 0]]")),
             Arguments.of("symbol 2 imag row 1 is a list of 3", with("    imag: [[0, j]]", "    imag: [[0, j, 0]]")),
+            Arguments.of("symbol 1 real row 1 is a list of 2; valid: one row per slot (1), each with one entry per"
+                    + " transmit antenna (1000000000)", with("tx: 2", "tx: 1000000000")),
             Arguments.of("symbol 1 real row 1 entry 1 is NaN (double), not finite",
                     with("  - real: [[1, 0]]", "  - real: [[.nan, 0]]")),
             Arguments.of("symbol 1 real row 1 entry 2 is Infinity (double), not finite",
