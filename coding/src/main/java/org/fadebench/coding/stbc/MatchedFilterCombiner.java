@@ -4,15 +4,12 @@ import org.ejml.data.DMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
 
 /**
- * The general matched-filter combiner on the real-valued effective channel, built with EJML.
- *
- * <p>Stacking the received block as a real vector y (2·T·Nr entries, in the interleaved order of
- * the receive grid) and the symbols as v = (a_1, b_1, …, a_K, b_K), the code and channel together
- * are y = F v + n with the real 2TNr x 2K matrix F whose columns are the received images of A_k
- * and B_k. The combiner forms z = Fᵀ y and divides by the diagonal of FᵀF. For an orthogonal code
+ * The general matched-filter combiner on the real effective channel F ({@link EffectiveChannel}),
+ * built with EJML: it forms z = Fᵀ y and divides by the diagonal of FᵀF. For an orthogonal code
  * FᵀF is a multiple of the identity, so this is the maximum-likelihood front end and symbol-wise
  * slicing of its output is exact ML (V. Tarokh, H. Jafarkhani and A. R. Calderbank, "Space-time
- * block codes from orthogonal designs", IEEE Trans. Inf. Theory 45(5), 1999).
+ * block codes from orthogonal designs", IEEE Trans. Inf. Theory 45(5), 1999). For other codes the
+ * other symbols leak into each estimate; the gain counts only noise.
  *
  * <p>Gain: the real part's estimate has noise variance n0/(2 G_aa), the imaginary part's
  * n0/(2 G_bb), so the complex estimate has noise n0 (1/G_aa + 1/G_bb)/2 and the reported gain is
@@ -21,13 +18,8 @@ import org.ejml.dense.row.CommonOps_DDRM;
 public final class MatchedFilterCombiner implements Combiner {
 
     private final SpaceTimeCode code;
-    private final int nr;
-    private final int mt;
+    private final EffectiveChannel channel;
     private final int k;
-    private final int t;
-    private final double[][] a;
-    private final double[][] b;
-    private final DMatrixRMaj f;
     private final DMatrixRMaj y;
     private final DMatrixRMaj z;
     private final double[] invDiag;
@@ -35,18 +27,9 @@ public final class MatchedFilterCombiner implements Combiner {
 
     public MatchedFilterCombiner(SpaceTimeCode code, int nr) {
         this.code = code;
-        this.nr = nr;
-        this.mt = code.transmitAntennas();
+        this.channel = new EffectiveChannel(code, nr);
         this.k = code.symbolsPerBlock();
-        this.t = code.slotsPerBlock();
-        this.a = new double[k][];
-        this.b = new double[k][];
-        for (int i = 0; i < k; i++) {
-            a[i] = code.realDispersion(i);
-            b[i] = code.imagDispersion(i);
-        }
-        this.f = new DMatrixRMaj(2 * t * nr, 2 * k);
-        this.y = new DMatrixRMaj(2 * t * nr, 1);
+        this.y = new DMatrixRMaj(channel.blockLength(), 1);
         this.z = new DMatrixRMaj(2 * k, 1);
         this.invDiag = new double[2 * k];
         this.gain = new double[k];
@@ -58,15 +41,13 @@ public final class MatchedFilterCombiner implements Combiner {
 
     /** The real effective channel F of the current channel (a view; do not modify). */
     public DMatrixRMaj effectiveChannel() {
-        return f;
+        return channel.f;
     }
 
     @Override
     public void setChannel(double[] h) {
-        for (int i = 0; i < k; i++) {
-            fillColumn(h, a[i], 2 * i);
-            fillColumn(h, b[i], 2 * i + 1);
-        }
+        channel.fill(h);
+        DMatrixRMaj f = channel.f;
         for (int c = 0; c < 2 * k; c++) {
             double g = 0;
             for (int row = 0; row < f.numRows; row++) {
@@ -82,34 +63,12 @@ public final class MatchedFilterCombiner implements Combiner {
         }
     }
 
-    /** Column c of F: the received image (D Hᵀ) of dispersion matrix D, split into re/im rows. */
-    private void fillColumn(double[] h, double[] d, int c) {
-        for (int s = 0; s < t; s++) {
-            for (int r = 0; r < nr; r++) {
-                double re = 0;
-                double im = 0;
-                for (int tx = 0; tx < mt; tx++) {
-                    double dr = d[2 * (s * mt + tx)];
-                    double di = d[2 * (s * mt + tx) + 1];
-                    double hr = h[2 * (r * mt + tx)];
-                    double hi = h[2 * (r * mt + tx) + 1];
-                    re += dr * hr - di * hi;
-                    im += dr * hi + di * hr;
-                }
-                int row = 2 * (s * nr + r);
-                f.unsafe_set(row, c, re);
-                f.unsafe_set(row + 1, c, im);
-            }
-        }
-    }
-
     @Override
     public void combine(double[] yGrid, int yRow, int blocks, double[] estimates, double[] gainOut,
                         int symOffset) {
-        int len = 2 * t * nr;
         for (int blk = 0; blk < blocks; blk++) {
-            System.arraycopy(yGrid, 2 * (yRow + blk * t) * nr, y.data, 0, len);
-            CommonOps_DDRM.multTransA(f, y, z);
+            channel.loadBlock(yGrid, yRow, blk, y);
+            CommonOps_DDRM.multTransA(channel.f, y, z);
             int so = symOffset + blk * k;
             for (int i = 0; i < k; i++) {
                 estimates[2 * (so + i)] = z.data[2 * i] * invDiag[2 * i];

@@ -27,6 +27,7 @@ public final class SpaceTimeCode {
     private final double[][] b;
     private final String scaleNote;
     private final Kernel kernel;
+    private final boolean orthogonal;
 
     SpaceTimeCode(String name, int mt, int k, int t, double[][] a, double[][] b, String scaleNote,
                   Kernel kernel) {
@@ -47,6 +48,7 @@ public final class SpaceTimeCode {
                         + " is not " + t + " x " + mt);
             }
         }
+        this.orthogonal = CodeChecks.orthogonal(this);
     }
 
     private static double[][] deepCopy(double[][] m) {
@@ -90,6 +92,25 @@ public final class SpaceTimeCode {
         return kernel;
     }
 
+    /**
+     * Whether X^H X = c·(Σ_k |s_k|²)·I for one constant c, checked numerically on random symbols
+     * when the code is made (see {@link CodeChecks#orthogonal}). An orthogonal code is decoded
+     * exactly (ML) by the matched filter and per-symbol slicing.
+     */
+    public boolean isOrthogonal() {
+        return orthogonal;
+    }
+
+    /**
+     * The rank criterion for full transmit diversity, checked numerically: X(d) has rank Mt for
+     * every single-symbol difference d and for random complex differences (see
+     * {@link CodeChecks#fullDiversity} for exactly what is and is not covered). Computed afresh
+     * on each call.
+     */
+    public boolean hasFullDiversity() {
+        return CodeChecks.fullDiversity(this);
+    }
+
     /** Copy of A_k (coefficient of Re s_k), interleaved complex T x Mt. */
     public double[] realDispersion(int symbol) {
         return a[symbol].clone();
@@ -114,6 +135,7 @@ public final class SpaceTimeCode {
 
     /** The matched-filter combiner for {@code nr} receive antennas: the fast kernel where there is one. */
     public Combiner newCombiner(int nr) {
+        checkReceiveAntennas(nr);
         switch (kernel) {
             case SINGLE_ANTENNA:
                 return new SingleAntennaKernel(nr);
@@ -122,6 +144,47 @@ public final class SpaceTimeCode {
             default:
                 return new MatchedFilterCombiner(this, nr);
         }
+    }
+
+    /**
+     * The combiner for {@code nr} receive antennas and the given decoder. For an orthogonal code
+     * ZF and MMSE give exactly the matched filter's estimates and gains, so the matched filter
+     * (the fast kernel where there is one) serves every decoder.
+     *
+     * @param n0 noise density (complex noise variance per receive entry); read by MMSE only, which
+     *           needs it finite and not negative, and a new combiner per value
+     * @throws IllegalArgumentException for nr < 1, a bad n0 for MMSE, or ZF on a code it cannot
+     *                                  separate with nr antennas
+     */
+    public Combiner newCombiner(int nr, Decoder decoder, double n0) {
+        checkReceiveAntennas(nr);
+        if (decoder == Decoder.MMSE) {
+            LinearEqualiser.checkNoise(n0);
+        }
+        if (decoder == Decoder.MF || orthogonal) {
+            return newCombiner(nr);
+        }
+        return decoder == Decoder.ZF ? LinearEqualiser.zeroForcing(this, nr) : LinearEqualiser.mmse(this, nr, n0);
+    }
+
+    static void checkReceiveAntennas(int nr) {
+        if (nr < 1) {
+            throw new IllegalArgumentException("receive antennas must be at least 1, got " + nr + "; valid: 1, 2, 3, ...");
+        }
+    }
+
+    /**
+     * Average total energy per slot, E‖X‖²_F / T, for symbols whose real and imaginary parts are
+     * independent, zero-mean, of variance 1/2: (1/T)·Σ_k (‖A_k‖² + ‖B_k‖²)/2.
+     */
+    static double averageSlotEnergy(double[][] a, double[][] b, int t) {
+        double sum = 0;
+        for (int i = 0; i < a.length; i++) {
+            for (int c = 0; c < a[i].length; c++) {
+                sum += a[i][c] * a[i][c] + b[i][c] * b[i][c];
+            }
+        }
+        return sum / (2.0 * t);
     }
 
     /** Encodes with the general dispersion-matrix formula (reference path; allocation-free). */

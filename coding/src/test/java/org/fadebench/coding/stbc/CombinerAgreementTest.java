@@ -10,21 +10,13 @@ import org.junit.jupiter.params.provider.ValueSource;
 
 class CombinerAgreementTest {
 
-    private static double[] gaussians(Random rnd, int n, double sd) {
-        double[] v = new double[n];
-        for (int i = 0; i < n; i++) {
-            v[i] = sd * rnd.nextGaussian();
-        }
-        return v;
-    }
-
     /** The specialised kernels encode exactly as the general dispersion-matrix formula. */
     @Test
     void kernelsEncodeLikeDispersionForm() {
         Random rnd = new Random(1);
         for (SpaceTimeCode code : SpaceTimeCodes.all()) {
             int blocks = 5;
-            double[] s = gaussians(rnd, 2 * code.symbolsPerBlock() * blocks + 2, 1);
+            double[] s = TestCodes.gaussians(rnd, 2 * code.symbolsPerBlock() * blocks + 2, 1);
             int rows = code.slotsPerBlock() * blocks;
             double[] fast = new double[2 * code.transmitAntennas() * (rows + 1)];
             double[] general = fast.clone();
@@ -50,8 +42,8 @@ class CombinerAgreementTest {
             Combiner general = new MatchedFilterCombiner(code, nr);
             int blocks = 3;
             for (int trial = 0; trial < 200; trial++) {
-                double[] h = gaussians(rnd, 2 * nr * mt, Math.sqrt(0.5));
-                double[] y = gaussians(rnd, 2 * nr * t * blocks, 1.3);
+                double[] h = TestCodes.gaussians(rnd, 2 * nr * mt, Math.sqrt(0.5));
+                double[] y = TestCodes.gaussians(rnd, 2 * nr * t * blocks, 1.3);
                 double[] e1 = new double[2 * k * blocks];
                 double[] e2 = new double[2 * k * blocks];
                 double[] g1 = new double[k * blocks];
@@ -80,7 +72,7 @@ class CombinerAgreementTest {
             int t = code.slotsPerBlock();
             double c = (double) t / (mt * k);
             for (int trial = 0; trial < 50; trial++) {
-                double[] s = gaussians(rnd, 2 * k, 1);
+                double[] s = TestCodes.gaussians(rnd, 2 * k, 1);
                 double energy = 0;
                 for (double v : s) {
                     energy += v * v;
@@ -116,23 +108,11 @@ class CombinerAgreementTest {
             int mt = code.transmitAntennas();
             int k = code.symbolsPerBlock();
             int t = code.slotsPerBlock();
-            double[] s = gaussians(rnd, 2 * k, 1);
+            double[] s = TestCodes.gaussians(rnd, 2 * k, 1);
             double[] x = new double[2 * t * mt];
             code.newEncoder().encode(s, 0, 1, x, 0);
-            double[] h = gaussians(rnd, 2 * nr * mt, 1);
-            double[] y = new double[2 * t * nr];
-            for (int slot = 0; slot < t; slot++) {
-                for (int r = 0; r < nr; r++) {
-                    for (int tx = 0; tx < mt; tx++) {
-                        double hr = h[2 * (r * mt + tx)];
-                        double hi = h[2 * (r * mt + tx) + 1];
-                        double xr = x[2 * (slot * mt + tx)];
-                        double xi = x[2 * (slot * mt + tx) + 1];
-                        y[2 * (slot * nr + r)] += hr * xr - hi * xi;
-                        y[2 * (slot * nr + r) + 1] += hr * xi + hi * xr;
-                    }
-                }
-            }
+            double[] h = TestCodes.gaussians(rnd, 2 * nr * mt, 1);
+            double[] y = TestCodes.receive(x, h, mt, nr, t);
             Combiner comb = code.newCombiner(nr);
             comb.setChannel(h);
             double[] est = new double[2 * k];
