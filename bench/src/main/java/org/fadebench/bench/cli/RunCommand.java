@@ -15,7 +15,9 @@ import org.fadebench.bench.scenario.ScenarioLoader;
 import org.fadebench.bench.sweep.SnrGrid;
 import org.fadebench.bench.sweep.StopRules;
 import org.fadebench.channel.Fading;
+import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCode;
+import org.fadebench.coding.stbc.SpaceTimeCodeFile;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.Modulation;
 import picocli.CommandLine;
@@ -36,10 +38,18 @@ final class RunCommand implements Callable<Integer> {
     @Parameters(arity = "0..1", paramLabel = "SCENARIO", description = "A scenario file (YAML); see README.")
     Path scenarioFile;
 
-    @Option(names = "--code", paramLabel = "NAME", defaultValue = "none",
-            description = "Space-time block code: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).",
+    @Option(names = "--code", paramLabel = "NAME",
+            description = "Space-time block code: ${COMPLETION-CANDIDATES} (default: none; see 'fadebench codes').",
             completionCandidates = CodeNames.class)
     String code;
+
+    @Option(names = "--code-file", paramLabel = "FILE",
+            description = "A linear space-time code of your own, from a YAML or JSON file (see README), instead of --code.")
+    Path codeFile;
+
+    @Option(names = "--decoder", paramLabel = "NAME",
+            description = "Linear decoder: mf, zf, mmse (default: mf for orthogonal codes, mmse otherwise).")
+    String decoder;
 
     @Option(names = "--tx", paramLabel = "N", description = "Transmit antennas (default: what the code needs).")
     Integer tx;
@@ -124,6 +134,11 @@ final class RunCommand implements Callable<Integer> {
         } catch (InvalidInputException e) {
             throw locate(e, scenario);
         }
+        if (!plan.link().code().isOrthogonal() && !plan.quiet()) {
+            spec.commandLine().getErr().println("fadebench run: warning: code " + plan.link().code().name()
+                    + " is not orthogonal; " + plan.link().decoder().cliName()
+                    + " linear decoding is not maximum-likelihood, so expect a loss against ML decoding");
+        }
         return new SweepJob(plan, spec.commandLine().getOut()).run();
     }
 
@@ -194,12 +209,19 @@ final class RunCommand implements Callable<Integer> {
     /** Turns the options into a plan, or throws {@link InvalidInputException} naming the option. */
     RunPlan plan(Scenario scenario) {
         Modulation mod = parse("--mod", () -> Modulation.fromCliName(modulation));
-        SpaceTimeCode stbc = parse("--code", () -> SpaceTimeCodes.byName(code));
+        if (code != null && codeFile != null) {
+            throw new InvalidInputException("--code-file " + codeFile + ": give either --code or --code-file, not both");
+        }
+        SpaceTimeCode stbc = codeFile != null
+                ? parse("--code-file", () -> SpaceTimeCodeFile.read(codeFile))
+                : parse("--code", () -> SpaceTimeCodes.byName(code == null ? "none" : code));
+        Decoder dec = decoder != null ? parse("--decoder", () -> Decoder.fromCliName(decoder))
+                : stbc.isOrthogonal() ? Decoder.MF : Decoder.MMSE;
         Fading fad = parse("--fading", () -> Fading.fromCliName(fading));
         double[] snrDb = parse(null, () -> SnrGrid.parse(snr));
         int bits = frameBits != null ? frameBits : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
         int nTx = tx != null ? tx : stbc.transmitAntennas();
-        LinkSettings link = parse(null, () -> new LinkSettings(mod, stbc, nTx, rx, fad, bits, coherence));
+        LinkSettings link = parse(null, () -> new LinkSettings(mod, stbc, nTx, rx, fad, bits, coherence, dec));
         StopRules rules = parse(null, () -> new StopRules(minErrors, maxFrames, maxSeconds, ferFloor));
         int nThreads = SweepJob.threads(threads);
         if (!(confidence > 0 && confidence < 1)) {
@@ -215,7 +237,7 @@ final class RunCommand implements Callable<Integer> {
             archivePath = Path.of(archive);
         }
         return new RunPlan(link, snr.trim(), snrDb, rules, seed, nThreads, confidence, SweepJob.checkOutDir(out),
-                archivePath, resume, quiet, scenario);
+                archivePath, resume, quiet, scenario, codeFile);
     }
 
     /** Runs a parser; its IllegalArgumentException becomes invalid input, prefixed with the option. */

@@ -7,20 +7,25 @@ import java.util.Map;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.scenario.Scenario;
 import org.fadebench.bench.sweep.StopRules;
+import org.fadebench.coding.stbc.SpaceTimeCodeFile;
+import org.fadebench.coding.stbc.SpaceTimeCodes;
 
 /**
  * A validated {@code run}: everything needed to simulate, report and resume.
  *
  * @param scenario the scenario file it came from, or null
  * @param archive  the archive to write, or null
+ * @param codeFile the file the space-time code came from, or null for a catalogue code
  */
 record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rules, long seed, int threads,
-               double confidence, Path outDir, Path archive, boolean resume, boolean quiet, Scenario scenario) {
+               double confidence, Path outDir, Path archive, boolean resume, boolean quiet, Scenario scenario,
+               Path codeFile) {
 
     /** The settings as results.json records them (option names without dashes). */
     Map<String, Object> settings() {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("code", link.code().name());
+        m.put("decoder", link.decoder().cliName());
         m.put("tx", link.transmitAntennas());
         m.put("rx", link.receiveAntennas());
         m.put("mod", link.modulation().cliName());
@@ -44,7 +49,8 @@ record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rule
 
     /** Every setting that changes the numbers, for the checkpoint's fingerprint. */
     String numbersFingerprintText(int batchFrames) {
-        return String.join("|", "v1", link.describe(), link.code().name(), link.modulation().cliName(),
+        return String.join("|", "v1", link.describe(), SpaceTimeCodeFile.format(link.code()), link.decoder().cliName(),
+                link.modulation().cliName(),
                 link.fading().cliName(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),
                 Long.toString(rules.minErrors()), Long.toString(rules.maxFrames()), Double.toString(rules.maxSeconds()),
                 Double.toString(rules.ferFloor()), Long.toString(seed), Integer.toString(batchFrames));
@@ -55,7 +61,12 @@ record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rule
         StringBuilder y = new StringBuilder();
         y.append("# fadebench scenario: the settings of this run (written by fadebench)\n");
         y.append("link:\n");
-        y.append("  code: ").append(link.code().name()).append('\n');
+        if (SpaceTimeCodes.isCatalogued(link.code())) {
+            y.append("  code: ").append(link.code().name()).append('\n');
+        } else {
+            y.append("  code_file: \"").append(codeFile).append("\"\n");
+        }
+        y.append("  decoder: ").append(link.decoder().cliName()).append('\n');
         y.append("  tx: ").append(link.transmitAntennas()).append('\n');
         y.append("  rx: ").append(link.receiveAntennas()).append('\n');
         y.append("  modulation: ").append(link.modulation().cliName()).append('\n');

@@ -4,6 +4,7 @@ import org.fadebench.channel.Draws;
 import org.fadebench.channel.FadingModel;
 import org.fadebench.channel.MimoChannel;
 import org.fadebench.coding.stbc.Combiner;
+import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.StbcEncoder;
 import org.fadebench.modem.QamConstellation;
@@ -23,7 +24,9 @@ public final class LinkChain {
     private final LinkSettings settings;
     private final QamConstellation constellation;
     private final StbcEncoder encoder;
-    private final Combiner combiner;
+    private Combiner combiner;
+    /** The noise level the combiner was made for (only MMSE depends on it). */
+    private double combinerN0 = Double.NaN;
     private final FadingModel fading;
     private final int mt;
     private final int nr;
@@ -51,7 +54,8 @@ public final class LinkChain {
         this.encoder = code.newEncoder();
         this.nr = settings.receiveAntennas();
         this.mt = settings.transmitAntennas();
-        this.combiner = code.newCombiner(nr);
+        this.combiner = code.newCombiner(nr, settings.decoder(), 1.0);
+        this.combinerN0 = 1.0;
         this.fading = settings.fading().model();
         this.k = code.symbolsPerBlock();
         this.t = code.slotsPerBlock();
@@ -77,6 +81,11 @@ public final class LinkChain {
 
     /** Simulates one frame at noise level {@code n0} (SNR = 1/n0) and adds it to {@code counters}. */
     public void runFrame(Draws draws, double n0, FrameCounters counters) {
+        if (n0 != combinerN0 && settings.decoder() == Decoder.MMSE) {
+            // MMSE weights depend on the noise level: a new combiner when the SNR point changes
+            combiner = settings.code().newCombiner(nr, Decoder.MMSE, n0);
+            combinerN0 = n0;
+        }
         draws.fillBits(bits, 0, frameBits);
         constellation.map(bits, 0, txSymbols, 0, symbols);
         for (int first = 0; first < blocksPerFrame; first += blocksPerFade) {

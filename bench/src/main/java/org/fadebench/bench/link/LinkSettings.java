@@ -1,6 +1,7 @@
 package org.fadebench.bench.link;
 
 import org.fadebench.channel.Fading;
+import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.modem.Modulation;
 
@@ -11,12 +12,20 @@ import org.fadebench.modem.Modulation;
  *
  * @param frameBits       information bits per frame; a whole number of code blocks
  * @param coherenceSlots  slots (symbol periods) per fading block; 0 means the whole frame
+ * @param decoder         linear decoder (matched filter, ZF or MMSE); all coincide for orthogonal codes
  */
 public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas,
-                           int receiveAntennas, Fading fading, int frameBits, int coherenceSlots) {
+                           int receiveAntennas, Fading fading, int frameBits, int coherenceSlots,
+                           Decoder decoder) {
 
     /** Frame length used when the user gives none, rounded up to whole code blocks. */
     public static final int DEFAULT_FRAME_BITS = 1024;
+
+    /** A link decoded by the matched filter. */
+    public LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas, int receiveAntennas,
+                        Fading fading, int frameBits, int coherenceSlots) {
+        this(modulation, code, transmitAntennas, receiveAntennas, fading, frameBits, coherenceSlots, Decoder.MF);
+    }
 
     public LinkSettings {
         if (transmitAntennas <= 0) {
@@ -44,6 +53,12 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
         }
         if (frameBits > 1 << 24) {
             throw new IllegalArgumentException("--frame-bits " + frameBits + " is more than the 16777216 supported");
+        }
+        if (decoder == Decoder.ZF && !code.isOrthogonal()
+                && (long) code.slotsPerBlock() * receiveAntennas * 2 < 2L * code.symbolsPerBlock()) {
+            throw new IllegalArgumentException("--decoder zf cannot separate " + code.symbolsPerBlock()
+                    + " symbols from " + code.slotsPerBlock() + " slot(s) x " + receiveAntennas
+                    + " receive antenna(s); use --decoder mmse or more receive antennas");
         }
         if (coherenceSlots < 0 || coherenceSlots % code.slotsPerBlock() != 0) {
             throw new IllegalArgumentException("--coherence " + coherenceSlots + " must be a positive multiple of "
@@ -97,8 +112,9 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
         String coherence = coherenceSlots == 0 || coherenceSlots >= slotsPerFrame()
                 ? "one fading block per frame"
                 : effectiveCoherenceSlots() + " slots per fading block (" + fadingBlocksPerFrame() + " per frame)";
-        return String.format(java.util.Locale.ROOT, "%s %dx%d, %s, %s fading, %d bits/frame (%d symbols, %d slots), %s",
+        String dec = code.isOrthogonal() ? "" : ", " + decoder.cliName() + " decoder";
+        return String.format(java.util.Locale.ROOT, "%s %dx%d, %s, %s fading, %d bits/frame (%d symbols, %d slots), %s%s",
                 code.name(), transmitAntennas, receiveAntennas, modulation.cliName(), fading.cliName(),
-                frameBits, symbolsPerFrame(), slotsPerFrame(), coherence);
+                frameBits, symbolsPerFrame(), slotsPerFrame(), coherence, dec);
     }
 }

@@ -17,6 +17,8 @@ public final class ScenarioSchema {
 
     private static final List<ScenarioKey> KEYS = List.of(
             new ScenarioKey("link", "code", "--code", Kind.TEXT, "space-time block code"),
+            new ScenarioKey("link", "code_file", "--code-file", Kind.TEXT, "a space-time code of your own"),
+            new ScenarioKey("link", "decoder", "--decoder", Kind.TEXT, "mf, zf, mmse"),
             new ScenarioKey("link", "tx", "--tx", Kind.WHOLE, "transmit antennas"),
             new ScenarioKey("link", "rx", "--rx", Kind.WHOLE, "receive antennas"),
             new ScenarioKey("link", "modulation", "--mod", Kind.TEXT, "bpsk, qpsk, 16qam, 64qam, 256qam"),

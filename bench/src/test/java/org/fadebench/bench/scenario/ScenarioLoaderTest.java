@@ -54,7 +54,7 @@ class ScenarioLoaderTest {
         "'sweep:\\n  snr_db: [0, x]' | t.yaml line 2, key sweep.snr_db: expected a number, START:STEP:STOP, or a list of numbers, got 'x'",
         "'output:\\n  quiet: maybe' | t.yaml line 2, key output.quiet: expected true or false, got 'maybe'",
         "'link:\\n  tx: [1, 2]' | t.yaml line 2, key link.tx: expected a whole number, got a list",
-        "'link: 3' | t.yaml line 1: section 'link' must be a mapping of keys code, tx, rx",
+        "'link: 3' | t.yaml line 1: section 'link' must be a mapping of keys code, code_file, decoder",
         "'- a\\n- b' | t.yaml line 1: the top level must be a mapping of sections link, sweep, output",
         "'link:\\n  rx: 1\\n  rx: 2' | t.yaml line 3: key 'link.rx' appears twice",
         "'link: {code: [unclosed' | t.yaml line 1: not valid YAML",

@@ -143,6 +143,11 @@ public final class SpaceTimeCodes {
         return String.join(", ", CATALOGUE.keySet());
     }
 
+    /** Whether {@code code} is one of the built-in codes (not one read from a file). */
+    public static boolean isCatalogued(SpaceTimeCode code) {
+        return CATALOGUE.get(code.name()) == code;
+    }
+
     /** The first {@code columns} columns of a real design over the same columns conjugated. */
     private static SpaceTimeCode halfRate(String name, String[] realDesign, int columns, double scale,
                                           String scaleNote) {
