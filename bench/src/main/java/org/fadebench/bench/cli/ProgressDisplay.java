@@ -68,7 +68,7 @@ final class ProgressDisplay implements AutoCloseable {
         String eta = "";
         if (steps > 0) {
             long rest = (long) (elapsedNanos * (double) (bar.getMax() - steps) / steps);
-            eta = " ETA<" + format(Duration.ofNanos(rest));
+            eta = ", about " + format(Duration.ofNanos(rest)) + " left";
         }
         bar.setExtraMessage(String.format(Locale.ROOT, "%s dB: %d frames, %d errors, FER %s%s",
                 Numbers.db(snrDb[p.point()]), c.frames(), c.frameErrors(), Numbers.shortRate(c.fer()), eta));
