@@ -53,6 +53,34 @@ public final class Draws {
         return gaussian.sample();
     }
 
+    /** Fills {@code out[off .. off+n)} with independent N(0, sigma²) draws. */
+    public void fillGaussian(double[] out, int off, int n, double sigma) {
+        final NormalizedGaussianSampler g = gaussian;
+        for (int i = off, end = off + n; i < end; i++) {
+            out[i] = sigma * g.sample();
+        }
+    }
+
+    /**
+     * Fills {@code labels[off .. off+n)} with independent uniform labels of {@code bits} bits each
+     * (1 to 16), i.e. the bits of n symbols; 64-bit draws are used up {@code 64 / bits} labels at a
+     * time.
+     */
+    public void fillLabels(int[] labels, int off, int n, int bits) {
+        final int perDraw = 64 / bits;
+        final long mask = (1L << bits) - 1;
+        int i = off;
+        int end = off + n;
+        while (i < end) {
+            long r = uniform.nextLong();
+            int take = Math.min(perDraw, end - i);
+            for (int j = 0; j < take; j++) {
+                labels[i++] = (int) (r & mask);
+                r >>>= bits;
+            }
+        }
+    }
+
     /** Fills {@code bits[off .. off+n)} with independent fair bits, one per byte. */
     public void fillBits(byte[] bits, int off, int n) {
         int i = off;

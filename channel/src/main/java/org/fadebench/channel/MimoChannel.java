@@ -19,10 +19,57 @@ public final class MimoChannel {
      */
     public static void apply(double[] h, int nr, int mt, double[] x, int xRow, int slots,
                              double n0, Draws draws, double[] y, int yRow) {
-        double sigma = Math.sqrt(0.5 * n0);
+        int yo = 2 * yRow * nr;
+        // noise first, drawn in the order of the receive grid (slot, antenna, re, im) ...
+        draws.fillGaussian(y, yo, 2 * slots * nr, Math.sqrt(0.5 * n0));
+        // ... then the signal is added on top
+        int xo = 2 * xRow * mt;
+        if (mt == 1) {
+            addSingleTransmitter(h, nr, x, xo, slots, y, yo);
+        } else if (mt == 2) {
+            addTwoTransmitters(h, nr, x, xo, slots, y, yo);
+        } else {
+            addGeneral(h, nr, mt, x, xo, slots, y, yo);
+        }
+    }
+
+    private static void addSingleTransmitter(double[] h, int nr, double[] x, int xo, int slots, double[] y, int yo) {
         for (int s = 0; s < slots; s++) {
-            int xo = 2 * (xRow + s) * mt;
-            int yo = 2 * (yRow + s) * nr;
+            double xr = x[xo + 2 * s];
+            double xi = x[xo + 2 * s + 1];
+            int o = yo + 2 * s * nr;
+            for (int r = 0; r < nr; r++) {
+                double hr = h[2 * r];
+                double hi = h[2 * r + 1];
+                y[o + 2 * r] += hr * xr - hi * xi;
+                y[o + 2 * r + 1] += hr * xi + hi * xr;
+            }
+        }
+    }
+
+    private static void addTwoTransmitters(double[] h, int nr, double[] x, int xo, int slots, double[] y, int yo) {
+        for (int s = 0; s < slots; s++) {
+            int xs = xo + 4 * s;
+            double x1r = x[xs];
+            double x1i = x[xs + 1];
+            double x2r = x[xs + 2];
+            double x2i = x[xs + 3];
+            int o = yo + 2 * s * nr;
+            for (int r = 0; r < nr; r++) {
+                double h1r = h[4 * r];
+                double h1i = h[4 * r + 1];
+                double h2r = h[4 * r + 2];
+                double h2i = h[4 * r + 3];
+                y[o + 2 * r] += h1r * x1r - h1i * x1i + h2r * x2r - h2i * x2i;
+                y[o + 2 * r + 1] += h1r * x1i + h1i * x1r + h2r * x2i + h2i * x2r;
+            }
+        }
+    }
+
+    private static void addGeneral(double[] h, int nr, int mt, double[] x, int xo, int slots, double[] y, int yo) {
+        for (int s = 0; s < slots; s++) {
+            int xs = xo + 2 * s * mt;
+            int o = yo + 2 * s * nr;
             for (int r = 0; r < nr; r++) {
                 int ho = 2 * r * mt;
                 double re = 0;
@@ -30,13 +77,13 @@ public final class MimoChannel {
                 for (int t = 0; t < mt; t++) {
                     double hr = h[ho + 2 * t];
                     double hi = h[ho + 2 * t + 1];
-                    double xr = x[xo + 2 * t];
-                    double xi = x[xo + 2 * t + 1];
+                    double xr = x[xs + 2 * t];
+                    double xi = x[xs + 2 * t + 1];
                     re += hr * xr - hi * xi;
                     im += hr * xi + hi * xr;
                 }
-                y[yo + 2 * r] = re + sigma * draws.gaussian();
-                y[yo + 2 * r + 1] = im + sigma * draws.gaussian();
+                y[o + 2 * r] += re;
+                y[o + 2 * r + 1] += im;
             }
         }
     }

@@ -100,6 +100,48 @@ public final class QamConstellation {
     }
 
     /**
+     * Maps symbol labels to symbols: label bits are the symbol's bits, its first bit most
+     * significant (so the label of bits b0 b1 b2 b3 is b0·8 + b1·4 + b2·2 + b3), exactly as
+     * {@link #map} would map those bits.
+     */
+    public void mapLabels(int[] labels, int labelOffset, double[] symbols, int symOffset, int count) {
+        final int m = bitsPerAxis;
+        final int mask = (1 << m) - 1;
+        final double[] amp = amplitudeOfLabel;
+        int o = symOffset << 1;
+        if (twoAxes) {
+            for (int n = 0; n < count; n++) {
+                int label = labels[labelOffset + n];
+                symbols[o++] = amp[label >>> m];
+                symbols[o++] = amp[label & mask];
+            }
+        } else {
+            for (int n = 0; n < count; n++) {
+                symbols[o++] = amp[labels[labelOffset + n]];
+                symbols[o++] = 0.0;
+            }
+        }
+    }
+
+    /** Hard decisions as labels (see {@link #mapLabels}), by per-axis slicing. */
+    public void demapLabels(double[] estimates, int symOffset, int[] labels, int labelOffset, int count) {
+        final int m = bitsPerAxis;
+        final int[] label = labelOfLevel;
+        int e = symOffset << 1;
+        if (twoAxes) {
+            for (int n = 0; n < count; n++) {
+                labels[labelOffset + n] = (label[slice(estimates[e])] << m) | label[slice(estimates[e + 1])];
+                e += 2;
+            }
+        } else {
+            for (int n = 0; n < count; n++) {
+                labels[labelOffset + n] = label[slice(estimates[e])];
+                e += 2;
+            }
+        }
+    }
+
+    /**
      * Hard decisions by per-axis slicing (minimum Euclidean distance, no search over points).
      *
      * @param estimates interleaved complex symbol estimates on the unit-energy scale

@@ -21,9 +21,9 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
- * One idea: the whole Alamouti 2x2, 16-QAM, 512-symbol frame, hard decisions, per-frame Rayleigh
- * fading, at 15 dB. Score: data QAM symbols per second on one thread. Run with {@code -prof gc} to
- * see bytes allocated per frame (expected: 0 in steady state).
+ * One idea: the whole frame, hard decisions, per-frame Rayleigh fading, at 15 dB: Alamouti 2x2
+ * 16-QAM and G4 4x1 QPSK, 512 symbols each. Score: data QAM symbols per second on one thread.
+ * Run with {@code -prof gc} to see bytes allocated per frame (expected: 0 in steady state).
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)
@@ -36,6 +36,7 @@ public class FullFrameBenchmark {
     private static final int SYMBOLS = 512;
 
     private LinkChain chain;
+    private LinkChain g4Chain;
     private Draws draws;
     private FrameCounters counters;
     private double n0;
@@ -45,6 +46,8 @@ public class FullFrameBenchmark {
         LinkSettings link = new LinkSettings(Modulation.QAM16, SpaceTimeCodes.ALAMOUTI, 2, 2, Fading.RAYLEIGH,
                 SYMBOLS * 4, 0);
         chain = new LinkChain(link);
+        g4Chain = new LinkChain(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.G4, 4, 1, Fading.RAYLEIGH,
+                SYMBOLS * 2, 0));
         draws = Draws.of(1, 0, 0);
         counters = new FrameCounters();
         n0 = Math.pow(10, -1.5);
@@ -54,6 +57,13 @@ public class FullFrameBenchmark {
     @OperationsPerInvocation(SYMBOLS)
     public long alamouti2x2Qam16Frame() {
         chain.runFrame(draws, n0, counters);
+        return counters.bitErrors();
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(SYMBOLS)
+    public long g4x1QpskFrame() {
+        g4Chain.runFrame(draws, n0, counters);
         return counters.bitErrors();
     }
 }

@@ -12,7 +12,7 @@ import org.fadebench.modem.QamConstellation;
 /**
  * One link, end to end, for one frame at a time:
  * <pre>
- * info bits → QAM map → space-time encode → per fading block: draw H, Y = X Hᵀ + N
+ * info bits (as symbol labels) → QAM map → space-time encode → per fading block: draw H, Y = X Hᵀ + N
  *   → combine with H (perfect CSI) → slice → count bit, symbol and frame errors
  * </pre>
  * A chain owns all its buffers and allocates nothing per frame; each worker thread has its own.
@@ -38,8 +38,8 @@ public final class LinkChain {
     private final int blocksPerFade;
     private final int bitsPerSymbol;
 
-    private final byte[] bits;
-    private final byte[] decided;
+    private final int[] sent;
+    private final int[] decided;
     private final double[] txSymbols;
     private final double[] estimates;
     private final double[] gain;
@@ -64,8 +64,8 @@ public final class LinkChain {
         this.blocksPerFrame = settings.blocksPerFrame();
         this.blocksPerFade = settings.effectiveCoherenceSlots() / t;
         this.bitsPerSymbol = settings.modulation().bitsPerSymbol();
-        this.bits = new byte[frameBits];
-        this.decided = new byte[frameBits];
+        this.sent = new int[symbols];
+        this.decided = new int[symbols];
         this.txSymbols = new double[2 * symbols];
         this.estimates = new double[2 * symbols];
         this.gain = new double[symbols];
@@ -86,8 +86,8 @@ public final class LinkChain {
             combiner = settings.code().newCombiner(nr, Decoder.MMSE, n0);
             combinerN0 = n0;
         }
-        draws.fillBits(bits, 0, frameBits);
-        constellation.map(bits, 0, txSymbols, 0, symbols);
+        draws.fillLabels(sent, 0, symbols, bitsPerSymbol);
+        constellation.mapLabels(sent, 0, txSymbols, 0, symbols);
         for (int first = 0; first < blocksPerFrame; first += blocksPerFade) {
             int blocks = Math.min(blocksPerFade, blocksPerFrame - first);
             fading.draw(draws, nr, mt, h);
@@ -96,16 +96,12 @@ public final class LinkChain {
             combiner.setChannel(h);
             combiner.combine(received, 0, blocks, estimates, gain, first * k);
         }
-        constellation.demapHard(estimates, 0, decided, 0, symbols);
+        constellation.demapLabels(estimates, 0, decided, 0, symbols);
         int bitErrors = 0;
         int symbolErrors = 0;
-        int b = 0;
         for (int s = 0; s < symbols; s++) {
-            int wrong = 0;
-            for (int j = 0; j < bitsPerSymbol; j++, b++) {
-                wrong += bits[b] ^ decided[b];
-            }
-            bitErrors += wrong;
+            int wrong = sent[s] ^ decided[s];
+            bitErrors += Integer.bitCount(wrong);
             symbolErrors += wrong != 0 ? 1 : 0;
         }
         counters.addFrame(frameBits, bitErrors, symbols, symbolErrors);

@@ -1,0 +1,81 @@
+package org.fadebench.bench.perf;
+
+import java.util.concurrent.TimeUnit;
+import org.fadebench.channel.Draws;
+import org.fadebench.modem.Modulation;
+import org.fadebench.modem.QamConstellation;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Measurement;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OperationsPerInvocation;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.Warmup;
+
+/** One idea each: QAM mapping, hard demapping, max-log LLR demapping of 512 symbols; score in symbols/s. */
+@State(Scope.Thread)
+@BenchmarkMode(Mode.Throughput)
+@OutputTimeUnit(TimeUnit.SECONDS)
+@Warmup(iterations = 3, time = 1)
+@Measurement(iterations = 5, time = 1)
+@Fork(1)
+public class ModemBenchmark {
+
+    private static final int SYMBOLS = 512;
+
+    @Param({"qpsk", "16qam", "64qam"})
+    public String modulation;
+
+    private QamConstellation constellation;
+    private byte[] bits;
+    private byte[] decided;
+    private double[] symbols;
+    private double[] noisy;
+    private double[] gain;
+    private double[] llr;
+
+    @Setup
+    public void setUp() {
+        constellation = Modulation.fromCliName(modulation).constellation();
+        int b = constellation.bitsPerSymbol();
+        bits = new byte[SYMBOLS * b];
+        decided = new byte[SYMBOLS * b];
+        llr = new double[SYMBOLS * b];
+        symbols = new double[2 * SYMBOLS];
+        noisy = new double[2 * SYMBOLS];
+        gain = new double[SYMBOLS];
+        Draws d = Draws.of(5);
+        d.fillBits(bits, 0, bits.length);
+        constellation.map(bits, 0, symbols, 0, SYMBOLS);
+        for (int i = 0; i < noisy.length; i++) {
+            noisy[i] = symbols[i] + 0.1 * d.gaussian();
+        }
+        java.util.Arrays.fill(gain, 1.0);
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(SYMBOLS)
+    public double[] map() {
+        constellation.map(bits, 0, symbols, 0, SYMBOLS);
+        return symbols;
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(SYMBOLS)
+    public byte[] demapHard() {
+        constellation.demapHard(noisy, 0, decided, 0, SYMBOLS);
+        return decided;
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(SYMBOLS)
+    public double[] demapMaxLog() {
+        constellation.demapMaxLog(noisy, gain, 0, 0.1, llr, 0, SYMBOLS);
+        return llr;
+    }
+}

@@ -1,0 +1,99 @@
+package org.fadebench.bench.perf;
+
+import java.util.concurrent.TimeUnit;
+import java.util.random.RandomGenerator;
+import java.util.random.RandomGeneratorFactory;
+import org.apache.commons.rng.UniformRandomProvider;
+import org.apache.commons.rng.sampling.distribution.BoxMullerNormalizedGaussianSampler;
+import org.apache.commons.rng.sampling.distribution.MarsagliaNormalizedGaussianSampler;
+import org.apache.commons.rng.sampling.distribution.NormalizedGaussianSampler;
+import org.apache.commons.rng.sampling.distribution.ZigguratNormalizedGaussianSampler;
+import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
+import org.apache.commons.rng.simple.RandomSource;
+import org.fadebench.channel.Draws;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Measurement;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OperationsPerInvocation;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.Warmup;
+
+/**
+ * One idea: the cost of standard normal draws, which bound the whole simulation. {@code draw}
+ * compares samplers (score: draws per second); {@code alamouti2x2NoiseOnly} draws exactly the noise
+ * of 512 Alamouti 2x2 symbols (4 draws per symbol) through the simulator's own {@link Draws}, in
+ * symbols per second, the yardstick for the full frame.
+ */
+@State(Scope.Thread)
+@BenchmarkMode(Mode.Throughput)
+@OutputTimeUnit(TimeUnit.SECONDS)
+@Warmup(iterations = 3, time = 1)
+@Measurement(iterations = 5, time = 1)
+@Fork(1)
+public class NoiseBenchmark {
+
+    private static final int N = 1024;
+    private static final int SYMBOLS = 512;
+
+    @Param({"commons-ziggurat", "commons-ziggurat-old", "commons-marsaglia", "commons-boxmuller", "jdk17-xoshiro"})
+    public String sampler;
+
+    private NormalizedGaussianSampler commons;
+    private RandomGenerator jdk;
+    private Draws draws;
+    private final double[] out = new double[4 * SYMBOLS];
+
+    @Setup
+    public void setUp() {
+        UniformRandomProvider rng = RandomSource.XO_SHI_RO_256_PP.create(12345L);
+        switch (sampler) {
+            case "commons-ziggurat":
+                commons = ZigguratSampler.NormalizedGaussian.of(rng);
+                break;
+            case "commons-ziggurat-old":
+                commons = ZigguratNormalizedGaussianSampler.of(rng);
+                break;
+            case "commons-marsaglia":
+                commons = MarsagliaNormalizedGaussianSampler.of(rng);
+                break;
+            case "commons-boxmuller":
+                commons = BoxMullerNormalizedGaussianSampler.of(rng);
+                break;
+            case "jdk17-xoshiro":
+                jdk = RandomGeneratorFactory.of("Xoshiro256PlusPlus").create(12345L);
+                break;
+            default:
+                throw new IllegalArgumentException(sampler);
+        }
+        draws = Draws.of(1, 2, 3);
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(N)
+    public double draw() {
+        double s = 0;
+        if (jdk != null) {
+            for (int i = 0; i < N; i++) {
+                s += jdk.nextGaussian();
+            }
+        } else {
+            for (int i = 0; i < N; i++) {
+                s += commons.sample();
+            }
+        }
+        return s;
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(SYMBOLS)
+    public double[] alamouti2x2NoiseOnly() {
+        draws.fillGaussian(out, 0, out.length, 1.0);
+        return out;
+    }
+}
