@@ -60,8 +60,10 @@ public final class MimoChannel {
                 double h1i = h[4 * r + 1];
                 double h2r = h[4 * r + 2];
                 double h2i = h[4 * r + 3];
-                y[o + 2 * r] += h1r * x1r - h1i * x1i + h2r * x2r - h2i * x2i;
-                y[o + 2 * r + 1] += h1r * x1i + h1i * x1r + h2r * x2i + h2i * x2r;
+                double re = Math.fma(h1r, x1r, Math.fma(-h1i, x1i, Math.fma(h2r, x2r, Math.fma(-h2i, x2i, y[o + 2 * r]))));
+                double im = Math.fma(h1r, x1i, Math.fma(h1i, x1r, Math.fma(h2r, x2i, Math.fma(h2i, x2r, y[o + 2 * r + 1]))));
+                y[o + 2 * r] = re;
+                y[o + 2 * r + 1] = im;
             }
         }
     }

@@ -88,4 +88,26 @@ public class CombinerBenchmark {
         g4Combiner.combine(rx41, 0, g4Blocks, estimates, gain, 0);
         return estimates;
     }
+
+    @Benchmark
+    @OperationsPerInvocation(SYMBOLS)
+    public double[] alamoutiEncodeOnly() {
+        alamoutiEncoder.encode(symbols, 0, SYMBOLS / 2, grid22, 0);
+        return grid22;
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(SYMBOLS)
+    public double[] channel2x2Only() {
+        MimoChannel.apply(h22, 2, 2, grid22, 0, SYMBOLS, 0.05, draws, rx22, 0);
+        return rx22;
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(SYMBOLS)
+    public double[] alamoutiCombineOnly() {
+        alamoutiCombiner.setChannel(h22);
+        alamoutiCombiner.combine(rx22, 0, SYMBOLS / 2, estimates, gain, 0);
+        return estimates;
+    }
 }

@@ -77,11 +77,11 @@ public final class AlamoutiKernel implements Combiner {
                 double a2r = y[y2 + 2 * r];
                 double a2i = y[y2 + 2 * r + 1];
                 // z1 += conj(h1) y1 + h2 conj(y2)
-                z1r += h1r * a1r + h1i * a1i + h2r * a2r + h2i * a2i;
-                z1i += h1r * a1i - h1i * a1r + h2i * a2r - h2r * a2i;
+                z1r = Math.fma(h1r, a1r, Math.fma(h1i, a1i, Math.fma(h2r, a2r, Math.fma(h2i, a2i, z1r))));
+                z1i = Math.fma(h1r, a1i, Math.fma(-h1i, a1r, Math.fma(h2i, a2r, Math.fma(-h2r, a2i, z1i))));
                 // z2 += conj(h2) y1 - h1 conj(y2)
-                z2r += h2r * a1r + h2i * a1i - h1r * a2r - h1i * a2i;
-                z2i += h2r * a1i - h2i * a1r - h1i * a2r + h1r * a2i;
+                z2r = Math.fma(h2r, a1r, Math.fma(h2i, a1i, Math.fma(-h1r, a2r, Math.fma(-h1i, a2i, z2r))));
+                z2i = Math.fma(h2r, a1i, Math.fma(-h2i, a1r, Math.fma(-h1i, a2r, Math.fma(h1r, a2i, z2i))));
             }
             int so = symOffset + 2 * blk;
             est[2 * so] = z1r * scale;
