@@ -22,7 +22,10 @@ public record BoundSettings(int transmitAntennas, int receiveAntennas, double co
                             double spectralEfficiency, MutualInformation.Kind information, int mimoDraws,
                             long mimoSeed) {
 
-    /** Draws per point: ten outages, the usual minimum for a count, down to p = 1e-4. */
+    /**
+     * Draws per point: ten outages, the usual minimum for a count, down to p = 1e-4. A 4x4 point
+     * takes about 30 ms on one core (JMH {@code OutagePointBenchmark}: ≈ 3.8 M draws/s).
+     */
     public static final int DEFAULT_MIMO_DRAWS = 100_000;
     public static final long DEFAULT_MIMO_SEED = 1L;
 
