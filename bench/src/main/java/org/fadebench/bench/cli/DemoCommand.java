@@ -65,7 +65,7 @@ final class DemoCommand implements Callable<Integer> {
         }
         w.println();
         w.println("With two receive antennas the FER falls about twice as fast with SNR (diversity 4 against 2).");
-        w.println("Outputs: " + String.join(", ", folders) + " (results.csv, results.json, scenario.yaml).");
+        w.println("Outputs: " + String.join(", ", folders) + " (results.csv, results.json, fer.png, fer.svg, scenario.yaml).");
         return ExitCodes.OK;
     }
 

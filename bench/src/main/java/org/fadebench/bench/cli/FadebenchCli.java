@@ -10,7 +10,7 @@ import picocli.CommandLine.Command;
 /** The {@code fadebench} command: {@code run}, {@code demo}. */
 @Command(name = "fadebench", mixinStandardHelpOptions = true, versionProvider = FadebenchCli.Version.class,
         description = "Monte Carlo link-level bench for multi-antenna diversity links over block fading.",
-        subcommands = {RunCommand.class, CodesCommand.class, DemoCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {RunCommand.class, BoundsCommand.class, CodesCommand.class, DemoCommand.class, CommandLine.HelpCommand.class})
 public final class FadebenchCli implements Runnable {
 
     @CommandLine.Spec
@@ -71,7 +71,7 @@ public final class FadebenchCli implements Runnable {
     @Override
     public void run() {
         throw new CommandLine.ParameterException(spec.commandLine(),
-                "choose a command: run, codes, demo (or --help)");
+                "choose a command: run, bounds, codes, demo (or --help)");
     }
 
     /** Version from the jar manifest, or "development" when run from classes. */

@@ -1,12 +1,10 @@
 package org.fadebench.bench.cli;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.Iterator;
-import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.function.Supplier;
+import org.fadebench.bench.analysis.BoundSettings;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.report.Archive;
 import org.fadebench.bench.scenario.Scenario;
@@ -17,8 +15,6 @@ import org.fadebench.bench.sweep.StopRules;
 import org.fadebench.channel.Fading;
 import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCode;
-import org.fadebench.coding.stbc.SpaceTimeCodeFile;
-import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.Modulation;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -38,28 +34,12 @@ final class RunCommand implements Callable<Integer> {
     @Parameters(arity = "0..1", paramLabel = "SCENARIO", description = "A scenario file (YAML); see README.")
     Path scenarioFile;
 
-    @Option(names = "--code", paramLabel = "NAME",
-            description = "Space-time block code: ${COMPLETION-CANDIDATES} (default: none; see 'fadebench codes').",
-            completionCandidates = CodeNames.class)
-    String code;
-
-    @Option(names = "--code-file", paramLabel = "FILE",
-            description = "A linear space-time code of your own, from a YAML or JSON file (see README), instead of --code.")
-    Path codeFile;
+    @CommandLine.Mixin
+    LinkOptions linkOptions = new LinkOptions();
 
     @Option(names = "--decoder", paramLabel = "NAME",
             description = "Linear decoder: mf, zf, mmse (default: mf for orthogonal codes, mmse otherwise).")
     String decoder;
-
-    @Option(names = "--tx", paramLabel = "N", description = "Transmit antennas (default: what the code needs).")
-    Integer tx;
-
-    @Option(names = "--rx", paramLabel = "N", defaultValue = "1", description = "Receive antennas (default: ${DEFAULT-VALUE}).")
-    int rx;
-
-    @Option(names = "--mod", paramLabel = "NAME", defaultValue = "qpsk",
-            description = "Modulation: bpsk, qpsk, 16qam, 64qam, 256qam (default: ${DEFAULT-VALUE}).")
-    String modulation;
 
     @Option(names = "--fading", paramLabel = "NAME", defaultValue = "rayleigh",
             description = "Fading model: rayleigh, none (default: ${DEFAULT-VALUE}).")
@@ -102,6 +82,13 @@ final class RunCommand implements Callable<Integer> {
 
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
     Integer threads;
+
+    @CommandLine.Mixin
+    BoundOptions boundOptions = new BoundOptions();
+
+    @Option(names = "--target-fer", paramLabel = "FER", defaultValue = "0.01",
+            description = "FER at which the SNR and the gap to each outage bound are reported (default: ${DEFAULT-VALUE}).")
+    double targetFer;
 
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "fadebench-out",
             description = "Folder for the outputs (default: ${DEFAULT-VALUE}).")
@@ -208,26 +195,26 @@ final class RunCommand implements Callable<Integer> {
 
     /** Turns the options into a plan, or throws {@link InvalidInputException} naming the option. */
     RunPlan plan(Scenario scenario) {
-        Modulation mod = parse("--mod", () -> Modulation.fromCliName(modulation));
-        if (code != null && codeFile != null) {
-            throw new InvalidInputException("--code-file " + codeFile + ": give either --code or --code-file, not both");
-        }
-        SpaceTimeCode stbc = codeFile != null
-                ? parse("--code-file", () -> SpaceTimeCodeFile.read(codeFile))
-                : parse("--code", () -> SpaceTimeCodes.byName(code == null ? "none" : code));
+        Modulation mod = linkOptions.modulation();
+        SpaceTimeCode stbc = linkOptions.code();
         Decoder dec = decoder != null ? parse("--decoder", () -> Decoder.fromCliName(decoder))
                 : stbc.isOrthogonal() ? Decoder.MF : Decoder.MMSE;
         Fading fad = parse("--fading", () -> Fading.fromCliName(fading));
         double[] snrDb = parse(null, () -> SnrGrid.parse(snr));
         int bits = frameBits != null ? frameBits : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
-        int nTx = tx != null ? tx : stbc.transmitAntennas();
-        LinkSettings link = parse(null, () -> new LinkSettings(mod, stbc, nTx, rx, fad, bits, coherence, dec));
+        int nTx = linkOptions.transmitAntennas(stbc);
+        LinkSettings link = parse(null, () -> new LinkSettings(mod, stbc, nTx, linkOptions.rx, fad, bits, coherence,
+                dec));
         StopRules rules = parse(null, () -> new StopRules(minErrors, maxFrames, maxSeconds, ferFloor));
         int nThreads = SweepJob.threads(threads);
         if (!(confidence > 0 && confidence < 1)) {
             throw new InvalidInputException("--confidence must lie strictly between 0 and 1 (e.g. 0.95), got "
                     + confidence);
         }
+        if (!(targetFer > 0 && targetFer < 1)) {
+            throw new InvalidInputException("--target-fer must lie strictly between 0 and 1 (e.g. 0.01), got " + targetFer);
+        }
+        BoundSettings bounds = boundOptions.settings(link);
         Path archivePath = null;
         if (archive != null) {
             String problem = Archive.problem(archive);
@@ -237,7 +224,7 @@ final class RunCommand implements Callable<Integer> {
             archivePath = Path.of(archive);
         }
         return new RunPlan(link, snr.trim(), snrDb, rules, seed, nThreads, confidence, SweepJob.checkOutDir(out),
-                archivePath, resume, quiet, scenario, codeFile);
+                archivePath, resume, quiet, scenario, linkOptions.codeFile, bounds, targetFer);
     }
 
     /** Runs a parser; its IllegalArgumentException becomes invalid input, prefixed with the option. */
@@ -246,18 +233,6 @@ final class RunCommand implements Callable<Integer> {
             return parser.get();
         } catch (IllegalArgumentException e) {
             throw new InvalidInputException(option == null ? e.getMessage() : option + ": " + e.getMessage());
-        }
-    }
-
-    /** Catalogue names for the help text. */
-    static final class CodeNames implements Iterable<String> {
-        @Override
-        public Iterator<String> iterator() {
-            List<String> names = new ArrayList<>();
-            for (SpaceTimeCode c : SpaceTimeCodes.all()) {
-                names.add(c.name());
-            }
-            return names.iterator();
         }
     }
 }

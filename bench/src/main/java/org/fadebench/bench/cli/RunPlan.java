@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.fadebench.bench.analysis.BoundSettings;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.scenario.Scenario;
 import org.fadebench.bench.sweep.StopRules;
@@ -16,10 +17,11 @@ import org.fadebench.coding.stbc.SpaceTimeCodes;
  * @param scenario the scenario file it came from, or null
  * @param archive  the archive to write, or null
  * @param codeFile the file the space-time code came from, or null for a catalogue code
+ * @param bounds   the outage bounds to compare with, or null when they do not apply to the code
  */
 record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rules, long seed, int threads,
                double confidence, Path outDir, Path archive, boolean resume, boolean quiet, Scenario scenario,
-               Path codeFile) {
+               Path codeFile, BoundSettings bounds, double targetFer) {
 
     /** The settings as results.json records them (option names without dashes). */
     Map<String, Object> settings() {
@@ -39,6 +41,10 @@ record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rule
         m.put("max_seconds", rules.maxSeconds());
         m.put("fer_floor", rules.ferFloor());
         m.put("confidence", confidence);
+        m.put("target_fer", targetFer);
+        m.put("rate", bounds == null ? null : bounds.spectralEfficiency());
+        m.put("mi", bounds == null ? null : bounds.information().cliName());
+        m.put("outage_draws", bounds == null ? null : bounds.mimoDraws());
         m.put("seed", seed);
         m.put("threads", threads);
         m.put("out", outDir.toString());
@@ -81,6 +87,13 @@ record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rule
         y.append("  fer_floor: ").append(rules.ferFloor()).append('\n');
         y.append("  confidence: ").append(confidence).append('\n');
         y.append("  seed: ").append(seed).append('\n');
+        y.append("analysis:\n");
+        y.append("  target_fer: ").append(targetFer).append('\n');
+        if (bounds != null) {
+            y.append("  rate: ").append(bounds.spectralEfficiency()).append('\n');
+            y.append("  mi: ").append(bounds.information().cliName()).append('\n');
+            y.append("  outage_draws: ").append(bounds.mimoDraws()).append('\n');
+        }
         return y.toString();
     }
 }

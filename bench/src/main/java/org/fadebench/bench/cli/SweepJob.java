@@ -8,7 +8,10 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.fadebench.bench.analysis.BoundCurves;
+import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.bench.report.Archive;
+import org.fadebench.bench.report.FerPlot;
 import org.fadebench.bench.report.AtomicFiles;
 import org.fadebench.bench.report.Checkpoint;
 import org.fadebench.bench.report.Numbers;
@@ -19,6 +22,7 @@ import org.fadebench.bench.sweep.PointResult;
 import org.fadebench.bench.sweep.PointState;
 import org.fadebench.bench.sweep.SweepEngine;
 import org.fadebench.bench.sweep.SweepOutcome;
+import org.fadebench.channel.Fading;
 
 /**
  * Runs a {@link RunPlan}: prints the table as points finish, shows progress on a terminal, keeps a
@@ -86,37 +90,46 @@ final class SweepJob {
         }
         ProgressDisplay progress = ProgressDisplay.startIfTerminal(plan.snrDb(), plan.quiet());
         long start = System.nanoTime();
-        SweepOutcome outcome;
+        // the handler stays installed while the outputs are written: a signal then changes nothing
         try (SignalStop signals = SignalStop.install(engine::requestStop)) {
-            outcome = engine.run(plan.snrDb(), resume, new SweepEngine.Listener() {
-                private long lastCheckpoint;
-
-                @Override
-                public void pointDone(PointResult result) {
-                    if (talk) {
-                        ProgressDisplay.clearLine(progress, System.err);
-                        table.row(result);
-                    }
+            SweepOutcome outcome;
+            try {
+                outcome = engine.run(plan.snrDb(), resume, listener(table, progress, fingerprint, start));
+            } finally {
+                if (progress != null) {
+                    progress.close();
                 }
-
-                @Override
-                public void progress(SweepEngine.Progress p) {
-                    if (progress != null) {
-                        progress.update(p, System.nanoTime() - start);
-                    }
-                    long merged = p.states().stream().mapToLong(PointState::mergedBatches).sum();
-                    if (merged != lastCheckpoint) {
-                        lastCheckpoint = merged;
-                        writeCheckpoint(fingerprint, p.states());
-                    }
-                }
-            });
-        } finally {
-            if (progress != null) {
-                progress.close();
             }
+            return finish(outcome, fingerprint);
         }
-        return finish(outcome, fingerprint);
+    }
+
+    /** Prints finished points, draws progress and keeps the checkpoint current. */
+    private SweepEngine.Listener listener(ResultsTable table, ProgressDisplay progress, String fingerprint, long start) {
+        boolean talk = !plan.quiet();
+        return new SweepEngine.Listener() {
+            private long lastCheckpoint;
+
+            @Override
+            public void pointDone(PointResult result) {
+                if (talk) {
+                    ProgressDisplay.clearLine(progress, System.err);
+                    table.row(result);
+                }
+            }
+
+            @Override
+            public void progress(SweepEngine.Progress p) {
+                if (progress != null) {
+                    progress.update(p, System.nanoTime() - start);
+                }
+                long merged = p.states().stream().mapToLong(PointState::mergedBatches).sum();
+                if (merged != lastCheckpoint) {
+                    lastCheckpoint = merged;
+                    writeCheckpoint(fingerprint, p.states());
+                }
+            }
+        };
     }
 
     private int finish(SweepOutcome outcome, String fingerprint) {
@@ -132,17 +145,30 @@ final class SweepJob {
             }
         }
         Path dir = plan.outDir();
+        List<PointResult> results = outcome.results();
+        BoundCurves curves = boundsApply() && !results.isEmpty()
+                ? BoundCurves.compute(plan.bounds(), results.stream().mapToDouble(PointResult::snrDb).toArray())
+                : null;
+        RunSummary summary = RunSummary.of(outcome.complete(), curves, plan.targetFer());
+        if (!plan.quiet()) {
+            summary.lines().forEach(out::println);
+        }
         List<Path> written = new ArrayList<>();
         try {
             Path csv = dir.resolve("results.csv");
-            ResultsCsv.write(csv, plan.link(), plan.seed(), plan.confidence(), outcome.results(), interrupted);
+            ResultsCsv.write(csv, plan.link(), plan.seed(), plan.confidence(), results, interrupted, curves);
             written.add(csv);
             Path json = dir.resolve("results.json");
             double seconds = outcome.nanos() * 1e-9;
             ResultsJson.Run run = new ResultsJson.Run(plan.settings(), plan.link(), plan.seed(), outcome.results(),
-                    !interrupted, outcome.stopReason(), outcome.framesSimulated(), seconds, plan.threads());
+                    !interrupted, outcome.stopReason(), outcome.framesSimulated(), seconds, plan.threads(), summary);
             ResultsJson.write(json, run);
             written.add(json);
+            if (!results.isEmpty()) {
+                FerPlot.write(dir, plan.link(), results, plan.confidence(), curves);
+                written.add(dir.resolve(FerPlot.PNG_FILE));
+                written.add(dir.resolve(FerPlot.SVG_FILE));
+            }
             Path scenario = dir.resolve("scenario.yaml");
             AtomicFiles.writeString(scenario, plan.scenario() != null ? plan.scenario().text() : plan.asScenarioYaml());
             written.add(scenario);
@@ -171,6 +197,11 @@ final class SweepJob {
         }
         out.flush();
         return interrupted ? INTERRUPTED : ExitCodes.OK;
+    }
+
+    /** The outage bounds assume i.i.d. Rayleigh fading and, for the code bounds, an orthogonal code. */
+    private boolean boundsApply() {
+        return plan.bounds() != null && plan.link().fading() == Fading.RAYLEIGH;
     }
 
     private List<PointState> readCheckpoint(String fingerprint) {

@@ -101,6 +101,7 @@ public final class FerPlot {
      * into {@code directory}, each atomically.
      *
      * @param confidence the level of the points' intervals, for the subtitle (e.g. 0.95)
+     * @param bounds     the outage bounds to draw, or null when they do not apply to the channel
      */
     public static void write(Path directory, LinkSettings link, List<PointResult> points, double confidence,
                              BoundCurves bounds) throws IOException {
@@ -135,12 +136,17 @@ public final class FerPlot {
         plot.setDomainAxis(snrAxis());
         plot.setRangeAxis(rateAxis(floor));
         addSimulated(plot, points, floor);
-        addBounds(plot, link, bounds, floor);
+        if (bounds != null) {
+            addBounds(plot, link, bounds, floor);
+        }
 
         JFreeChart chart = new JFreeChart(title(link), new Font(FONT, Font.BOLD, 21), plot, false);
         chart.setBackgroundPaint(Color.WHITE);
         chart.setPadding(new RectangleInsets(8, 8, 12, 20));
-        TextTitle subtitle = new TextTitle(subtitle(bounds.settings(), confidence), new Font(FONT, Font.PLAIN, 14));
+        String sub = bounds != null ? subtitle(bounds.settings(), confidence)
+                : String.format(Locale.ROOT, "bars: %s %% confidence intervals   ·   no outage bounds for this channel",
+                        new java.math.BigDecimal(String.valueOf(100 * confidence)).stripTrailingZeros().toPlainString());
+        TextTitle subtitle = new TextTitle(sub, new Font(FONT, Font.PLAIN, 14));
         subtitle.setPaint(new Color(0x444444));
         subtitle.setPadding(new RectangleInsets(2, 0, 10, 0));
         chart.addSubtitle(subtitle);

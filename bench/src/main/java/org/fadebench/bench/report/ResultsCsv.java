@@ -3,6 +3,9 @@ package org.fadebench.bench.report;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
+import org.fadebench.bench.analysis.BoundCurves;
+import org.fadebench.bench.analysis.BoundPoint;
+import org.fadebench.bench.analysis.BoundSettings;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
@@ -16,7 +19,8 @@ public final class ResultsCsv {
 
     /** The column names, in order. */
     public static final String HEADER = "snr_db,frames,frame_errors,fer,bits,bit_errors,ber,ebn0_db,"
-            + "fer_ci_low,fer_ci_high,ber_ci_low,ber_ci_high,symbols,symbol_errors,ser";
+            + "fer_ci_low,fer_ci_high,ber_ci_low,ber_ci_high,symbols,symbol_errors,ser,"
+            + "p_out_mimo,p_out_stbc,p_out_qam,p_out_mimo_ci_low,p_out_mimo_ci_high";
 
     /** The SNR convention, stated in every output. */
     public static final String SNR_CONVENTION = "snr_db = total transmitted energy per channel use / N0, "
@@ -27,7 +31,7 @@ public final class ResultsCsv {
 
     /** The file's text. */
     public static String text(LinkSettings link, long seed, double confidence, List<PointResult> results,
-                              boolean interrupted) {
+                              boolean interrupted, BoundCurves bounds) {
         StringBuilder w = new StringBuilder();
         String level = Numbers.db(100 * confidence) + " %";
         w.append("# fadebench results: ").append(link.describe()).append('\n');
@@ -37,12 +41,25 @@ public final class ResultsCsv {
                 .append(" information bits per channel use)\n");
         w.append("# fer_ci_*: two-sided ").append(level).append(" Clopper-Pearson interval over frames; ber_ci_*: ")
                 .append(level).append(" interval with frames as clusters of bits (see README)\n");
+        if (bounds != null) {
+            BoundSettings b = bounds.settings();
+            w.append("# p_out_*: outage probability at R = ").append(Numbers.db(b.spectralEfficiency()))
+                    .append(" bits per channel use, i.i.d. Rayleigh: mimo = Gaussian inputs on the ")
+                    .append(b.transmitAntennas()).append('x').append(b.receiveAntennas()).append(" channel")
+                    .append(b.mimoExact() ? " (exact)" : " (Monte Carlo, " + b.mimoDraws() + " draws, 95 % Wilson interval)")
+                    .append("; stbc = the code with Gaussian symbols; qam = the code with ")
+                    .append(link.modulation().cliName()).append(" (").append(b.information().cliName()).append(")\n");
+        } else {
+            w.append("# p_out_*: empty, outage bounds are given for i.i.d. Rayleigh fading and orthogonal codes only\n");
+        }
         if (interrupted) {
             w.append("# interrupted: partial results; run the same command with --resume to finish\n");
         }
         w.append(HEADER).append('\n');
-        for (PointResult r : results) {
+        for (int i = 0; i < results.size(); i++) {
+            PointResult r = results.get(i);
             FrameCounters c = r.counts();
+            BoundPoint b = bounds == null ? null : bounds.points().get(i);
             w.append(String.join(",",
                     Numbers.db(r.snrDb()),
                     Long.toString(c.frames()),
@@ -58,14 +75,19 @@ public final class ResultsCsv {
                     Numbers.rate(r.berHigh()),
                     Long.toString(c.symbols()),
                     Long.toString(c.symbolErrors()),
-                    Numbers.rate(c.ser())));
+                    Numbers.rate(c.ser()),
+                    b == null ? "" : Numbers.rate(b.mimo()),
+                    b == null ? "" : Numbers.rate(b.stbc()),
+                    b == null ? "" : Numbers.rate(b.qam()),
+                    b == null ? "" : Numbers.rate(b.mimoLow()),
+                    b == null ? "" : Numbers.rate(b.mimoHigh())));
             w.append('\n');
         }
         return w.toString();
     }
 
     public static void write(Path file, LinkSettings link, long seed, double confidence, List<PointResult> results,
-                             boolean interrupted) throws IOException {
-        AtomicFiles.writeString(file, text(link, seed, confidence, results, interrupted));
+                             boolean interrupted, BoundCurves bounds) throws IOException {
+        AtomicFiles.writeString(file, text(link, seed, confidence, results, interrupted, bounds));
     }
 }

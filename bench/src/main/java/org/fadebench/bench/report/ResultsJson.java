@@ -7,6 +7,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
@@ -25,7 +26,8 @@ public final class ResultsJson {
 
     /** Everything results.json says about one run. */
     public record Run(Map<String, Object> settings, LinkSettings link, long seed, List<PointResult> results,
-                      boolean complete, String stopReason, long framesSimulated, double seconds, int threads) {
+                      boolean complete, String stopReason, long framesSimulated, double seconds, int threads,
+                      RunSummary summary) {
 
         /** Data QAM symbols simulated per wall-clock second (speculative batches included). */
         public double symbolsPerSecond() {
@@ -60,18 +62,22 @@ public final class ResultsJson {
             p.put("complete", r.complete());
             p.put("frames", c.frames());
             p.put("frame_errors", c.frameErrors());
-            p.put("fer", c.fer());
+            p.put("fer", finite(c.fer()));
             p.put("fer_ci_low", r.ferLow());
             p.put("fer_ci_high", r.ferHigh());
             p.put("bits", c.bits());
             p.put("bit_errors", c.bitErrors());
-            p.put("ber", c.ber());
+            p.put("ber", finite(c.ber()));
             p.put("ber_ci_low", r.berLow());
             p.put("ber_ci_high", r.berHigh());
             p.put("symbols", c.symbols());
             p.put("symbol_errors", c.symbolErrors());
-            p.put("ser", c.ser());
+            p.put("ser", finite(c.ser()));
             p.put("seconds", r.seconds());
+        }
+        root.set("summary", JSON.valueToTree(run.summary().toJson()));
+        if (run.summary().analysis() != null) {
+            root.set("analysis", JSON.valueToTree(run.summary().analysis().toJson()));
         }
         root.put("symbols_per_second", run.symbolsPerSecond());
         ObjectNode timing = root.putObject("timing");
@@ -79,6 +85,11 @@ public final class ResultsJson {
         timing.put("frames_simulated", run.framesSimulated());
         timing.put("threads", run.threads());
         return root;
+    }
+
+    /** JSON has no NaN: a rate of nothing is null. */
+    private static Double finite(double v) {
+        return Double.isFinite(v) ? v : null;
     }
 
     public static void write(Path file, Run run) throws IOException {

@@ -33,6 +33,10 @@ public final class ScenarioSchema {
             new ScenarioKey("sweep", "confidence", "--confidence", Kind.NUMBER, "interval level"),
             new ScenarioKey("sweep", "seed", "--seed", Kind.WHOLE, "master seed"),
             new ScenarioKey("sweep", "threads", "--threads", Kind.WHOLE, "worker threads"),
+            new ScenarioKey("analysis", "target_fer", "--target-fer", Kind.NUMBER, "FER of the reported SNR and gaps"),
+            new ScenarioKey("analysis", "rate", "--rate", Kind.NUMBER, "spectral efficiency of the bounds"),
+            new ScenarioKey("analysis", "mi", "--mi", Kind.TEXT, "cm or bicm"),
+            new ScenarioKey("analysis", "outage_draws", "--outage-draws", Kind.WHOLE, "draws of the MIMO bound"),
             new ScenarioKey("output", "folder", "--out", Kind.TEXT, "output folder"),
             new ScenarioKey("output", "archive", "--archive", Kind.TEXT, ".tar.xz or .tar.gz bundle"),
             new ScenarioKey("output", "quiet", "--quiet", Kind.FLAG, "no table or progress bar"));

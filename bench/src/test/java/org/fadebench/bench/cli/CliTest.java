@@ -57,7 +57,7 @@ class CliTest {
         // 16-QAM Alamouti: 4 bits per channel use, so Eb/N0 = SNR - 6.0206 dB
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("10,") && l.contains(",3.9794,")), lines.toString());
         try (var s = Files.list(dir)) {
-            assertEquals(List.of("results.csv", "results.json", "scenario.yaml"),
+            assertEquals(List.of("fer.png", "fer.svg", "results.csv", "results.json", "scenario.yaml"),
                     s.map(p -> p.getFileName().toString()).sorted().toList(), "no temporary files or checkpoint left");
         }
     }

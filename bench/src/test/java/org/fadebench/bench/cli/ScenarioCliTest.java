@@ -123,7 +123,7 @@ class ScenarioCliTest {
                     entries.add(e.getName());
                 }
             }
-            assertEquals(List.of("results.csv", "results.json", "scenario.yaml"), entries);
+            assertEquals(List.of("results.csv", "results.json", "fer.png", "fer.svg", "scenario.yaml"), entries);
         }
         CliTest.Outcome bad = CliTest.run("run", "--archive", tmp.resolve("r.zip").toString(), "--out",
                 tmp.resolve("z").toString());

@@ -48,14 +48,14 @@ class ScenarioLoaderTest {
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', value = {
         "'link:\\n  modulaton: qpsk' | t.yaml line 2: unknown key 'link.modulaton' (did you mean 'modulation'?); valid keys in link:",
-        "'sweeps:\\n  seed: 1' | t.yaml line 1: unknown section 'sweeps' (did you mean 'sweep'?); valid sections: link, sweep, output",
+        "'sweeps:\\n  seed: 1' | t.yaml line 1: unknown section 'sweeps' (did you mean 'sweep'?); valid sections: link, sweep, analysis, output",
         "'link:\\n  rx: two' | t.yaml line 2, key link.rx: expected a whole number, got 'two'",
         "'sweep:\\n  confidence: high' | t.yaml line 2, key sweep.confidence: expected a number, got 'high'",
         "'sweep:\\n  snr_db: [0, x]' | t.yaml line 2, key sweep.snr_db: expected a number, START:STEP:STOP, or a list of numbers, got 'x'",
         "'output:\\n  quiet: maybe' | t.yaml line 2, key output.quiet: expected true or false, got 'maybe'",
         "'link:\\n  tx: [1, 2]' | t.yaml line 2, key link.tx: expected a whole number, got a list",
         "'link: 3' | t.yaml line 1: section 'link' must be a mapping of keys code, code_file, decoder",
-        "'- a\\n- b' | t.yaml line 1: the top level must be a mapping of sections link, sweep, output",
+        "'- a\\n- b' | t.yaml line 1: the top level must be a mapping of sections link, sweep, analysis, output",
         "'link:\\n  rx: 1\\n  rx: 2' | t.yaml line 3: key 'link.rx' appears twice",
         "'link: {code: [unclosed' | t.yaml line 1: not valid YAML",
         "'link:\\n  code: !!java.lang.Object x' | t.yaml line 2: not valid YAML: Global tag is not allowed",
