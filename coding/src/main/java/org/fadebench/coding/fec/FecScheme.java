@@ -1,0 +1,52 @@
+package org.fadebench.coding.fec;
+
+import java.util.Objects;
+
+/**
+ * What a link does to its payload before modulation: append a CRC, then encode with a channel code
+ * (tail and puncturing included). Answers the sizes the link needs; {@link #newCodec} gives the
+ * per-thread worker that does it.
+ *
+ * @param crc  the check appended to each payload
+ * @param code the channel code applied to payload and check
+ */
+public record FecScheme(Crc crc, ChannelCode code) {
+
+    /** No CRC, no channel code. */
+    public static final FecScheme NONE = new FecScheme(Crc.NONE, ChannelCode.NONE);
+
+    public FecScheme {
+        Objects.requireNonNull(crc, "crc");
+        Objects.requireNonNull(code, "code");
+    }
+
+    /** Bits entering the channel encoder for a payload of {@code payloadBits}: payload + CRC. */
+    public int infoBits(int payloadBits) {
+        return payloadBits + crc.bits();
+    }
+
+    /** Bits sent for a payload of {@code payloadBits}: CRC, tail and puncturing included. */
+    public int codedBits(int payloadBits) {
+        return code.codedBits(infoBits(payloadBits));
+    }
+
+    /** Payload bits per sent bit, all overheads included (multiply by bits per symbol for spectral efficiency). */
+    public double rate(int payloadBits) {
+        return (double) payloadBits / codedBits(payloadBits);
+    }
+
+    /**
+     * A worker for frames of {@code payloadBits}, owning its buffers (one per thread).
+     *
+     * @param interleaver a permutation of {@link #codedBits(int) codedBits(payloadBits)} bits
+     * @throws IllegalArgumentException if the payload is empty or the interleaver has another length
+     */
+    public FecCodec newCodec(int payloadBits, BitInterleaver interleaver) {
+        return new FecCodec(this, payloadBits, interleaver);
+    }
+
+    @Override
+    public String toString() {
+        return "crc " + crc.cliName() + ", code " + code.cliName();
+    }
+}

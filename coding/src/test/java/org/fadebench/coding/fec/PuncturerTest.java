@@ -1,0 +1,83 @@
+package org.fadebench.coding.fec;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import org.junit.jupiter.api.Test;
+
+class PuncturerTest {
+
+    private static final ConvolutionalCode K7 = ConvolutionalCode.K7_133_171;
+
+    /**
+     * Coded lengths, tail included: rate 1/2 sends 2 (k+6); rate 2/3 sends 3 bits per 2 steps and
+     * rate 3/4 4 bits per 3 steps, the pattern running on through the tail (arithmetic on the
+     * patterns in {@link ChannelCode}).
+     */
+    @Test
+    void codedBitsFollowThePatterns() {
+        assertEquals(2 * 106, ChannelCode.CONV_R12.codedBits(100));
+        assertEquals(2 * 103, ChannelCode.CONV_SMALL.codedBits(101));
+        assertEquals(3 * 51, ChannelCode.CONV_R23.codedBits(96));       // 102 steps = 51 periods
+        assertEquals(3 * 51 + 2, ChannelCode.CONV_R23.codedBits(97));   // one step into a period: 2 bits
+        assertEquals(4 * 34, ChannelCode.CONV_R34.codedBits(96));       // 102 steps = 34 periods
+        assertEquals(4 * 34 + 2, ChannelCode.CONV_R34.codedBits(97));
+        assertEquals(4 * 34 + 3, ChannelCode.CONV_R34.codedBits(98));
+        assertEquals(96, ChannelCode.NONE.codedBits(96));
+        assertEquals(0.75, ChannelCode.CONV_R34.rate(), 0);
+        assertEquals(2.0 / 3, ChannelCode.CONV_R23.rate(), 1e-15);
+    }
+
+    /** Puncturing keeps exactly the pattern's positions; depuncturing puts them back, zeros elsewhere. */
+    @Test
+    void depuncturingInvertsPuncturing() {
+        Puncturer p = ChannelCode.CONV_R34.puncturer();
+        int k = 20;
+        byte[] mother = CrcTest.randomBits(new java.util.Random(2), K7.codedBits(k));
+        byte[] sent = new byte[p.codedBits(k)];
+        assertEquals(sent.length, p.puncture(mother, 0, k, sent, 0));
+        double[] received = new double[sent.length];
+        for (int i = 0; i < sent.length; i++) {
+            received[i] = (i + 1) * (1 - 2 * sent[i]);
+        }
+        double[] llr = new double[mother.length];
+        p.depuncture(received, 0, k, llr, 0);
+        int next = 1;
+        for (int m = 0; m < mother.length; m++) {
+            boolean kept = p.keeps((m / 2) % 3, m % 2);
+            double expected = kept ? next++ * (1 - 2 * mother[m]) : 0;
+            assertEquals(expected, llr[m], 0, "position " + m);
+        }
+        assertEquals(sent.length + 1, next);
+        assertEquals("[1 1 0; 1 0 1]", p.toString());
+        assertEquals("[1 1; 1 0]", ChannelCode.CONV_R23.puncturer().toString());
+    }
+
+    @Test
+    void patternsThatDoNotFitAreNamed() {
+        assertEquals("puncturing pattern has 3 rows but code K=7 (133, 171)_8 has 2 outputs; need one row per output",
+                assertThrows(IllegalArgumentException.class,
+                        () -> new Puncturer(K7, new int[][] {{1}, {1}, {1}})).getMessage());
+        assertEquals("puncturing pattern row 1 has 2 columns, row 0 has 3; need a rectangular pattern",
+                assertThrows(IllegalArgumentException.class,
+                        () -> new Puncturer(K7, new int[][] {{1, 1, 0}, {1, 0}})).getMessage());
+        assertEquals("puncturing pattern entry 2 at row 1, column 0; valid: 0 (remove) or 1 (keep)",
+                assertThrows(IllegalArgumentException.class,
+                        () -> new Puncturer(K7, new int[][] {{1}, {2}})).getMessage());
+        assertEquals("puncturing pattern column 1 removes every output of its step; keep at least one bit per column",
+                assertThrows(IllegalArgumentException.class,
+                        () -> new Puncturer(K7, new int[][] {{1, 0}, {1, 0}})).getMessage());
+        assertEquals("puncturing pattern has no columns; need a period of at least 1",
+                assertThrows(IllegalArgumentException.class,
+                        () -> new Puncturer(K7, new int[][] {{}, {}})).getMessage());
+    }
+
+    @Test
+    void channelCodeNames() {
+        assertEquals("none, conv-r12, conv-r23, conv-r34, conv-small", ChannelCode.choices());
+        assertEquals(ChannelCode.CONV_R34, ChannelCode.fromCliName("Conv-R34"));
+        assertEquals("unknown channel code 'turbo'; valid: none, conv-r12, conv-r23, conv-r34, conv-small",
+                assertThrows(IllegalArgumentException.class, () -> ChannelCode.fromCliName("turbo")).getMessage());
+        assertThrows(IllegalStateException.class, ChannelCode.NONE::puncturer);
+    }
+}
