@@ -203,6 +203,70 @@ public final class QamConstellation {
         }
     }
 
+    /**
+     * Exact bit LLRs, {@code LLR = ln Σ_{s: b=0} exp(-|y-s|² g/n0) - ln Σ_{s: b=1} exp(-|y-s|² g/n0)}
+     * (the bit LLR with equiprobable symbols and CN(0, n0/g) noise; e.g. Proakis and Salehi,
+     * Digital Communications, 5th ed.), each sum evaluated as a log-sum-exp shifted by its largest
+     * term. With Gray square QAM the likelihood factors over the two axes and each bit lives on
+     * one axis, so the sums run over one axis's L amplitudes. Same layout as {@link #demapMaxLog}.
+     */
+    public void demapExact(double[] estimates, double[] gain, int symOffset, double n0,
+                           double[] llr, int llrOffset, int count) {
+        int l = llrOffset;
+        for (int n = 0; n < count; n++) {
+            int k = symOffset + n;
+            double w = gain[k] / n0;
+            l = axisExact(estimates[2 * k], w, llr, l);
+            if (twoAxes) {
+                l = axisExact(estimates[2 * k + 1], w, llr, l);
+            }
+        }
+    }
+
+    /** The LLRs of one axis by log-sum-exp. */
+    private int axisExact(double y, double weight, double[] llr, int l) {
+        final int m = bitsPerAxis;
+        for (int j = 0; j < m; j++) {
+            int shift = m - 1 - j;
+            double min0 = Double.POSITIVE_INFINITY;
+            double min1 = Double.POSITIVE_INFINITY;
+            for (int i = 0; i < levels; i++) {
+                double d = y - amplitudeOfLevel[i];
+                double d2 = d * d;
+                if (((labelOfLevel[i] >>> shift) & 1) == 0) {
+                    min0 = Math.min(min0, d2);
+                } else {
+                    min1 = Math.min(min1, d2);
+                }
+            }
+            double sum0 = 0;
+            double sum1 = 0;
+            for (int i = 0; i < levels; i++) {
+                double d = y - amplitudeOfLevel[i];
+                double d2 = d * d;
+                if (((labelOfLevel[i] >>> shift) & 1) == 0) {
+                    sum0 += Math.exp(-(d2 - min0) * weight);
+                } else {
+                    sum1 += Math.exp(-(d2 - min1) * weight);
+                }
+            }
+            llr[l++] = (min1 - min0) * weight + Math.log(sum0) - Math.log(sum1);
+        }
+        return l;
+    }
+
+    /**
+     * Bit LLRs by the given method (see {@link #demapMaxLog} and {@link #demapExact}).
+     */
+    public void demap(LlrMethod method, double[] estimates, double[] gain, int symOffset, double n0,
+                      double[] llr, int llrOffset, int count) {
+        if (method == LlrMethod.EXACT) {
+            demapExact(estimates, gain, symOffset, n0, llr, llrOffset, count);
+        } else {
+            demapMaxLog(estimates, gain, symOffset, n0, llr, llrOffset, count);
+        }
+    }
+
     private int axisMaxLog(double y, double weight, double[] llr, int l) {
         final int m = bitsPerAxis;
         for (int j = 0; j < m; j++) {

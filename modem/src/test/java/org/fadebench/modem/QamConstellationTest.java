@@ -170,4 +170,51 @@ class QamConstellationTest {
                 () -> Modulation.fromCliName("8psk"));
         assertTrue(e.getMessage().contains("bpsk, qpsk, 16qam, 64qam, 256qam"), e.getMessage());
     }
+
+    /**
+     * The exact LLR equals its definition over the full 2-D constellation with complex Gaussian
+     * noise, ln Σ_{b=0} exp(-|y-s|²/σ²) - ln Σ_{b=1} exp(-|y-s|²/σ²) (bit LLR with equiprobable
+     * symbols; Proakis and Salehi, Digital Communications, 5th ed.), computed naively here, and it
+     * is never further from max-log than ln(M/2) (the log-sum-exp of M/2 terms exceeds its maximum
+     * by at most that).
+     */
+    @ParameterizedTest
+    @EnumSource(Modulation.class)
+    void exactLlrEqualsDefinition(Modulation mod) {
+        QamConstellation c = mod.constellation();
+        double[][] pts = allPoints(c);
+        int k = c.bitsPerSymbol();
+        Random rnd = new Random(13);
+        double[] y = new double[2];
+        double[] gain = {0};
+        double[] exact = new double[k];
+        double[] maxLog = new double[k];
+        for (int trial = 0; trial < 3000; trial++) {
+            y[0] = 1.2 * rnd.nextGaussian();
+            y[1] = mod == Modulation.BPSK ? 0 : 1.2 * rnd.nextGaussian();
+            gain[0] = 0.2 + 2 * rnd.nextDouble();
+            double n0 = 0.1 + rnd.nextDouble();
+            c.demap(LlrMethod.EXACT, y, gain, 0, n0, exact, 0, 1);
+            c.demap(LlrMethod.MAXLOG, y, gain, 0, n0, maxLog, 0, 1);
+            double w = gain[0] / n0;
+            for (int j = 0; j < k; j++) {
+                double s0 = 0;
+                double s1 = 0;
+                for (int label = 0; label < pts.length; label++) {
+                    double d = Math.pow(y[0] - pts[label][0], 2) + Math.pow(y[1] - pts[label][1], 2);
+                    double e = Math.exp(-d * w);
+                    if (((label >>> (k - 1 - j)) & 1) == 0) {
+                        s0 += e;
+                    } else {
+                        s1 += e;
+                    }
+                }
+                if (s0 > 1e-250 && s1 > 1e-250) {
+                    double expected = Math.log(s0) - Math.log(s1);
+                    assertEquals(expected, exact[j], 1e-9 * (1 + Math.abs(expected)), mod + " bit " + j);
+                }
+                assertTrue(Math.abs(exact[j] - maxLog[j]) <= Math.log(pts.length / 2.0) + 1e-9);
+            }
+        }
+    }
 }

@@ -5,7 +5,13 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.function.Supplier;
 import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.LinkSettings;
+import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.Crc;
+import org.fadebench.coding.fec.FecScheme;
+import org.fadebench.coding.fec.Interleaving;
+import org.fadebench.modem.LlrMethod;
 import org.fadebench.bench.report.Archive;
 import org.fadebench.bench.scenario.Scenario;
 import org.fadebench.bench.scenario.ScenarioException;
@@ -40,6 +46,27 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--decoder", paramLabel = "NAME",
             description = "Linear decoder: mf, zf, mmse (default: mf for orthogonal codes, mmse otherwise).")
     String decoder;
+
+    @Option(names = "--fec", paramLabel = "NAME", defaultValue = "none",
+            description = "Channel code: none, conv-r12, conv-r23, conv-r34 (64-state (133,171) code, punctured), "
+                    + "conv-small (4-state (5,7)) (default: ${DEFAULT-VALUE}).")
+    String fec;
+
+    @Option(names = "--crc", paramLabel = "NAME", defaultValue = "none",
+            description = "CRC appended to each frame: none, crc16, crc24, crc32 (default: ${DEFAULT-VALUE}).")
+    String crc;
+
+    @Option(names = "--interleaver", paramLabel = "NAME",
+            description = "Bit interleaver of a coded frame: random, block, none (default: random when coded).")
+    String interleaver;
+
+    @Option(names = "--interleaver-rows", paramLabel = "N", defaultValue = "0",
+            description = "Rows of the block interleaver; must divide the coded bits per frame.")
+    int interleaverRows;
+
+    @Option(names = "--llr", paramLabel = "NAME", defaultValue = "maxlog",
+            description = "Soft demapping of a coded frame: maxlog, exact (default: ${DEFAULT-VALUE}).")
+    String llr;
 
     @Option(names = "--fading", paramLabel = "NAME", defaultValue = "rayleigh",
             description = "Fading model: rayleigh, none (default: ${DEFAULT-VALUE}).")
@@ -201,10 +228,13 @@ final class RunCommand implements Callable<Integer> {
                 : stbc.isOrthogonal() ? Decoder.MF : Decoder.MMSE;
         Fading fad = parse("--fading", () -> Fading.fromCliName(fading));
         double[] snrDb = parse(null, () -> SnrGrid.parse(snr));
-        int bits = frameBits != null ? frameBits : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
+        FrameCoding coding = frameCoding();
+        int bits = frameBits != null ? frameBits
+                : coding.coded() ? LinkSettings.DEFAULT_FRAME_BITS
+                : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
         int nTx = linkOptions.transmitAntennas(stbc);
         LinkSettings link = parse(null, () -> new LinkSettings(mod, stbc, nTx, linkOptions.rx, fad, bits, coherence,
-                dec));
+                dec, coding));
         StopRules rules = parse(null, () -> new StopRules(minErrors, maxFrames, maxSeconds, ferFloor));
         int nThreads = SweepJob.threads(threads);
         if (!(confidence > 0 && confidence < 1)) {
@@ -225,6 +255,17 @@ final class RunCommand implements Callable<Integer> {
         }
         return new RunPlan(link, snr.trim(), snrDb, rules, seed, nThreads, confidence, SweepJob.checkOutDir(out),
                 archivePath, resume, quiet, scenario, linkOptions.codeFile, bounds, targetFer);
+    }
+
+    /** CRC, channel code, interleaver and LLRs from their options. */
+    private FrameCoding frameCoding() {
+        Crc c = parse("--crc", () -> Crc.fromCliName(crc));
+        ChannelCode code = parse("--fec", () -> ChannelCode.fromCliName(fec));
+        boolean coded = c != Crc.NONE || code != ChannelCode.NONE;
+        Interleaving il = interleaver != null ? parse("--interleaver", () -> Interleaving.fromCliName(interleaver))
+                : coded ? Interleaving.RANDOM : Interleaving.NONE;
+        LlrMethod method = parse("--llr", () -> LlrMethod.fromCliName(llr));
+        return parse(null, () -> new FrameCoding(new FecScheme(c, code), il, interleaverRows, method));
     }
 
     /** Runs a parser; its IllegalArgumentException becomes invalid input, prefixed with the option. */

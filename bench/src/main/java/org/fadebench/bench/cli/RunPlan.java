@@ -32,6 +32,11 @@ record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rule
         m.put("rx", link.receiveAntennas());
         m.put("mod", link.modulation().cliName());
         m.put("fading", link.fading().cliName());
+        m.put("fec", link.coding().scheme().code().cliName());
+        m.put("crc", link.coding().scheme().crc().cliName());
+        m.put("interleaver", link.coding().interleaving().cliName());
+        m.put("interleaver_rows", link.coding().interleaverRows());
+        m.put("llr", link.coding().llr().cliName());
         m.put("frame_bits", link.frameBits());
         m.put("coherence", link.coherenceSlots());
         m.put("snr", snrSpec);
@@ -55,7 +60,7 @@ record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rule
 
     /** Every setting that changes the numbers, for the checkpoint's fingerprint. */
     String numbersFingerprintText(int batchFrames) {
-        return String.join("|", "v1", link.describe(), SpaceTimeCodeFile.format(link.code()), link.decoder().cliName(),
+        return String.join("|", "v2", link.describe(), link.coding().toString(), SpaceTimeCodeFile.format(link.code()), link.decoder().cliName(),
                 link.modulation().cliName(),
                 link.fading().cliName(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),
                 Long.toString(rules.minErrors()), Long.toString(rules.maxFrames()), Double.toString(rules.maxSeconds()),
@@ -77,6 +82,13 @@ record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rule
         y.append("  rx: ").append(link.receiveAntennas()).append('\n');
         y.append("  modulation: ").append(link.modulation().cliName()).append('\n');
         y.append("  fading: ").append(link.fading().cliName()).append('\n');
+        y.append("  fec: ").append(link.coding().scheme().code().cliName()).append('\n');
+        y.append("  crc: ").append(link.coding().scheme().crc().cliName()).append('\n');
+        y.append("  interleaver: ").append(link.coding().interleaving().cliName()).append('\n');
+        if (link.coding().interleaverRows() > 0) {
+            y.append("  interleaver_rows: ").append(link.coding().interleaverRows()).append('\n');
+        }
+        y.append("  llr: ").append(link.coding().llr().cliName()).append('\n');
         y.append("  frame_bits: ").append(link.frameBits()).append('\n');
         y.append("  coherence: ").append(link.coherenceSlots()).append("   # 0 = whole frame\n");
         y.append("sweep:\n");

@@ -10,6 +10,21 @@ public final class FrameCounters {
     private long symbols;
     private long symbolErrors;
     private double bitErrorsSquared;
+    private long crcFailures;
+    private long undetectedErrors;
+
+    /**
+     * Records one coded frame.
+     *
+     * @param crcFailed  the frame's CRC did not check
+     * @param undetected the frame has wrong bits but its CRC checked
+     */
+    public void addFrame(int frameBits, int frameBitErrors, int frameSymbols, int frameSymbolErrors, boolean crcFailed,
+                         boolean undetected) {
+        addFrame(frameBits, frameBitErrors, frameSymbols, frameSymbolErrors);
+        crcFailures += crcFailed ? 1 : 0;
+        undetectedErrors += undetected ? 1 : 0;
+    }
 
     /** Records one frame. */
     public void addFrame(int frameBits, int frameBitErrors, int frameSymbols, int frameSymbolErrors) {
@@ -32,11 +47,13 @@ public final class FrameCounters {
         symbols += o.symbols;
         symbolErrors += o.symbolErrors;
         bitErrorsSquared += o.bitErrorsSquared;
+        crcFailures += o.crcFailures;
+        undetectedErrors += o.undetectedErrors;
     }
 
     /** Restores counts saved in a checkpoint. */
     public static FrameCounters of(long frames, long frameErrors, long bits, long bitErrors, long symbols,
-                                   long symbolErrors, double bitErrorsSquared) {
+                                   long symbolErrors, double bitErrorsSquared, long crcFailures, long undetectedErrors) {
         FrameCounters c = new FrameCounters();
         c.frames = frames;
         c.frameErrors = frameErrors;
@@ -45,6 +62,8 @@ public final class FrameCounters {
         c.symbols = symbols;
         c.symbolErrors = symbolErrors;
         c.bitErrorsSquared = bitErrorsSquared;
+        c.crcFailures = crcFailures;
+        c.undetectedErrors = undetectedErrors;
         return c;
     }
 
@@ -82,6 +101,16 @@ public final class FrameCounters {
     /** Σ over frames of (bit errors in the frame)², for the clustered BER interval. */
     public double bitErrorsSquared() {
         return bitErrorsSquared;
+    }
+
+    /** Frames whose CRC did not check (0 without a CRC). */
+    public long crcFailures() {
+        return crcFailures;
+    }
+
+    /** Frames with wrong information bits whose CRC checked all the same (0 without a CRC). */
+    public long undetectedErrors() {
+        return undetectedErrors;
     }
 
     public double fer() {

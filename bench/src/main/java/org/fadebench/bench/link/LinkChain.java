@@ -3,6 +3,7 @@ package org.fadebench.bench.link;
 import org.fadebench.channel.Draws;
 import org.fadebench.channel.FadingModel;
 import org.fadebench.channel.MimoChannel;
+import org.fadebench.coding.fec.FecCodec;
 import org.fadebench.coding.stbc.Combiner;
 import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCode;
@@ -12,12 +13,16 @@ import org.fadebench.modem.QamConstellation;
 /**
  * One link, end to end, for one frame at a time:
  * <pre>
- * info bits (as symbol labels) → QAM map → space-time encode → per fading block: draw H, Y = X Hᵀ + N
- *   → combine with H (perfect CSI) → slice → count bit, symbol and frame errors
+ * info bits → (CRC, convolutional code, puncturing, interleaver) → QAM map → space-time encode
+ *   → per fading block: draw H, Y = X Hᵀ + N → combine with H (perfect CSI)
+ *   → uncoded: slice; coded: LLRs → deinterleave, depuncture, Viterbi, CRC
+ *   → count bit, symbol and frame errors
  * </pre>
- * A chain owns all its buffers and allocates nothing per frame; each worker thread has its own.
- * Random draws are taken in a fixed order (bits, then per fading block H and noise), so a frame
- * depends only on the stream it is given.
+ * An uncoded frame carries its bits as symbol labels (the bits of a symbol as one integer), which
+ * is the same data and lets errors be counted per symbol. A chain owns all its buffers and
+ * allocates nothing per frame; each worker thread has its own. Random draws are taken in a fixed
+ * order (bits, padding, then per fading block H and noise), so a frame depends only on the stream
+ * it is given.
  */
 public final class LinkChain {
 
@@ -26,7 +31,7 @@ public final class LinkChain {
     private final StbcEncoder encoder;
     private Combiner combiner;
     /** The noise level the combiner was made for (only MMSE depends on it). */
-    private double combinerN0 = Double.NaN;
+    private double combinerN0;
     private final FadingModel fading;
     private final int mt;
     private final int nr;
@@ -38,14 +43,24 @@ public final class LinkChain {
     private final int blocksPerFade;
     private final int bitsPerSymbol;
 
-    private final int[] sent;
-    private final int[] decided;
     private final double[] txSymbols;
     private final double[] estimates;
     private final double[] gain;
     private final double[] h;
     private final double[] grid;
     private final double[] received;
+
+    // uncoded frames: symbol labels
+    private final int[] sent;
+    private final int[] decided;
+
+    // coded frames: bits, LLRs and the codec
+    private final FecCodec codec;
+    private final byte[] payload;
+    private final byte[] payloadOut;
+    private final byte[] codedBits;
+    private final double[] llr;
+    private final int codedLength;
 
     public LinkChain(LinkSettings settings) {
         this.settings = settings;
@@ -54,8 +69,8 @@ public final class LinkChain {
         this.encoder = code.newEncoder();
         this.nr = settings.receiveAntennas();
         this.mt = settings.transmitAntennas();
-        this.combiner = code.newCombiner(nr, settings.decoder(), 1.0);
         this.combinerN0 = 1.0;
+        this.combiner = code.newCombiner(nr, settings.decoder(), combinerN0);
         this.fading = settings.fading().model();
         this.k = code.symbolsPerBlock();
         this.t = code.slotsPerBlock();
@@ -64,8 +79,6 @@ public final class LinkChain {
         this.blocksPerFrame = settings.blocksPerFrame();
         this.blocksPerFade = settings.effectiveCoherenceSlots() / t;
         this.bitsPerSymbol = settings.modulation().bitsPerSymbol();
-        this.sent = new int[symbols];
-        this.decided = new int[symbols];
         this.txSymbols = new double[2 * symbols];
         this.estimates = new double[2 * symbols];
         this.gain = new double[symbols];
@@ -73,6 +86,26 @@ public final class LinkChain {
         int fadeSlots = blocksPerFade * t;
         this.grid = new double[2 * fadeSlots * mt];
         this.received = new double[2 * fadeSlots * nr];
+        FrameCoding coding = settings.coding();
+        if (coding.coded()) {
+            this.codec = coding.scheme().newCodec(frameBits, coding.interleaver(frameBits));
+            this.codedLength = codec.codedBits();
+            this.payload = new byte[frameBits];
+            this.payloadOut = new byte[frameBits];
+            this.codedBits = new byte[symbols * bitsPerSymbol];
+            this.llr = new double[symbols * bitsPerSymbol];
+            this.sent = null;
+            this.decided = null;
+        } else {
+            this.codec = null;
+            this.codedLength = 0;
+            this.payload = null;
+            this.payloadOut = null;
+            this.codedBits = null;
+            this.llr = null;
+            this.sent = new int[symbols];
+            this.decided = new int[symbols];
+        }
     }
 
     public LinkSettings settings() {
@@ -81,21 +114,17 @@ public final class LinkChain {
 
     /** Simulates one frame at noise level {@code n0} (SNR = 1/n0) and adds it to {@code counters}. */
     public void runFrame(Draws draws, double n0, FrameCounters counters) {
-        if (n0 != combinerN0 && settings.decoder() == Decoder.MMSE) {
-            // MMSE weights depend on the noise level: a new combiner when the SNR point changes
-            combiner = settings.code().newCombiner(nr, Decoder.MMSE, n0);
-            combinerN0 = n0;
+        if (codec == null) {
+            runUncoded(draws, n0, counters);
+        } else {
+            runCoded(draws, n0, counters);
         }
+    }
+
+    private void runUncoded(Draws draws, double n0, FrameCounters counters) {
         draws.fillLabels(sent, 0, symbols, bitsPerSymbol);
         constellation.mapLabels(sent, 0, txSymbols, 0, symbols);
-        for (int first = 0; first < blocksPerFrame; first += blocksPerFade) {
-            int blocks = Math.min(blocksPerFade, blocksPerFrame - first);
-            fading.draw(draws, nr, mt, h);
-            encoder.encode(txSymbols, first * k, blocks, grid, 0);
-            MimoChannel.apply(h, nr, mt, grid, 0, blocks * t, n0, draws, received, 0);
-            combiner.setChannel(h);
-            combiner.combine(received, 0, blocks, estimates, gain, first * k);
-        }
+        transmit(draws, n0);
         constellation.demapLabels(estimates, 0, decided, 0, symbols);
         int bitErrors = 0;
         int symbolErrors = 0;
@@ -105,5 +134,49 @@ public final class LinkChain {
             symbolErrors += wrong != 0 ? 1 : 0;
         }
         counters.addFrame(frameBits, bitErrors, symbols, symbolErrors);
+    }
+
+    private void runCoded(Draws draws, double n0, FrameCounters counters) {
+        draws.fillBits(payload, 0, frameBits);
+        codec.encode(payload, 0, codedBits, 0);
+        // padding up to whole code blocks: random bits, sent and ignored
+        draws.fillBits(codedBits, codedLength, codedBits.length - codedLength);
+        constellation.map(codedBits, 0, txSymbols, 0, symbols);
+        transmit(draws, n0);
+        constellation.demap(settings.coding().llr(), estimates, gain, 0, n0, llr, 0, symbols);
+        boolean crcOk = codec.decode(llr, 0, payloadOut, 0);
+        int bitErrors = 0;
+        for (int i = 0; i < frameBits; i++) {
+            bitErrors += payload[i] ^ payloadOut[i];
+        }
+        // raw symbol errors: the sign of each coded bit's LLR against the bit sent
+        int symbolErrors = 0;
+        for (int s = 0, b = 0; s < symbols; s++) {
+            int wrong = 0;
+            for (int j = 0; j < bitsPerSymbol; j++, b++) {
+                wrong |= codedBits[b] ^ (llr[b] < 0 ? 1 : 0);
+            }
+            symbolErrors += wrong;
+        }
+        boolean withCrc = settings.coding().scheme().crc() != org.fadebench.coding.fec.Crc.NONE;
+        counters.addFrame(frameBits, bitErrors, symbols, symbolErrors, withCrc && !crcOk,
+                withCrc && crcOk && bitErrors > 0);
+    }
+
+    /** Space-time encoding, the channel of each fading block, and combining: txSymbols → estimates, gain. */
+    private void transmit(Draws draws, double n0) {
+        if (n0 != combinerN0 && settings.decoder() == Decoder.MMSE) {
+            // MMSE weights depend on the noise level: a new combiner when the SNR point changes
+            combiner = settings.code().newCombiner(nr, Decoder.MMSE, n0);
+            combinerN0 = n0;
+        }
+        for (int first = 0; first < blocksPerFrame; first += blocksPerFade) {
+            int blocks = Math.min(blocksPerFade, blocksPerFrame - first);
+            fading.draw(draws, nr, mt, h);
+            encoder.encode(txSymbols, first * k, blocks, grid, 0);
+            MimoChannel.apply(h, nr, mt, grid, 0, blocks * t, n0, draws, received, 0);
+            combiner.setChannel(h);
+            combiner.combine(received, 0, blocks, estimates, gain, first * k);
+        }
     }
 }

@@ -13,10 +13,11 @@ import org.fadebench.modem.Modulation;
  * @param frameBits       information bits per frame; a whole number of code blocks
  * @param coherenceSlots  slots (symbol periods) per fading block; 0 means the whole frame
  * @param decoder         linear decoder (matched filter, ZF or MMSE); all coincide for orthogonal codes
+ * @param coding          CRC, channel code, interleaver and LLRs; {@link FrameCoding#NONE} for uncoded
  */
 public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas,
                            int receiveAntennas, Fading fading, int frameBits, int coherenceSlots,
-                           Decoder decoder) {
+                           Decoder decoder, FrameCoding coding) {
 
     /** Frame length used when the user gives none, rounded up to whole code blocks. */
     public static final int DEFAULT_FRAME_BITS = 1024;
@@ -24,7 +25,15 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
     /** A link decoded by the matched filter. */
     public LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas, int receiveAntennas,
                         Fading fading, int frameBits, int coherenceSlots) {
-        this(modulation, code, transmitAntennas, receiveAntennas, fading, frameBits, coherenceSlots, Decoder.MF);
+        this(modulation, code, transmitAntennas, receiveAntennas, fading, frameBits, coherenceSlots, Decoder.MF,
+                FrameCoding.NONE);
+    }
+
+    /** An uncoded link. */
+    public LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas, int receiveAntennas,
+                        Fading fading, int frameBits, int coherenceSlots, Decoder decoder) {
+        this(modulation, code, transmitAntennas, receiveAntennas, fading, frameBits, coherenceSlots, decoder,
+                FrameCoding.NONE);
     }
 
     public LinkSettings {
@@ -45,7 +54,11 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
                     + " (--tx " + code.transmitAntennas() + "), got --tx " + transmitAntennas);
         }
         int blockBits = code.symbolsPerBlock() * modulation.bitsPerSymbol();
-        if (frameBits <= 0 || frameBits % blockBits != 0) {
+        if (frameBits <= 0) {
+            throw new IllegalArgumentException("--frame-bits must be a positive number of information bits, got "
+                    + frameBits);
+        }
+        if (!coding.coded() && frameBits % blockBits != 0) {
             throw new IllegalArgumentException("--frame-bits " + frameBits + " does not fill whole code blocks: "
                     + code.name() + " with " + modulation.cliName() + " carries " + blockBits
                     + " bits per block, so use a positive multiple of " + blockBits + " (e.g. "
@@ -54,6 +67,7 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
         if (frameBits > 1 << 24) {
             throw new IllegalArgumentException("--frame-bits " + frameBits + " is more than the 16777216 supported");
         }
+        coding.check(frameBits);
         if (decoder == Decoder.ZF && !code.isOrthogonal()
                 && (long) code.slotsPerBlock() * receiveAntennas * 2 < 2L * code.symbolsPerBlock()) {
             throw new IllegalArgumentException("--decoder zf cannot separate " + code.symbolsPerBlock()
@@ -73,8 +87,16 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
         return ((bits + blockBits - 1) / blockBits) * blockBits;
     }
 
+    /** Bits sent per frame: the information bits, or the coded bits of a coded frame. */
+    public int codedBitsPerFrame() {
+        return coding.codedBits(frameBits);
+    }
+
+    /** QAM symbols per frame: the sent bits in whole code blocks (a coded frame is padded). */
     public int symbolsPerFrame() {
-        return frameBits / modulation.bitsPerSymbol();
+        int blockBits = code.symbolsPerBlock() * modulation.bitsPerSymbol();
+        int blocks = (codedBitsPerFrame() + blockBits - 1) / blockBits;
+        return blocks * code.symbolsPerBlock();
     }
 
     public int blocksPerFrame() {
@@ -113,8 +135,9 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
                 ? "one fading block per frame"
                 : effectiveCoherenceSlots() + " slots per fading block (" + fadingBlocksPerFrame() + " per frame)";
         String dec = code.isOrthogonal() ? "" : ", " + decoder.cliName() + " decoder";
-        return String.format(java.util.Locale.ROOT, "%s %dx%d, %s, %s fading, %d bits/frame (%d symbols, %d slots), %s%s",
+        String fec = coding.coded() ? ", " + coding.describe() : "";
+        return String.format(java.util.Locale.ROOT, "%s %dx%d, %s, %s fading, %d bits/frame (%d symbols, %d slots), %s%s%s",
                 code.name(), transmitAntennas, receiveAntennas, modulation.cliName(), fading.cliName(),
-                frameBits, symbolsPerFrame(), slotsPerFrame(), coherence, dec);
+                frameBits, symbolsPerFrame(), slotsPerFrame(), coherence, dec, fec);
     }
 }

@@ -26,7 +26,7 @@ import org.fadebench.bench.sweep.PointState;
 public final class Checkpoint {
 
     public static final String FILE_NAME = "checkpoint.json";
-    private static final String FORMAT = "fadebench-checkpoint-1";
+    private static final String FORMAT = "fadebench-checkpoint-2";
     private static final ObjectMapper JSON = new ObjectMapper();
 
     private Checkpoint() {
@@ -59,6 +59,8 @@ public final class Checkpoint {
             p.put("symbols", c.symbols());
             p.put("symbol_errors", c.symbolErrors());
             p.put("bit_errors_squared", c.bitErrorsSquared());
+            p.put("crc_failures", c.crcFailures());
+            p.put("undetected_errors", c.undetectedErrors());
         }
         byte[] bytes = JSON.writerWithDefaultPrettyPrinter().writeValueAsBytes(root);
         AtomicFiles.write(dir.resolve(FILE_NAME), out -> out.write(bytes));
@@ -101,7 +103,8 @@ public final class Checkpoint {
             long merged = whole(p, "merged_batches", where);
             FrameCounters c = FrameCounters.of(whole(p, "frames", where), whole(p, "frame_errors", where),
                     whole(p, "bits", where), whole(p, "bit_errors", where), whole(p, "symbols", where),
-                    whole(p, "symbol_errors", where), p.path("bit_errors_squared").asDouble(-1));
+                    whole(p, "symbol_errors", where), p.path("bit_errors_squared").asDouble(-1),
+                    whole(p, "crc_failures", where), whole(p, "undetected_errors", where));
             if (c.frameErrors() > c.frames() || c.bitErrors() > c.bits() || c.bitErrorsSquared() < 0
                     || !p.path("done").isBoolean()) {
                 throw new IllegalArgumentException(where + "damaged checkpoint (inconsistent counts)");

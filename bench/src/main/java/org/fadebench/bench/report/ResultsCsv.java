@@ -20,7 +20,7 @@ public final class ResultsCsv {
     /** The column names, in order. */
     public static final String HEADER = "snr_db,frames,frame_errors,fer,bits,bit_errors,ber,ebn0_db,"
             + "fer_ci_low,fer_ci_high,ber_ci_low,ber_ci_high,symbols,symbol_errors,ser,"
-            + "p_out_mimo,p_out_stbc,p_out_qam,p_out_mimo_ci_low,p_out_mimo_ci_high";
+            + "p_out_mimo,p_out_stbc,p_out_qam,p_out_mimo_ci_low,p_out_mimo_ci_high,crc_failures,undetected_errors";
 
     /** The SNR convention, stated in every output. */
     public static final String SNR_CONVENTION = "snr_db = total transmitted energy per channel use / N0, "
@@ -52,6 +52,11 @@ public final class ResultsCsv {
         } else {
             w.append("# p_out_*: empty, outage bounds are given for i.i.d. Rayleigh fading and orthogonal codes only\n");
         }
+        if (link.coding().coded()) {
+            w.append("# coded: ").append(link.coding().describe()).append("; ").append(link.codedBitsPerFrame())
+                    .append(" coded bits per frame; symbols and ser count raw decisions on the coded bits; ")
+                    .append("crc_failures: frames whose CRC did not check; undetected_errors: wrong frames whose CRC checked\n");
+        }
         if (interrupted) {
             w.append("# interrupted: partial results; run the same command with --resume to finish\n");
         }
@@ -80,7 +85,9 @@ public final class ResultsCsv {
                     b == null ? "" : Numbers.rate(b.stbc()),
                     b == null ? "" : Numbers.rate(b.qam()),
                     b == null ? "" : Numbers.rate(b.mimoLow()),
-                    b == null ? "" : Numbers.rate(b.mimoHigh())));
+                    b == null ? "" : Numbers.rate(b.mimoHigh()),
+                    Long.toString(c.crcFailures()),
+                    Long.toString(c.undetectedErrors())));
             w.append('\n');
         }
         return w.toString();

@@ -73,6 +73,8 @@ public final class ResultsJson {
             p.put("symbols", c.symbols());
             p.put("symbol_errors", c.symbolErrors());
             p.put("ser", finite(c.ser()));
+            p.put("crc_failures", c.crcFailures());
+            p.put("undetected_errors", c.undetectedErrors());
             p.put("seconds", r.seconds());
         }
         root.set("summary", JSON.valueToTree(run.summary().toJson()));

@@ -137,7 +137,7 @@ class DiversityFitTest {
         List<PointResult> points = new ArrayList<>();
         long[][] counts = {{400, 1000}, {25, 10_000}};
         for (int i = 0; i < counts.length; i++) {
-            FrameCounters c = FrameCounters.of(counts[i][1], counts[i][0], 1000 * counts[i][1], counts[i][0], 0, 0, 0);
+            FrameCounters c = FrameCounters.of(counts[i][1], counts[i][0], 1000 * counts[i][1], counts[i][0], 0, 0, 0, 0, 0);
             points.add(new PointResult(i, 10 * (i + 1), 0, c, 0, 1, 0, 1, true, 0));
         }
         assertEquals(DiversityFit.ofCounts(new double[] {10, 20}, new long[] {400, 25}, new long[] {1000, 10_000}, 10, 2),

@@ -95,7 +95,7 @@ class TargetCrossingTest {
     }
 
     static PointResult point(int index, double snrDb, long frameErrors, long frames) {
-        FrameCounters c = FrameCounters.of(frames, frameErrors, 100 * frames, 3 * frameErrors, 0, 0, 0);
+        FrameCounters c = FrameCounters.of(frames, frameErrors, 100 * frames, 3 * frameErrors, 0, 0, 0, 0, 0);
         return new PointResult(index, snrDb, snrDb, c, 0, 1, 0, 1, true, 0);
     }
 }

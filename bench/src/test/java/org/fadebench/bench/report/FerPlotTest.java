@@ -44,7 +44,7 @@ class FerPlotTest {
         for (int i = 0; i < p.length; i++) {
             long errors = FRAME_ERRORS_AND_FRAMES[i][0];
             long frames = FRAME_ERRORS_AND_FRAMES[i][1];
-            FrameCounters c = FrameCounters.of(frames, errors, 128 * frames, errors, 64 * frames, errors, errors);
+            FrameCounters c = FrameCounters.of(frames, errors, 128 * frames, errors, 64 * frames, errors, errors, 0, 0);
             double[] fer = BinomialInterval.clopperPearson(errors, frames, 0.95);
             double[] ber = BinomialInterval.clusteredBer(frames, 128, errors, errors, 0.95);
             p[i] = new PointResult(i, SNR_DB[i], LINK.ebN0Db(SNR_DB[i]), c, fer[0], fer[1], ber[0], ber[1], true, 0.1);
