@@ -4,8 +4,8 @@ import java.util.Locale;
 
 /**
  * The fading models selectable by name on the command line and in scenario files. Rician and
- * Nakagami fading take parameters (and every model options such as correlation, Doppler and CSI):
- * build those with {@link ChannelSpec}.
+ * Nakagami fading take parameters; a channel with its parameters and options (correlation, Doppler,
+ * CSI, traces) is built with {@link ChannelSpec}.
  */
 public enum Fading {
     RAYLEIGH("rayleigh"),

@@ -128,7 +128,6 @@ final class TraceReader {
 
         Object descr = dict.get("descr");
         int itemSize;
-        ByteOrder order;
         if ("<c16".equals(descr) || ">c16".equals(descr)) {
             itemSize = 16;
         } else if ("<c8".equals(descr) || ">c8".equals(descr)) {
@@ -136,7 +135,7 @@ final class TraceReader {
         } else {
             throw bad(name, "unsupported dtype " + show(descr) + " (complex128 or complex64: '<c16', '<c8', '>c16', '>c8')");
         }
-        order = ((String) descr).charAt(0) == '<' ? ByteOrder.LITTLE_ENDIAN : ByteOrder.BIG_ENDIAN;
+        ByteOrder order = ((String) descr).charAt(0) == '<' ? ByteOrder.LITTLE_ENDIAN : ByteOrder.BIG_ENDIAN;
         if (!Boolean.FALSE.equals(dict.get("fortran_order"))) {
             throw bad(name, "fortran_order must be False (C order only), got " + show(dict.get("fortran_order")));
         }
