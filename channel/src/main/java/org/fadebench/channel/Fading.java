@@ -2,9 +2,15 @@ package org.fadebench.channel;
 
 import java.util.Locale;
 
-/** The fading models selectable by name on the command line and in scenario files. */
+/**
+ * The fading models selectable by name on the command line and in scenario files. Rician and
+ * Nakagami fading take parameters; a channel with its parameters and options (correlation, Doppler,
+ * CSI, traces) is built with {@link ChannelSpec}.
+ */
 public enum Fading {
     RAYLEIGH("rayleigh"),
+    RICIAN("rician"),
+    NAKAGAMI("nakagami"),
     NONE("none");
 
     private final String cliName;
@@ -17,7 +23,11 @@ public enum Fading {
         return cliName;
     }
 
-    /** A new model instance of this kind. */
+    /**
+     * A new model instance of this kind, for the kinds without parameters (independent Rayleigh, none).
+     *
+     * @throws IllegalStateException for rician and nakagami, which need {@link ChannelSpec}
+     */
     public FadingModel model() {
         switch (this) {
             case RAYLEIGH:
@@ -25,7 +35,7 @@ public enum Fading {
             case NONE:
                 return new NoFading();
             default:
-                throw new AssertionError(this);
+                throw new IllegalStateException(cliName + " fading has parameters: build it with ChannelSpec");
         }
     }
 

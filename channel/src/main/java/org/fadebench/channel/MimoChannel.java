@@ -23,31 +23,53 @@ public final class MimoChannel {
         // noise first, drawn in the order of the receive grid (slot, antenna, re, im) ...
         draws.fillGaussian(y, yo, 2 * slots * nr, Math.sqrt(0.5 * n0));
         // ... then the signal is added on top
+        addSignal(h, 0, nr, mt, x, 2 * xRow * mt, slots, y, yo);
+    }
+
+    /**
+     * As {@link #apply}, but with a channel matrix per slot: {@code hSlots} holds {@code slots}
+     * Nr x Mt matrices one after the other (the matrix of slot s, counted from {@code xRow}, starts at
+     * {@code hSlots[2·s·Nr·Mt]}). The noise is drawn first, in the same order as {@code apply}, so a
+     * channel that does not change over the slots gives exactly the output of {@code apply}.
+     */
+    public static void applyPerSlot(double[] hSlots, int nr, int mt, double[] x, int xRow, int slots,
+                                    double n0, Draws draws, double[] y, int yRow) {
+        int yo = 2 * yRow * nr;
+        draws.fillGaussian(y, yo, 2 * slots * nr, Math.sqrt(0.5 * n0));
         int xo = 2 * xRow * mt;
-        if (mt == 1) {
-            addSingleTransmitter(h, nr, x, xo, slots, y, yo);
-        } else if (mt == 2) {
-            addTwoTransmitters(h, nr, x, xo, slots, y, yo);
-        } else {
-            addGeneral(h, nr, mt, x, xo, slots, y, yo);
+        int matrix = 2 * nr * mt;
+        for (int s = 0; s < slots; s++) {
+            addSignal(hSlots, s * matrix, nr, mt, x, xo + 2 * s * mt, 1, y, yo + 2 * s * nr);
         }
     }
 
-    private static void addSingleTransmitter(double[] h, int nr, double[] x, int xo, int slots, double[] y, int yo) {
+    /** y += x Hᵀ over {@code slots} slots, with H starting at {@code h[ho]}. */
+    private static void addSignal(double[] h, int ho, int nr, int mt, double[] x, int xo, int slots,
+                                  double[] y, int yo) {
+        if (mt == 1) {
+            addSingleTransmitter(h, ho, nr, x, xo, slots, y, yo);
+        } else if (mt == 2) {
+            addTwoTransmitters(h, ho, nr, x, xo, slots, y, yo);
+        } else {
+            addGeneral(h, ho, nr, mt, x, xo, slots, y, yo);
+        }
+    }
+
+    private static void addSingleTransmitter(double[] h, int ho, int nr, double[] x, int xo, int slots, double[] y, int yo) {
         for (int s = 0; s < slots; s++) {
             double xr = x[xo + 2 * s];
             double xi = x[xo + 2 * s + 1];
             int o = yo + 2 * s * nr;
             for (int r = 0; r < nr; r++) {
-                double hr = h[2 * r];
-                double hi = h[2 * r + 1];
+                double hr = h[ho + 2 * r];
+                double hi = h[ho + 2 * r + 1];
                 y[o + 2 * r] += hr * xr - hi * xi;
                 y[o + 2 * r + 1] += hr * xi + hi * xr;
             }
         }
     }
 
-    private static void addTwoTransmitters(double[] h, int nr, double[] x, int xo, int slots, double[] y, int yo) {
+    private static void addTwoTransmitters(double[] h, int ho, int nr, double[] x, int xo, int slots, double[] y, int yo) {
         for (int s = 0; s < slots; s++) {
             int xs = xo + 4 * s;
             double x1r = x[xs];
@@ -56,10 +78,10 @@ public final class MimoChannel {
             double x2i = x[xs + 3];
             int o = yo + 2 * s * nr;
             for (int r = 0; r < nr; r++) {
-                double h1r = h[4 * r];
-                double h1i = h[4 * r + 1];
-                double h2r = h[4 * r + 2];
-                double h2i = h[4 * r + 3];
+                double h1r = h[ho + 4 * r];
+                double h1i = h[ho + 4 * r + 1];
+                double h2r = h[ho + 4 * r + 2];
+                double h2i = h[ho + 4 * r + 3];
                 double re = Math.fma(h1r, x1r, Math.fma(-h1i, x1i, Math.fma(h2r, x2r, Math.fma(-h2i, x2i, y[o + 2 * r]))));
                 double im = Math.fma(h1r, x1i, Math.fma(h1i, x1r, Math.fma(h2r, x2i, Math.fma(h2i, x2r, y[o + 2 * r + 1]))));
                 y[o + 2 * r] = re;
@@ -68,17 +90,17 @@ public final class MimoChannel {
         }
     }
 
-    private static void addGeneral(double[] h, int nr, int mt, double[] x, int xo, int slots, double[] y, int yo) {
+    private static void addGeneral(double[] h, int ho, int nr, int mt, double[] x, int xo, int slots, double[] y, int yo) {
         for (int s = 0; s < slots; s++) {
             int xs = xo + 2 * s * mt;
             int o = yo + 2 * s * nr;
             for (int r = 0; r < nr; r++) {
-                int ho = 2 * r * mt;
+                int hr0 = ho + 2 * r * mt;
                 double re = 0;
                 double im = 0;
                 for (int t = 0; t < mt; t++) {
-                    double hr = h[ho + 2 * t];
-                    double hi = h[ho + 2 * t + 1];
+                    double hr = h[hr0 + 2 * t];
+                    double hi = h[hr0 + 2 * t + 1];
                     double xr = x[xs + 2 * t];
                     double xi = x[xs + 2 * t + 1];
                     re += hr * xr - hi * xi;

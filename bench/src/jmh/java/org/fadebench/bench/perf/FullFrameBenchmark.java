@@ -56,14 +56,14 @@ public class FullFrameBenchmark {
     @Benchmark
     @OperationsPerInvocation(SYMBOLS)
     public long alamouti2x2Qam16Frame() {
-        chain.runFrame(draws, n0, counters);
+        chain.runFrame(draws, n0, 0, counters);
         return counters.bitErrors();
     }
 
     @Benchmark
     @OperationsPerInvocation(SYMBOLS)
     public long g4x1QpskFrame() {
-        g4Chain.runFrame(draws, n0, counters);
+        g4Chain.runFrame(draws, n0, 0, counters);
         return counters.bitErrors();
     }
 }

@@ -15,9 +15,13 @@ import org.fadebench.modem.LlrMethod;
 import org.fadebench.bench.report.Archive;
 import org.fadebench.bench.scenario.Scenario;
 import org.fadebench.bench.scenario.ScenarioException;
+import org.fadebench.bench.scenario.ScenarioKey;
+import org.fadebench.bench.scenario.ScenarioSchema;
 import org.fadebench.bench.scenario.ScenarioLoader;
 import org.fadebench.bench.sweep.SnrGrid;
 import org.fadebench.bench.sweep.StopRules;
+import org.fadebench.channel.ChannelSpec;
+import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.Fading;
 import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCode;
@@ -71,6 +75,44 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--fading", paramLabel = "NAME", defaultValue = "rayleigh",
             description = "Fading model: rayleigh, none (default: ${DEFAULT-VALUE}).")
     String fading;
+
+    @Option(names = "--k-factor", paramLabel = "K", description = "Rician K-factor, linear (with --fading rician).")
+    Double kFactor;
+
+    @Option(names = "--nakagami-m", paramLabel = "M", description = "Nakagami m >= 0.5 (with --fading nakagami).")
+    Double nakagamiM;
+
+    @Option(names = "--tx-corr", paramLabel = "R",
+            description = "Exponential correlation r^|i-j| between transmit antennas, |r| < 1.")
+    Double txCorr;
+
+    @Option(names = "--rx-corr", paramLabel = "R",
+            description = "Exponential correlation r^|i-j| between receive antennas, |r| < 1.")
+    Double rxCorr;
+
+    @Option(names = "--doppler", paramLabel = "FD",
+            description = "Normalised Doppler f_D T_s: the channel changes every slot (Clarke/Jakes spectrum).")
+    Double doppler;
+
+    @Option(names = "--csi-error", paramLabel = "VAR",
+            description = "The receiver decodes with H + CN(0, VAR) instead of H.")
+    Double csiError;
+
+    @Option(names = "--pilots", paramLabel = "N",
+            description = "The receiver estimates H by least squares from N pilot slots per fading block at the link SNR.")
+    Integer pilots;
+
+    @Option(names = "--trace", paramLabel = "FILE",
+            description = "Replay channel matrices from a .npy or CSV trace (optionally gz, xz, bz2, zst), one per fading block.")
+    Path trace;
+
+    @Option(names = "--trace-out", paramLabel = "FILE",
+            description = "Write the channels of the first SNR point's fading blocks to FILE (.npy or .csv, optionally .gz, .xz, .bz2, .zst).")
+    Path traceOut;
+
+    @Option(names = "--trace-out-blocks", paramLabel = "N", defaultValue = "100000",
+            description = "Most fading blocks --trace-out writes (default: ${DEFAULT-VALUE}).")
+    int traceOutBlocks;
 
     @Option(names = "--frame-bits", paramLabel = "N",
             description = "Information bits per frame, a whole number of code blocks (default: 1024 rounded up to whole blocks).")
@@ -202,6 +244,9 @@ final class RunCommand implements Callable<Integer> {
         if (type == boolean.class || type == Boolean.class) {
             return Boolean.valueOf(v);
         }
+        if (type == Path.class) {
+            return Path.of(v);
+        }
         return v;
     }
 
@@ -226,15 +271,26 @@ final class RunCommand implements Callable<Integer> {
         SpaceTimeCode stbc = linkOptions.code();
         Decoder dec = decoder != null ? parse("--decoder", () -> Decoder.fromCliName(decoder))
                 : stbc.isOrthogonal() ? Decoder.MF : Decoder.MMSE;
-        Fading fad = parse("--fading", () -> Fading.fromCliName(fading));
+        ChannelSpec channel = channelSpec();
         double[] snrDb = parse(null, () -> SnrGrid.parse(snr));
         FrameCoding coding = frameCoding();
         int bits = frameBits != null ? frameBits
                 : coding.coded() ? LinkSettings.DEFAULT_FRAME_BITS
                 : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
         int nTx = linkOptions.transmitAntennas(stbc);
-        LinkSettings link = parse(null, () -> new LinkSettings(mod, stbc, nTx, linkOptions.rx, fad, bits, coherence,
+        LinkSettings link = parse(null, () -> new LinkSettings(mod, stbc, nTx, linkOptions.rx, channel, bits, coherence,
                 dec, coding));
+        if (traceOut != null) {
+            String name = traceOut.getFileName().toString().toLowerCase(java.util.Locale.ROOT)
+                    .replaceAll("\\.(gz|xz|bz2|zst)$", "");
+            if (!name.endsWith(".npy") && !name.endsWith(".csv")) {
+                throw new InvalidInputException("--trace-out " + traceOut + ": unknown trace type; valid endings: .npy, "
+                        + ".csv, each optionally followed by .gz, .xz, .bz2 or .zst");
+            }
+            if (traceOutBlocks < 1 || traceOutBlocks > 10_000_000) {
+                throw new InvalidInputException("--trace-out-blocks must be between 1 and 10000000, got " + traceOutBlocks);
+            }
+        }
         StopRules rules = parse(null, () -> new StopRules(minErrors, maxFrames, maxSeconds, ferFloor));
         int nThreads = SweepJob.threads(threads);
         if (!(confidence > 0 && confidence < 1)) {
@@ -253,8 +309,80 @@ final class RunCommand implements Callable<Integer> {
             }
             archivePath = Path.of(archive);
         }
+        String effective = effectiveScenario(scenario);
         return new RunPlan(link, snr.trim(), snrDb, rules, seed, nThreads, confidence, SweepJob.checkOutDir(out),
-                archivePath, resume, quiet, scenario, linkOptions.codeFile, bounds, targetFer);
+                archivePath, resume, quiet, scenario, linkOptions.codeFile, bounds, targetFer, traceOut, traceOutBlocks,
+                effective);
+    }
+
+    /**
+     * The run's settings as a scenario file: every key of the schema whose option has a value
+     * (command line, scenario or default), so that running the file repeats the run.
+     */
+    private String effectiveScenario(Scenario source) {
+        StringBuilder y = new StringBuilder("# fadebench scenario: the settings of this run, written by fadebench");
+        y.append(source != null ? " (from " + source.source() + " and the command line)\n" : "\n");
+        String section = null;
+        for (ScenarioKey key : ScenarioSchema.keys()) {
+            Object value = spec.findOption(key.option()).getValue();
+            if (value == null || key.section().equals("output")) {
+                continue;
+            }
+            if (!key.section().equals(section)) {
+                section = key.section();
+                y.append(section).append(":\n");
+            }
+            String text = String.valueOf(value);
+            boolean quote = key.kind() == ScenarioKey.Kind.TEXT || key.kind() == ScenarioKey.Kind.SNR;
+            y.append("  ").append(key.name()).append(": ")
+                    .append(quote ? "\"" + text.replace("\\", "\\\\").replace("\"", "\\\"") + "\"" : text)
+                    .append('\n');
+        }
+        return y.toString();
+    }
+
+    /** The channel from its options; only the options given are passed on. */
+    private ChannelSpec channelSpec() {
+        Fading fad = parse("--fading", () -> Fading.fromCliName(fading));
+        return parse(null, () -> {
+            ChannelSpec c = ChannelSpec.of(fad);
+            if (kFactor != null) {
+                c = c.withKFactor(kFactor);
+            }
+            if (nakagamiM != null) {
+                c = c.withNakagamiM(nakagamiM);
+            }
+            if (txCorr != null) {
+                c = c.withTxCorr(txCorr);
+            }
+            if (rxCorr != null) {
+                c = c.withRxCorr(rxCorr);
+            }
+            if (doppler != null) {
+                c = c.withDoppler(doppler);
+            }
+            if (csiError != null) {
+                c = c.withCsiError(csiError);
+            }
+            if (pilots != null) {
+                c = c.withPilots(pilots);
+            }
+            if (trace != null) {
+                c = c.withTrace(readTrace(trace));
+            }
+            return c;
+        });
+    }
+
+    private static ChannelTrace readTrace(Path file) {
+        try {
+            return ChannelTrace.read(file);
+        } catch (java.io.UncheckedIOException e) {
+            throw new IllegalArgumentException("--trace " + file + ": " + (e.getCause() instanceof java.nio.file.NoSuchFileException
+                    ? "no such file" : "cannot be read (" + e.getCause().getMessage() + ")"));
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("--trace " + e.getMessage());
+        }
     }
 
     /** CRC, channel code, interleaver and LLRs from their options. */

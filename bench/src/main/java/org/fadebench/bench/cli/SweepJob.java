@@ -10,6 +10,8 @@ import java.util.List;
 import java.util.Locale;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.RunSummary;
+import org.fadebench.bench.link.ChannelRecorder;
+import org.fadebench.channel.ChannelTrace;
 import org.fadebench.bench.report.Archive;
 import org.fadebench.bench.report.FerPlot;
 import org.fadebench.bench.report.AtomicFiles;
@@ -22,7 +24,6 @@ import org.fadebench.bench.sweep.PointResult;
 import org.fadebench.bench.sweep.PointState;
 import org.fadebench.bench.sweep.SweepEngine;
 import org.fadebench.bench.sweep.SweepOutcome;
-import org.fadebench.channel.Fading;
 
 /**
  * Runs a {@link RunPlan}: prints the table as points finish, shows progress on a terminal, keeps a
@@ -65,6 +66,9 @@ final class SweepJob {
         var link = plan.link();
         SweepEngine engine = new SweepEngine(link, plan.rules(), plan.seed(), plan.threads(), plan.confidence());
         engine.progressMillis(250);
+        ChannelRecorder recorder = plan.traceOut() == null ? null
+                : new ChannelRecorder(link.receiveAntennas(), link.transmitAntennas(), plan.traceOutBlocks());
+        engine.recordChannels(recorder);
         String fingerprint = Checkpoint.fingerprint(plan.numbersFingerprintText(engine.batchFrames()));
         List<PointState> resume = plan.resume() ? readCheckpoint(fingerprint) : null;
 
@@ -100,7 +104,7 @@ final class SweepJob {
                     progress.close();
                 }
             }
-            return finish(outcome, fingerprint);
+            return finish(outcome, fingerprint, recorder);
         }
     }
 
@@ -132,9 +136,17 @@ final class SweepJob {
         };
     }
 
-    private int finish(SweepOutcome outcome, String fingerprint) {
+    private int finish(SweepOutcome outcome, String fingerprint, ChannelRecorder recorder) {
         boolean interrupted = outcome.interrupted();
-        if (plan.quiet() == false) {
+        ChannelTrace replayed = plan.link().channel().trace();
+        if (replayed != null && !plan.quiet()) {
+            long most = outcome.results().stream().mapToLong(r -> r.counts().frames()).max().orElse(0);
+            if (replayed.cyclesOver(most * plan.link().fadingBlocksPerFrame())) {
+                out.println("note: the trace's " + replayed.size() + " matrices were used cyclically (up to "
+                        + most * plan.link().fadingBlocksPerFrame() + " fading blocks per point), so blocks repeat");
+            }
+        }
+        if (!plan.quiet()) {
             for (PointResult r : outcome.results()) {
                 if (!r.complete()) {
                     out.println("partial: " + Numbers.db(r.snrDb()) + " dB after " + r.counts().frames() + " frames");
@@ -170,12 +182,19 @@ final class SweepJob {
                 written.add(dir.resolve(FerPlot.SVG_FILE));
             }
             Path scenario = dir.resolve("scenario.yaml");
-            AtomicFiles.writeString(scenario, plan.scenario() != null ? plan.scenario().text() : plan.asScenarioYaml());
+            AtomicFiles.writeString(scenario, plan.scenarioText());
             written.add(scenario);
             if (interrupted) {
                 Checkpoint.write(dir, fingerprint, outcome.states());
             } else {
                 Checkpoint.delete(dir);
+            }
+            if (recorder != null && !outcome.results().isEmpty()) {
+                long blocks = outcome.results().get(0).counts().frames() * plan.link().fadingBlocksPerFrame();
+                ChannelTrace drawn = recorder.trace("channels of " + plan.link().describe(),
+                        (int) Math.min(blocks, plan.traceOutBlocks()));
+                drawn.write(plan.traceOut());
+                written.add(plan.traceOut());
             }
             if (plan.archive() != null && !interrupted) {
                 Archive.write(plan.archive(), written);
@@ -201,7 +220,7 @@ final class SweepJob {
 
     /** The outage bounds assume i.i.d. Rayleigh fading and, for the code bounds, an orthogonal code. */
     private boolean boundsApply() {
-        return plan.bounds() != null && plan.link().fading() == Fading.RAYLEIGH;
+        return plan.bounds() != null && plan.link().channel().iidRayleigh();
     }
 
     private List<PointState> readCheckpoint(String fingerprint) {

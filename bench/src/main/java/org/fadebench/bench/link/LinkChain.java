@@ -1,8 +1,7 @@
 package org.fadebench.bench.link;
 
 import org.fadebench.channel.Draws;
-import org.fadebench.channel.FadingModel;
-import org.fadebench.channel.MimoChannel;
+import org.fadebench.channel.LinkChannel;
 import org.fadebench.coding.fec.FecCodec;
 import org.fadebench.coding.stbc.Combiner;
 import org.fadebench.coding.stbc.Decoder;
@@ -14,7 +13,8 @@ import org.fadebench.modem.QamConstellation;
  * One link, end to end, for one frame at a time:
  * <pre>
  * info bits → (CRC, convolutional code, puncturing, interleaver) → QAM map → space-time encode
- *   → per fading block: draw H, Y = X Hᵀ + N → combine with H (perfect CSI)
+ *   → per fading block: its channel (model, Doppler or trace), Y = X Hᵀ + N, the receiver's
+ *     estimate Ĥ (perfect, noisy or from pilots) → combine with Ĥ
  *   → uncoded: slice; coded: LLRs → deinterleave, depuncture, Viterbi, CRC
  *   → count bit, symbol and frame errors
  * </pre>
@@ -32,7 +32,7 @@ public final class LinkChain {
     private Combiner combiner;
     /** The noise level the combiner was made for (only MMSE depends on it). */
     private double combinerN0;
-    private final FadingModel fading;
+    private final LinkChannel channel;
     private final int mt;
     private final int nr;
     private final int k;
@@ -46,7 +46,8 @@ public final class LinkChain {
     private final double[] txSymbols;
     private final double[] estimates;
     private final double[] gain;
-    private final double[] h;
+    private final double[] hHat;
+    private final int fadesPerFrame;
     private final double[] grid;
     private final double[] received;
 
@@ -71,7 +72,8 @@ public final class LinkChain {
         this.mt = settings.transmitAntennas();
         this.combinerN0 = 1.0;
         this.combiner = code.newCombiner(nr, settings.decoder(), combinerN0);
-        this.fading = settings.fading().model();
+        this.channel = settings.channel().newLinkChannel(settings.receiveAntennas(), settings.transmitAntennas(),
+                settings.effectiveCoherenceSlots());
         this.k = code.symbolsPerBlock();
         this.t = code.slotsPerBlock();
         this.frameBits = settings.frameBits();
@@ -82,7 +84,8 @@ public final class LinkChain {
         this.txSymbols = new double[2 * symbols];
         this.estimates = new double[2 * symbols];
         this.gain = new double[symbols];
-        this.h = new double[2 * nr * mt];
+        this.hHat = new double[2 * nr * mt];
+        this.fadesPerFrame = settings.fadingBlocksPerFrame();
         int fadeSlots = blocksPerFade * t;
         this.grid = new double[2 * fadeSlots * mt];
         this.received = new double[2 * fadeSlots * nr];
@@ -112,19 +115,31 @@ public final class LinkChain {
         return settings;
     }
 
-    /** Simulates one frame at noise level {@code n0} (SNR = 1/n0) and adds it to {@code counters}. */
-    public void runFrame(Draws draws, double n0, FrameCounters counters) {
+    /** Where the chain copies the true channel of each fading block, or null (the default). */
+    private ChannelRecorder recorder;
+
+    /** Records the channels of the following frames into {@code recorder} (null to stop). */
+    public void recordChannels(ChannelRecorder recorder) {
+        this.recorder = recorder;
+    }
+
+    /**
+     * Simulates frame number {@code frame} of an SNR point (it numbers the fading blocks, which
+     * select a recorded trace's matrices) at noise level {@code n0} (SNR = 1/n0) and adds it to
+     * {@code counters}.
+     */
+    public void runFrame(Draws draws, double n0, long frame, FrameCounters counters) {
         if (codec == null) {
-            runUncoded(draws, n0, counters);
+            runUncoded(draws, n0, frame, counters);
         } else {
-            runCoded(draws, n0, counters);
+            runCoded(draws, n0, frame, counters);
         }
     }
 
-    private void runUncoded(Draws draws, double n0, FrameCounters counters) {
+    private void runUncoded(Draws draws, double n0, long frame, FrameCounters counters) {
         draws.fillLabels(sent, 0, symbols, bitsPerSymbol);
         constellation.mapLabels(sent, 0, txSymbols, 0, symbols);
-        transmit(draws, n0);
+        transmit(draws, n0, frame);
         constellation.demapLabels(estimates, 0, decided, 0, symbols);
         int bitErrors = 0;
         int symbolErrors = 0;
@@ -136,13 +151,13 @@ public final class LinkChain {
         counters.addFrame(frameBits, bitErrors, symbols, symbolErrors);
     }
 
-    private void runCoded(Draws draws, double n0, FrameCounters counters) {
+    private void runCoded(Draws draws, double n0, long frame, FrameCounters counters) {
         draws.fillBits(payload, 0, frameBits);
         codec.encode(payload, 0, codedBits, 0);
         // padding up to whole code blocks: random bits, sent and ignored
         draws.fillBits(codedBits, codedLength, codedBits.length - codedLength);
         constellation.map(codedBits, 0, txSymbols, 0, symbols);
-        transmit(draws, n0);
+        transmit(draws, n0, frame);
         constellation.demap(settings.coding().llr(), estimates, gain, 0, n0, llr, 0, symbols);
         boolean crcOk = codec.decode(llr, 0, payloadOut, 0);
         int bitErrors = 0;
@@ -163,20 +178,28 @@ public final class LinkChain {
                 withCrc && crcOk && bitErrors > 0);
     }
 
-    /** Space-time encoding, the channel of each fading block, and combining: txSymbols → estimates, gain. */
-    private void transmit(Draws draws, double n0) {
+    /**
+     * Space-time encoding, the channel of each fading block, the receiver's channel estimate, and
+     * combining with it: txSymbols → estimates, gain.
+     */
+    private void transmit(Draws draws, double n0, long frame) {
         if (n0 != combinerN0 && settings.decoder() == Decoder.MMSE) {
             // MMSE weights depend on the noise level: a new combiner when the SNR point changes
             combiner = settings.code().newCombiner(nr, Decoder.MMSE, n0);
             combinerN0 = n0;
         }
-        for (int first = 0; first < blocksPerFrame; first += blocksPerFade) {
+        long fade = frame * fadesPerFrame;
+        for (int first = 0; first < blocksPerFrame; first += blocksPerFade, fade++) {
             int blocks = Math.min(blocksPerFade, blocksPerFrame - first);
-            fading.draw(draws, nr, mt, h);
+            channel.startBlock(draws, fade, blocks * t);
             encoder.encode(txSymbols, first * k, blocks, grid, 0);
-            MimoChannel.apply(h, nr, mt, grid, 0, blocks * t, n0, draws, received, 0);
-            combiner.setChannel(h);
+            channel.transmit(grid, 0, n0, draws, received, 0);
+            channel.estimate(n0, draws, hHat);
+            combiner.setChannel(hHat);
             combiner.combine(received, 0, blocks, estimates, gain, first * k);
+            if (recorder != null) {
+                recorder.record(channel, fade);
+            }
         }
     }
 }

@@ -1,5 +1,6 @@
 package org.fadebench.bench.link;
 
+import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
 import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCode;
@@ -13,10 +14,11 @@ import org.fadebench.modem.Modulation;
  * @param frameBits       information bits per frame; a whole number of code blocks
  * @param coherenceSlots  slots (symbol periods) per fading block; 0 means the whole frame
  * @param decoder         linear decoder (matched filter, ZF or MMSE); all coincide for orthogonal codes
+ * @param channel         fading model, correlation, Doppler, receiver CSI, or a recorded trace
  * @param coding          CRC, channel code, interleaver and LLRs; {@link FrameCoding#NONE} for uncoded
  */
 public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas,
-                           int receiveAntennas, Fading fading, int frameBits, int coherenceSlots,
+                           int receiveAntennas, ChannelSpec channel, int frameBits, int coherenceSlots,
                            Decoder decoder, FrameCoding coding) {
 
     /** Frame length used when the user gives none, rounded up to whole code blocks. */
@@ -25,15 +27,27 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
     /** A link decoded by the matched filter. */
     public LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas, int receiveAntennas,
                         Fading fading, int frameBits, int coherenceSlots) {
-        this(modulation, code, transmitAntennas, receiveAntennas, fading, frameBits, coherenceSlots, Decoder.MF,
-                FrameCoding.NONE);
+        this(modulation, code, transmitAntennas, receiveAntennas, ChannelSpec.of(fading), frameBits, coherenceSlots,
+                Decoder.MF, FrameCoding.NONE);
+    }
+
+    /** A link over a plain fading model with perfect CSI. */
+    public LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas, int receiveAntennas,
+                        Fading fading, int frameBits, int coherenceSlots, Decoder decoder, FrameCoding coding) {
+        this(modulation, code, transmitAntennas, receiveAntennas, ChannelSpec.of(fading), frameBits, coherenceSlots,
+                decoder, coding);
     }
 
     /** An uncoded link. */
     public LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas, int receiveAntennas,
                         Fading fading, int frameBits, int coherenceSlots, Decoder decoder) {
-        this(modulation, code, transmitAntennas, receiveAntennas, fading, frameBits, coherenceSlots, decoder,
-                FrameCoding.NONE);
+        this(modulation, code, transmitAntennas, receiveAntennas, ChannelSpec.of(fading), frameBits, coherenceSlots,
+                decoder, FrameCoding.NONE);
+    }
+
+    /** The fading model's name (a trace reports the model it replaces, see {@link ChannelSpec}). */
+    public Fading fading() {
+        return channel.fading();
     }
 
     public LinkSettings {
@@ -68,6 +82,7 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
             throw new IllegalArgumentException("--frame-bits " + frameBits + " is more than the 16777216 supported");
         }
         coding.check(frameBits);
+        channel.check(receiveAntennas, transmitAntennas);
         if (decoder == Decoder.ZF && !code.isOrthogonal()
                 && (long) code.slotsPerBlock() * receiveAntennas * 2 < 2L * code.symbolsPerBlock()) {
             throw new IllegalArgumentException("--decoder zf cannot separate " + code.symbolsPerBlock()
@@ -137,7 +152,7 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
         String dec = code.isOrthogonal() ? "" : ", " + decoder.cliName() + " decoder";
         String fec = coding.coded() ? ", " + coding.describe() : "";
         return String.format(java.util.Locale.ROOT, "%s %dx%d, %s, %s fading, %d bits/frame (%d symbols, %d slots), %s%s%s",
-                code.name(), transmitAntennas, receiveAntennas, modulation.cliName(), fading.cliName(),
+                code.name(), transmitAntennas, receiveAntennas, modulation.cliName(), channel.describe(),
                 frameBits, symbolsPerFrame(), slotsPerFrame(), coherence, dec, fec);
     }
 }

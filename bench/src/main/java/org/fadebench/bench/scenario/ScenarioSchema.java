@@ -23,6 +23,14 @@ public final class ScenarioSchema {
             new ScenarioKey("link", "rx", "--rx", Kind.WHOLE, "receive antennas"),
             new ScenarioKey("link", "modulation", "--mod", Kind.TEXT, "bpsk, qpsk, 16qam, 64qam, 256qam"),
             new ScenarioKey("link", "fading", "--fading", Kind.TEXT, "fading model"),
+            new ScenarioKey("link", "k_factor", "--k-factor", Kind.NUMBER, "Rician K-factor, linear"),
+            new ScenarioKey("link", "nakagami_m", "--nakagami-m", Kind.NUMBER, "Nakagami m"),
+            new ScenarioKey("link", "tx_corr", "--tx-corr", Kind.NUMBER, "transmit correlation"),
+            new ScenarioKey("link", "rx_corr", "--rx-corr", Kind.NUMBER, "receive correlation"),
+            new ScenarioKey("link", "doppler", "--doppler", Kind.NUMBER, "normalised Doppler"),
+            new ScenarioKey("link", "csi_error", "--csi-error", Kind.NUMBER, "CSI error variance"),
+            new ScenarioKey("link", "pilots", "--pilots", Kind.WHOLE, "pilot slots per fading block"),
+            new ScenarioKey("link", "trace", "--trace", Kind.TEXT, "recorded channel trace"),
             new ScenarioKey("link", "fec", "--fec", Kind.TEXT, "channel code"),
             new ScenarioKey("link", "crc", "--crc", Kind.TEXT, "CRC per frame"),
             new ScenarioKey("link", "interleaver", "--interleaver", Kind.TEXT, "random, block, none"),
@@ -44,7 +52,9 @@ public final class ScenarioSchema {
             new ScenarioKey("analysis", "outage_draws", "--outage-draws", Kind.WHOLE, "draws of the MIMO bound"),
             new ScenarioKey("output", "folder", "--out", Kind.TEXT, "output folder"),
             new ScenarioKey("output", "archive", "--archive", Kind.TEXT, ".tar.xz or .tar.gz bundle"),
-            new ScenarioKey("output", "quiet", "--quiet", Kind.FLAG, "no table or progress bar"));
+            new ScenarioKey("output", "quiet", "--quiet", Kind.FLAG, "no table or progress bar"),
+            new ScenarioKey("output", "trace_out", "--trace-out", Kind.TEXT, "record the channels drawn"),
+            new ScenarioKey("output", "trace_out_blocks", "--trace-out-blocks", Kind.WHOLE, "most blocks recorded"));
 
     private ScenarioSchema() {
     }

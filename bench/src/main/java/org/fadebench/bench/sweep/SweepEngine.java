@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.TreeMap;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
+import org.fadebench.bench.link.ChannelRecorder;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkChain;
 import org.fadebench.bench.link.LinkSettings;
@@ -52,6 +53,7 @@ public final class SweepEngine {
     private final int batchFrames;
     private volatile boolean stopRequested;
     private long progressMillis = 500;
+    private ChannelRecorder recorder;
 
     public SweepEngine(LinkSettings link, StopRules rules, long seed, int threads, double confidence) {
         if (threads <= 0) {
@@ -73,6 +75,11 @@ public final class SweepEngine {
     /** How often {@link Listener#progress} is called. */
     public void progressMillis(long millis) {
         this.progressMillis = millis;
+    }
+
+    /** Keeps the channels of the first SNR point's first fading blocks (see {@link ChannelRecorder}). */
+    public void recordChannels(ChannelRecorder recorder) {
+        this.recorder = recorder;
     }
 
     /** Asks a running sweep to stop after the batches in flight; safe from any thread. */
@@ -138,12 +145,15 @@ public final class SweepEngine {
     }
 
     private void work(Schedule s, LinkChain chain) {
+        ChannelRecorder mine = recorder == null ? null : recorder.forThread();
         Task t;
         while ((t = s.next()) != null) {
             Draws draws = Draws.of(seed, t.point, t.batch);
             FrameCounters c = new FrameCounters();
+            chain.recordChannels(t.point == 0 ? mine : null);
+            long first = t.batch * batchFrames;
             for (int f = 0; f < t.frames; f++) {
-                chain.runFrame(draws, t.n0, c);
+                chain.runFrame(draws, t.n0, first + f, c);
             }
             s.complete(t, c);
         }
