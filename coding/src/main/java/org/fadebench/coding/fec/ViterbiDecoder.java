@@ -8,8 +8,9 @@ import java.util.Arrays;
  * and an asymptotically optimum decoding algorithm", IEEE Trans. Inf. Theory 13(2), 1967).
  *
  * <p>Input LLRs follow the modem's convention, L = ln P(b=0)/P(b=1), finite, with 0 for punctured
- * positions. The path metric is the correlation Σ L·(1−2c), maximised, in doubles: with
- * independent bits this is maximum likelihood. Each step runs add-compare-select over butterflies
+ * positions. The path metric is the correlation Σ L·(1−2c), maximised: with independent bits this
+ * is maximum likelihood. Rate-1/2 codes with symmetric butterflies (the catalogue's codes) take a
+ * shorter path with one branch metric per butterfly. Each step runs add-compare-select over butterflies
  * (states 2j and 2j+1 both lead to states j and j + 2^(K-2)), keeps one decision bit per state in a
  * 64-bit word, and the final traceback starts from the zero state the tail forces.
  *
@@ -28,6 +29,14 @@ public final class ViterbiDecoder {
     private final double[] branchMetric;
     private double[] metric;
     private double[] nextMetric;
+    /**
+     * Rate-1/2 codes whose generators all tap both the newest input and the oldest memory bit (the
+     * (133, 171) and (5, 7) codes) have symmetric butterflies: the branches 2j+1→j and 2j→j+half
+     * carry the complement of 2j→j's output and 2j+1→j+half the same output, so one branch metric b
+     * serves all four (+b, −b, −b, +b). Null for other codes.
+     */
+    private final int[] symmetricLabels;
+
     /** Bit s of word t: which predecessor (its lowest state bit) survived into state s at step t. */
     private final long[] decisions;
 
@@ -54,6 +63,8 @@ public final class ViterbiDecoder {
             butterflyLabels[4 * j + 3] = code.label(2 * j + 1, 1);
         }
         this.branchMetric = new double[1 << outputs];
+        this.symmetricLabels = symmetric(code) ? lowerLabels(code) : null;
+
         this.metric = new double[states];
         this.nextMetric = new double[states];
         this.decisions = new long[code.steps(maxInfoBits)];
@@ -86,11 +97,74 @@ public final class ViterbiDecoder {
         int steps = code.steps(infoBits);
         Arrays.fill(metric, Double.NEGATIVE_INFINITY);
         metric[0] = 0;
-        for (int t = 0; t < steps; t++) {
-            fillBranchMetrics(llr, off + t * outputs);
-            decisions[t] = addCompareSelect();
+        if (symmetricLabels != null) {
+            for (int t = 0; t < steps; t++) {
+                decisions[t] = symmetricStep(llr[off + 2 * t], llr[off + 2 * t + 1]);
+            }
+        } else {
+            for (int t = 0; t < steps; t++) {
+                fillBranchMetrics(llr, off + t * outputs);
+                decisions[t] = addCompareSelect();
+            }
         }
         traceBack(steps, infoBits, out, outOff);
+    }
+
+    private static boolean symmetric(ConvolutionalCode code) {
+        if (code.outputs() != 2) {
+            return false;
+        }
+        int half = code.states() / 2;
+        for (int j = 0; j < half; j++) {
+            int c = code.label(2 * j, 0);
+            if (code.label(2 * j + 1, 0) != (c ^ 3) || code.label(2 * j, 1) != (c ^ 3)
+                    || code.label(2 * j + 1, 1) != c) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static int[] lowerLabels(ConvolutionalCode code) {
+        int[] labels = new int[code.states() / 2];
+        for (int j = 0; j < labels.length; j++) {
+            labels[j] = code.label(2 * j, 0);
+        }
+        return labels;
+    }
+
+    /**
+     * One trellis step of a symmetric rate-1/2 code: the four branch metrics are ±l0 ± l1 (label
+     * bit i set: output i is 1, metric −l_i), each butterfly uses one of them with both signs.
+     */
+    private long symmetricStep(double l0, double l1) {
+        double[] bm = branchMetric;
+        bm[0] = l0 + l1;
+        bm[1] = -l0 + l1;
+        bm[2] = l0 - l1;
+        bm[3] = -l0 - l1;
+        double[] cur = metric;
+        double[] nxt = nextMetric;
+        metric = nxt;
+        nextMetric = cur;
+        int[] lab = symmetricLabels;
+        int half = lab.length;
+        long lowerWord = 0;
+        long upperWord = 0;
+        for (int j = 0; j < half; j++) {
+            double m0 = cur[2 * j];
+            double m1 = cur[2 * j + 1];
+            double b = bm[lab[j]];
+            double lower0 = m0 + b;
+            double lower1 = m1 - b;
+            double upper0 = m0 - b;
+            double upper1 = m1 + b;
+            nxt[j] = Math.max(lower0, lower1);
+            nxt[j + half] = Math.max(upper0, upper1);
+            lowerWord |= oddWins(lower0, lower1) << j;
+            upperWord |= oddWins(upper0, upper1) << j;
+        }
+        return lowerWord | upperWord << half;
     }
 
     /** branchMetric[label] = Σ_i (1 - 2 c_i) L_i, built label by label from smaller labels. */
