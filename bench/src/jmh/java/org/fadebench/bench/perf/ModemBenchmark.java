@@ -38,6 +38,8 @@ public class ModemBenchmark {
     private double[] noisy;
     private double[] gain;
     private double[] llr;
+    private int[] labels;
+    private int[] decidedLabels;
 
     @Setup
     public void setUp() {
@@ -56,6 +58,9 @@ public class ModemBenchmark {
             noisy[i] = symbols[i] + 0.1 * d.gaussian();
         }
         java.util.Arrays.fill(gain, 1.0);
+        labels = new int[SYMBOLS];
+        decidedLabels = new int[SYMBOLS];
+        d.fillLabels(labels, 0, SYMBOLS, b);
     }
 
     @Benchmark
@@ -77,5 +82,19 @@ public class ModemBenchmark {
     public double[] demapMaxLog() {
         constellation.demapMaxLog(noisy, gain, 0, 0.1, llr, 0, SYMBOLS);
         return llr;
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(SYMBOLS)
+    public double[] mapLabels() {
+        constellation.mapLabels(labels, 0, symbols, 0, SYMBOLS);
+        return symbols;
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(SYMBOLS)
+    public int[] demapLabels() {
+        constellation.demapLabels(noisy, 0, decidedLabels, 0, SYMBOLS);
+        return decidedLabels;
     }
 }
