@@ -30,7 +30,6 @@ import org.openjdk.jmh.annotations.Warmup;
  * of 512 Alamouti 2x2 symbols (4 draws per symbol) through the simulator's own {@link Draws}, in
  * symbols per second, the yardstick for the full frame.
  */
-@State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)
 @OutputTimeUnit(TimeUnit.SECONDS)
 @Warmup(iterations = 3, time = 1)
@@ -41,50 +40,59 @@ public class NoiseBenchmark {
     private static final int N = 1024;
     private static final int SYMBOLS = 512;
 
-    @Param({"commons-ziggurat", "commons-ziggurat-old", "commons-marsaglia", "commons-boxmuller", "jdk17-xoshiro"})
-    public String sampler;
+    /** The simulator's own stream and a buffer the size of a frame's noise. */
+    @State(Scope.Thread)
+    public static class FrameNoise {
+        final Draws draws = Draws.of(1, 2, 3);
+        final double[] out = new double[4 * SYMBOLS];
+    }
 
-    private NormalizedGaussianSampler commons;
-    private RandomGenerator jdk;
-    private Draws draws;
-    private final double[] out = new double[4 * SYMBOLS];
+    /** One of the candidate samplers. */
+    @State(Scope.Thread)
+    public static class Candidate {
+        @Param({"commons-ziggurat", "commons-ziggurat-old", "commons-marsaglia", "commons-boxmuller",
+            "jdk17-xoshiro"})
+        public String sampler;
 
-    @Setup
-    public void setUp() {
-        UniformRandomProvider rng = RandomSource.XO_SHI_RO_256_PP.create(12345L);
-        switch (sampler) {
-            case "commons-ziggurat":
-                commons = ZigguratSampler.NormalizedGaussian.of(rng);
-                break;
-            case "commons-ziggurat-old":
-                commons = ZigguratNormalizedGaussianSampler.of(rng);
-                break;
-            case "commons-marsaglia":
-                commons = MarsagliaNormalizedGaussianSampler.of(rng);
-                break;
-            case "commons-boxmuller":
-                commons = BoxMullerNormalizedGaussianSampler.of(rng);
-                break;
-            case "jdk17-xoshiro":
-                jdk = RandomGeneratorFactory.of("Xoshiro256PlusPlus").create(12345L);
-                break;
-            default:
-                throw new IllegalArgumentException(sampler);
+        NormalizedGaussianSampler commons;
+        RandomGenerator jdk;
+
+        @Setup
+        public void setUp() {
+            UniformRandomProvider rng = RandomSource.XO_SHI_RO_256_PP.create(12345L);
+            switch (sampler) {
+                case "commons-ziggurat":
+                    commons = ZigguratSampler.NormalizedGaussian.of(rng);
+                    break;
+                case "commons-ziggurat-old":
+                    commons = ZigguratNormalizedGaussianSampler.of(rng);
+                    break;
+                case "commons-marsaglia":
+                    commons = MarsagliaNormalizedGaussianSampler.of(rng);
+                    break;
+                case "commons-boxmuller":
+                    commons = BoxMullerNormalizedGaussianSampler.of(rng);
+                    break;
+                case "jdk17-xoshiro":
+                    jdk = RandomGeneratorFactory.of("Xoshiro256PlusPlus").create(12345L);
+                    break;
+                default:
+                    throw new IllegalArgumentException(sampler);
+            }
         }
-        draws = Draws.of(1, 2, 3);
     }
 
     @Benchmark
     @OperationsPerInvocation(N)
-    public double draw() {
+    public double draw(Candidate c) {
         double s = 0;
-        if (jdk != null) {
+        if (c.jdk != null) {
             for (int i = 0; i < N; i++) {
-                s += jdk.nextGaussian();
+                s += c.jdk.nextGaussian();
             }
         } else {
             for (int i = 0; i < N; i++) {
-                s += commons.sample();
+                s += c.commons.sample();
             }
         }
         return s;
@@ -92,8 +100,8 @@ public class NoiseBenchmark {
 
     @Benchmark
     @OperationsPerInvocation(SYMBOLS)
-    public double[] alamouti2x2NoiseOnly() {
-        draws.fillGaussian(out, 0, out.length, 1.0);
-        return out;
+    public double[] alamouti2x2NoiseOnly(FrameNoise f) {
+        f.draws.fillGaussian(f.out, 0, f.out.length, 1.0);
+        return f.out;
     }
 }
