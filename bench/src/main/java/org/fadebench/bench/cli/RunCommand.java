@@ -23,6 +23,7 @@ import org.fadebench.bench.sweep.StopRules;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.Fading;
+import org.fadebench.channel.KroneckerCorrelation;
 import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.modem.Modulation;
@@ -216,8 +217,8 @@ final class RunCommand implements Callable<Integer> {
     private void applyScenario(Scenario scenario) {
         CommandLine.ParseResult parsed = spec.commandLine().getParseResult();
         for (Map.Entry<String, Scenario.Setting> e : scenario.settings().entrySet()) {
-            String option = e.getKey();
-            if (parsed != null && parsed.hasMatchedOption(option)) {
+            String option = e.getValue().key().option();
+            if (option == null || (parsed != null && parsed.hasMatchedOption(option))) {
                 continue;
             }
             OptionSpec o = spec.findOption(option);
@@ -271,7 +272,8 @@ final class RunCommand implements Callable<Integer> {
         SpaceTimeCode stbc = linkOptions.code();
         Decoder dec = decoder != null ? parse("--decoder", () -> Decoder.fromCliName(decoder))
                 : stbc.isOrthogonal() ? Decoder.MF : Decoder.MMSE;
-        ChannelSpec channel = channelSpec();
+        ChannelSpec channel = withCorrelationMatrices(channelSpec(), scenario, linkOptions.rx,
+                linkOptions.transmitAntennas(stbc));
         double[] snrDb = parse(null, () -> SnrGrid.parse(snr));
         FrameCoding coding = frameCoding();
         int bits = frameBits != null ? frameBits
@@ -324,6 +326,9 @@ final class RunCommand implements Callable<Integer> {
         y.append(source != null ? " (from " + source.source() + " and the command line)\n" : "\n");
         String section = null;
         for (ScenarioKey key : ScenarioSchema.keys()) {
+            if (key.option() == null) {
+                continue;
+            }
             Object value = spec.findOption(key.option()).getValue();
             if (value == null || key.section().equals("output")) {
                 continue;
@@ -339,6 +344,38 @@ final class RunCommand implements Callable<Integer> {
                     .append('\n');
         }
         return y.toString();
+    }
+
+    /**
+     * Full correlation matrices from the scenario file ({@code link.rx_corr_matrix},
+     * {@code link.tx_corr_matrix}), checked Hermitian, unit diagonal and positive semidefinite;
+     * errors name the file, line and key.
+     */
+    private static ChannelSpec withCorrelationMatrices(ChannelSpec channel, Scenario scenario, int nr, int mt) {
+        if (scenario == null) {
+            return channel;
+        }
+        Scenario.Setting rx = scenario.byPath("link.rx_corr_matrix");
+        Scenario.Setting tx = scenario.byPath("link.tx_corr_matrix");
+        if (rx == null && tx == null) {
+            return channel;
+        }
+        Scenario.Setting first = rx != null ? rx : tx;
+        try {
+            if (rx != null && rx.matrix().length != 2 * nr * nr) {
+                throw new IllegalArgumentException("the receive correlation matrix must be " + nr + " x " + nr
+                        + " for " + nr + " receive antennas");
+            }
+            if (tx != null && tx.matrix().length != 2 * mt * mt) {
+                first = tx;
+                throw new IllegalArgumentException("the transmit correlation matrix must be " + mt + " x " + mt
+                        + " for " + mt + " transmit antennas");
+            }
+            return channel.withCorrelation(KroneckerCorrelation.of(nr, mt, rx == null ? null : rx.matrix(),
+                    tx == null ? null : tx.matrix()));
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException(first.where(scenario.source()) + ": " + e.getMessage());
+        }
     }
 
     /** The channel from its options; only the options given are passed on. */

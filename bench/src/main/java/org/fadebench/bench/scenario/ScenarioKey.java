@@ -2,7 +2,7 @@ package org.fadebench.bench.scenario;
 
 /**
  * One key of the scenario schema: its section and name in the file, the command-line option it
- * stands for, and the kind of value it takes.
+ * stands for (null for a key that exists in scenario files only), and the kind of value it takes.
  */
 public record ScenarioKey(String section, String name, String option, Kind kind, String help) {
 
@@ -13,7 +13,9 @@ public record ScenarioKey(String section, String name, String option, Kind kind,
         NUMBER("a number"),
         /** A dB value, a START:STEP:STOP text, or a list of numbers. */
         SNR("a number, START:STEP:STOP, or a list of numbers"),
-        FLAG("true or false");
+        FLAG("true or false"),
+        /** A square complex matrix: a list of rows, each entry a number or a pair [re, im]. */
+        MATRIX("a list of rows of numbers or [re, im] pairs");
 
         private final String description;
 

@@ -104,8 +104,15 @@ public final class ScenarioLoader {
                             + suggest(key, ScenarioSchema.names(section)) + "; valid keys in " + section + ": "
                             + String.join(", ", ScenarioSchema.names(section)));
                 }
-                String value = value(k.get(), kv.getValueNode(), name);
-                settings.put(k.get().option(), new Scenario.Setting(k.get(), value, line(kv.getValueNode())));
+                ScenarioKey known = k.get();
+                int valueLine = line(kv.getValueNode());
+                if (known.kind() == ScenarioKey.Kind.MATRIX) {
+                    double[] m = matrix(known, kv.getValueNode(), name);
+                    settings.put(known.path(), new Scenario.Setting(known, "matrix", valueLine, m));
+                } else {
+                    settings.put(known.option(), new Scenario.Setting(known, value(known, kv.getValueNode(), name),
+                            valueLine));
+                }
             }
         }
         return new Scenario(name, text, settings);
@@ -202,6 +209,38 @@ public final class ScenarioLoader {
                 }
                 return v;
         }
+    }
+
+    /** A square matrix of numbers or [re, im] pairs, interleaved row-major. */
+    private static double[] matrix(ScenarioKey key, Node node, String name) {
+        String where = name + " line " + line(node) + ", key " + key.path() + ": ";
+        if (!(node instanceof SequenceNode rows) || rows.getValue().isEmpty() || rows.getValue().size() > 64) {
+            throw new ScenarioException(where + "expected " + key.kind().description() + " (1 to 64 rows)");
+        }
+        int n = rows.getValue().size();
+        double[] m = new double[2 * n * n];
+        for (int i = 0; i < n; i++) {
+            Node row = rows.getValue().get(i);
+            if (!(row instanceof SequenceNode cells) || cells.getValue().size() != n) {
+                throw new ScenarioException(name + " line " + line(row) + ", key " + key.path() + ": row " + (i + 1)
+                        + " must hold " + n + " entries (the matrix is square)");
+            }
+            for (int j = 0; j < n; j++) {
+                Node cell = cells.getValue().get(j);
+                String at = name + " line " + line(cell) + ", key " + key.path() + ": ";
+                if (cell instanceof ScalarNode sc) {
+                    m[2 * (i * n + j)] = Double.parseDouble(number(sc.getValue(), at, key));
+                } else if (cell instanceof SequenceNode pair && pair.getValue().size() == 2
+                        && pair.getValue().get(0) instanceof ScalarNode re && pair.getValue().get(1) instanceof ScalarNode im) {
+                    m[2 * (i * n + j)] = Double.parseDouble(number(re.getValue(), at, key));
+                    m[2 * (i * n + j) + 1] = Double.parseDouble(number(im.getValue(), at, key));
+                } else {
+                    throw new ScenarioException(at + "entry (" + (i + 1) + ", " + (j + 1) + ") must be a number or a pair "
+                            + "[re, im]");
+                }
+            }
+        }
+        return m;
     }
 
     private static String number(String v, String where, ScenarioKey key) {

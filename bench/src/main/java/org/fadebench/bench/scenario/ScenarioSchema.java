@@ -27,6 +27,8 @@ public final class ScenarioSchema {
             new ScenarioKey("link", "nakagami_m", "--nakagami-m", Kind.NUMBER, "Nakagami m"),
             new ScenarioKey("link", "tx_corr", "--tx-corr", Kind.NUMBER, "transmit correlation"),
             new ScenarioKey("link", "rx_corr", "--rx-corr", Kind.NUMBER, "receive correlation"),
+            new ScenarioKey("link", "tx_corr_matrix", null, Kind.MATRIX, "full transmit correlation matrix"),
+            new ScenarioKey("link", "rx_corr_matrix", null, Kind.MATRIX, "full receive correlation matrix"),
             new ScenarioKey("link", "doppler", "--doppler", Kind.NUMBER, "normalised Doppler"),
             new ScenarioKey("link", "csi_error", "--csi-error", Kind.NUMBER, "CSI error variance"),
             new ScenarioKey("link", "pilots", "--pilots", Kind.WHOLE, "pilot slots per fading block"),
@@ -77,7 +79,7 @@ public final class ScenarioSchema {
     }
 
     public static Optional<ScenarioKey> forOption(String option) {
-        return KEYS.stream().filter(k -> k.option().equals(option)).findFirst();
+        return KEYS.stream().filter(k -> option.equals(k.option())).findFirst();
     }
 
     /** Key names of a section. */

@@ -147,4 +147,33 @@ class ScenarioCliTest {
             assertTrue(s.noneMatch(p -> p.getFileName().toString().endsWith(".tmp")));
         }
     }
+
+    /**
+     * Full correlation matrices come from the scenario file and are checked (Hermitian, unit
+     * diagonal, positive semidefinite); an error names the file, line and key.
+     */
+    @Test
+    void correlationMatricesFromScenario() throws IOException {
+        Path ok = scenario(String.join("\n", "link:", "  code: alamouti", "  rx: 2", "  rx_corr_matrix:",
+                "    - [1, [0.5, 0.3]]", "    - [[0.5, -0.3], 1]", "sweep:", "  snr_db: [10]", "  min_errors: 10", ""));
+        CliTest.Outcome o = CliTest.run("run", ok.toString(), "--out", tmp.resolve("ok").toString(), "--quiet");
+        assertEquals(0, o.code(), o.err());
+        assertTrue(Files.readString(tmp.resolve("ok/results.csv")).contains("correlation matrices"));
+        Path notHermitian = scenario(String.join("\n", "link:", "  rx: 2", "  rx_corr_matrix:", "    - [1, 0.5]",
+                "    - [0.4, 1]", ""));
+        o = CliTest.run("run", notHermitian.toString(), "--out", tmp.resolve("x").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("key link.rx_corr_matrix: rx correlation matrix must be Hermitian"), o.err());
+        Path notPsd = scenario(String.join("\n", "link:", "  rx: 2", "  rx_corr_matrix:", "    - [1, 1.5]",
+                "    - [1.5, 1]", ""));
+        o = CliTest.run("run", notPsd.toString(), "--out", tmp.resolve("x").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("must be positive semidefinite"), o.err());
+        Path ragged = scenario(String.join("\n", "link:", "  rx: 2", "  rx_corr_matrix:", "    - [1, 0]",
+                "    - [0]", ""));
+        o = CliTest.run("run", ragged.toString(), "--out", tmp.resolve("x").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("line 5, key link.rx_corr_matrix: row 2 must hold 2 entries"), o.err());
+        assertTrue(!Files.exists(tmp.resolve("x")));
+    }
 }
