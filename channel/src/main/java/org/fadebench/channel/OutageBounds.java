@@ -53,9 +53,23 @@ public final class OutageBounds {
      */
     public static double stbcOutage(double snrDb, int mt, int nr, double codeRate,
                                     double spectralEfficiency) {
+        return stbcOutage(snrDb, mt, nr, codeRate, spectralEfficiency, rayleighGainCdf(mt, nr));
+    }
+
+    /**
+     * As {@link #stbcOutage(double, int, int, double, double)} for any fading: {@code gainCdf} is
+     * the distribution function of ‖H‖²_F (e.g. {@link ChannelGainSamples#cdf}).
+     */
+    public static double stbcOutage(double snrDb, int mt, int nr, double codeRate, double spectralEfficiency,
+                                    DoubleUnaryOperator gainCdf) {
         checkLink(snrDb, mt, nr, codeRate, spectralEfficiency);
         double thresholdSnr = Math.expm1(spectralEfficiency / codeRate * Math.log(2.0));
-        return rayleighOutage(snrDb, mt, nr, codeRate, thresholdSnr);
+        return outage(snrDb, mt, codeRate, thresholdSnr, gainCdf);
+    }
+
+    /** The distribution function of ‖H‖²_F ~ Gamma(Mt·Nr, 1) under i.i.d. Rayleigh fading. */
+    public static DoubleUnaryOperator rayleighGainCdf(int mt, int nr) {
+        return x -> Gamma.regularizedGammaP(mt * nr, x);
     }
 
     /**
@@ -69,6 +83,14 @@ public final class OutageBounds {
     public static double stbcOutage(double snrDb, int mt, int nr, double codeRate,
                                     double spectralEfficiency, DoubleUnaryOperator bitsPerSymbol,
                                     double maxBitsPerSymbol) {
+        return stbcOutage(snrDb, mt, nr, codeRate, spectralEfficiency, bitsPerSymbol, maxBitsPerSymbol,
+                rayleighGainCdf(mt, nr));
+    }
+
+    /** As the finite-alphabet outage above for any fading, with {@code gainCdf} the distribution of ‖H‖²_F. */
+    public static double stbcOutage(double snrDb, int mt, int nr, double codeRate,
+                                    double spectralEfficiency, DoubleUnaryOperator bitsPerSymbol,
+                                    double maxBitsPerSymbol, DoubleUnaryOperator gainCdf) {
         checkLink(snrDb, mt, nr, codeRate, spectralEfficiency);
         if (!(maxBitsPerSymbol > 0.0)) {
             throw new IllegalArgumentException("maxBitsPerSymbol must be > 0, got " + maxBitsPerSymbol);
@@ -77,7 +99,7 @@ public final class OutageBounds {
             return 1.0;
         }
         double thresholdSnr = thresholdSnr(bitsPerSymbol, spectralEfficiency / codeRate);
-        return rayleighOutage(snrDb, mt, nr, codeRate, thresholdSnr);
+        return outage(snrDb, mt, codeRate, thresholdSnr, gainCdf);
     }
 
     /**
@@ -138,14 +160,14 @@ public final class OutageBounds {
         return 0.5 * (lo + hi);
     }
 
-    /** P(γ < γ_th) for γ = snr·‖H‖²_F/(Mt·r) with ‖H‖²_F ~ Gamma(Mt·Nr, 1). */
-    private static double rayleighOutage(double snrDb, int mt, int nr, double codeRate,
-                                         double thresholdSnr) {
+    /** P(γ < γ_th) for γ = snr·‖H‖²_F/(Mt·r), with ‖H‖²_F distributed by {@code gainCdf}. */
+    private static double outage(double snrDb, int mt, double codeRate, double thresholdSnr,
+                                 DoubleUnaryOperator gainCdf) {
         double x = thresholdSnr * mt * codeRate / fromDb(snrDb);
         if (x == Double.POSITIVE_INFINITY) {
             return 1.0;
         }
-        return Gamma.regularizedGammaP(mt * nr, x);
+        return gainCdf.applyAsDouble(x);
     }
 
     private static double fromDb(double db) {

@@ -2,6 +2,7 @@ package org.fadebench.bench.cli;
 
 import org.fadebench.bench.analysis.BoundSettings;
 import org.fadebench.bench.link.LinkSettings;
+import org.fadebench.channel.ChannelSpec;
 import org.fadebench.modem.MutualInformation;
 import picocli.CommandLine.Option;
 
@@ -23,8 +24,9 @@ final class BoundOptions {
     int draws;
 
     /**
-     * The bound settings for a link, or null for a code that is not orthogonal (the code bounds do
-     * not hold for it); throws {@link InvalidInputException} naming the option at fault.
+     * The bound settings for a link, or null where they do not apply: a code that is not
+     * orthogonal, a channel that changes within a block (Doppler) or replays a trace. Throws
+     * {@link InvalidInputException} naming the option at fault.
      */
     BoundSettings settings(LinkSettings link) {
         if (rate != null && !(rate > 0 && Double.isFinite(rate))) {
@@ -41,6 +43,11 @@ final class BoundOptions {
         if (rate != null) {
             s = s.withSpectralEfficiency(rate);
         }
-        return s.withInformation(kind).withMimoDraws(draws, BoundSettings.DEFAULT_MIMO_SEED);
+        s = s.withInformation(kind).withMimoDraws(draws, BoundSettings.DEFAULT_MIMO_SEED);
+        ChannelSpec channel = link.channel();
+        if (channel.varies() || channel.trace() != null) {
+            return null;
+        }
+        return s.withChannel(channel);
     }
 }

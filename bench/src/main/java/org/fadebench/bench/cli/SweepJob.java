@@ -218,9 +218,9 @@ final class SweepJob {
         return interrupted ? INTERRUPTED : ExitCodes.OK;
     }
 
-    /** The outage bounds assume i.i.d. Rayleigh fading and, for the code bounds, an orthogonal code. */
+    /** The outage bounds need an orthogonal code and a channel constant over each block (see BoundOptions). */
     private boolean boundsApply() {
-        return plan.bounds() != null && plan.link().channel().iidRayleigh();
+        return plan.bounds() != null;
     }
 
     private List<PointState> readCheckpoint(String fingerprint) {

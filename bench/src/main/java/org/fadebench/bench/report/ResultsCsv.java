@@ -44,13 +44,17 @@ public final class ResultsCsv {
         if (bounds != null) {
             BoundSettings b = bounds.settings();
             w.append("# p_out_*: outage probability at R = ").append(Numbers.db(b.spectralEfficiency()))
-                    .append(" bits per channel use, i.i.d. Rayleigh: mimo = Gaussian inputs on the ")
+                    .append(" bits per channel use, ")
+                    .append(b.channel() == null ? "i.i.d. Rayleigh" : b.channel().describe() + " by Monte Carlo over "
+                            + b.mimoDraws() + " channel draws")
+                    .append(": mimo = Gaussian inputs on the ")
                     .append(b.transmitAntennas()).append('x').append(b.receiveAntennas()).append(" channel")
                     .append(b.mimoExact() ? " (exact)" : " (Monte Carlo, " + b.mimoDraws() + " draws, 95 % Wilson interval)")
                     .append("; stbc = the code with Gaussian symbols; qam = the code with ")
                     .append(link.modulation().cliName()).append(" (").append(b.information().cliName()).append(")\n");
         } else {
-            w.append("# p_out_*: empty, outage bounds are given for i.i.d. Rayleigh fading and orthogonal codes only\n");
+            w.append("# p_out_*: empty, outage bounds are given for orthogonal codes over channels constant within a "
+                    + "block (no Doppler, no trace)\n");
         }
         if (link.coding().coded()) {
             w.append("# coded: ").append(link.coding().describe()).append("; ").append(link.codedBitsPerFrame())

@@ -34,7 +34,7 @@ class DiversityFitTest {
         for (int[] l : links) {
             double codeRate = l[0] == 4 ? 0.75 : 1.0;
             BoundSettings s = new BoundSettings(l[0], l[1], codeRate, Modulation.QPSK, 1.0, Kind.CODED_MODULATION,
-                    1, 1L);
+                    1, 1L, null, null);
             double[] values = new double[HIGH_SNR_DB.length];
             for (int i = 0; i < values.length; i++) {
                 values[i] = s.stbcOutage(HIGH_SNR_DB[i]);

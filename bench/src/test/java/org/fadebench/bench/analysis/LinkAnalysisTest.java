@@ -90,7 +90,7 @@ class LinkAnalysisTest {
     /** The Monte Carlo MIMO bound: crossing by interpolation, fit only over points with enough outages. */
     @Test
     void monteCarloMimoBound() {
-        BoundSettings settings = new BoundSettings(2, 2, 1.0, Modulation.QPSK, 2.0, Kind.CODED_MODULATION, 4000, 3L);
+        BoundSettings settings = new BoundSettings(2, 2, 1.0, Modulation.QPSK, 2.0, Kind.CODED_MODULATION, 4000, 3L, null, null);
         double[] snrDb = {0, 3, 6, 9, 12, 15, 18};
         BoundCurves curves = BoundCurves.compute(settings, snrDb);
         LinkAnalysis a = LinkAnalysis.of(SWEEP, curves, 0.05, 10, 3);

@@ -52,7 +52,7 @@ class TargetCrossingTest {
         assertEquals(OptionalDouble.empty(), TargetCrossing.interpolate(snrDb, new double[] {0.5, 0.1, 0.0}, 0.01),
                 "a point with no errors has no logarithm");
         assertEquals(OptionalDouble.empty(), TargetCrossing.interpolate(new double[] {3}, new double[] {0.5}, 0.01));
-        BoundSettings full = new BoundSettings(2, 1, 1.0, Modulation.QPSK, 2.0, Kind.CODED_MODULATION, 1, 1L);
+        BoundSettings full = new BoundSettings(2, 1, 1.0, Modulation.QPSK, 2.0, Kind.CODED_MODULATION, 1, 1L, null, null);
         assertEquals(OptionalDouble.empty(), TargetCrossing.ofClosedForm(full::qamOutage, 0.01),
                 "QAM bound is 1 at R = r·log2 M");
     }
@@ -71,7 +71,7 @@ class TargetCrossingTest {
      */
     @Test
     void closedFormCrossingInvertsSisoOutage() {
-        BoundSettings siso = new BoundSettings(1, 1, 1.0, Modulation.QPSK, 1.5, Kind.CODED_MODULATION, 1, 1L);
+        BoundSettings siso = new BoundSettings(1, 1, 1.0, Modulation.QPSK, 1.5, Kind.CODED_MODULATION, 1, 1L, null, null);
         double target = 1e-3;
         double expected = 10 * Math.log10(-(Math.pow(2, 1.5) - 1) / Math.log1p(-target));
         assertEquals(expected, TargetCrossing.ofClosedForm(siso::stbcOutage, target).getAsDouble(), 1e-8);
