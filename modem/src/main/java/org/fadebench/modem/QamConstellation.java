@@ -196,9 +196,9 @@ public final class QamConstellation {
         for (int n = 0; n < count; n++) {
             int k = symOffset + n;
             double w = gain[k] / n0;
-            l = axisMaxLog(estimates[2 * k], w, llr, l);
+            l = axisLlr(estimates[2 * k], w, false, llr, l);
             if (twoAxes) {
-                l = axisMaxLog(estimates[2 * k + 1], w, llr, l);
+                l = axisLlr(estimates[2 * k + 1], w, false, llr, l);
             }
         }
     }
@@ -216,43 +216,11 @@ public final class QamConstellation {
         for (int n = 0; n < count; n++) {
             int k = symOffset + n;
             double w = gain[k] / n0;
-            l = axisExact(estimates[2 * k], w, llr, l);
+            l = axisLlr(estimates[2 * k], w, true, llr, l);
             if (twoAxes) {
-                l = axisExact(estimates[2 * k + 1], w, llr, l);
+                l = axisLlr(estimates[2 * k + 1], w, true, llr, l);
             }
         }
-    }
-
-    /** The LLRs of one axis by log-sum-exp. */
-    private int axisExact(double y, double weight, double[] llr, int l) {
-        final int m = bitsPerAxis;
-        for (int j = 0; j < m; j++) {
-            int shift = m - 1 - j;
-            double min0 = Double.POSITIVE_INFINITY;
-            double min1 = Double.POSITIVE_INFINITY;
-            for (int i = 0; i < levels; i++) {
-                double d = y - amplitudeOfLevel[i];
-                double d2 = d * d;
-                if (((labelOfLevel[i] >>> shift) & 1) == 0) {
-                    min0 = Math.min(min0, d2);
-                } else {
-                    min1 = Math.min(min1, d2);
-                }
-            }
-            double sum0 = 0;
-            double sum1 = 0;
-            for (int i = 0; i < levels; i++) {
-                double d = y - amplitudeOfLevel[i];
-                double d2 = d * d;
-                if (((labelOfLevel[i] >>> shift) & 1) == 0) {
-                    sum0 += Math.exp(-(d2 - min0) * weight);
-                } else {
-                    sum1 += Math.exp(-(d2 - min1) * weight);
-                }
-            }
-            llr[l++] = (min1 - min0) * weight + Math.log(sum0) - Math.log(sum1);
-        }
-        return l;
     }
 
     /**
@@ -267,7 +235,11 @@ public final class QamConstellation {
         }
     }
 
-    private int axisMaxLog(double y, double weight, double[] llr, int l) {
+    /**
+     * The LLRs of one axis: the max-log term (min1 - min0)·w over the L amplitudes and, when
+     * {@code exact}, the log-sum-exp correction ln Σ_{b=0} e^{-(d²-min0)w} - ln Σ_{b=1} e^{-(d²-min1)w}.
+     */
+    private int axisLlr(double y, double weight, boolean exact, double[] llr, int l) {
         final int m = bitsPerAxis;
         for (int j = 0; j < m; j++) {
             int shift = m - 1 - j;
@@ -284,7 +256,22 @@ public final class QamConstellation {
                     min1 = d2;
                 }
             }
-            llr[l++] = (min1 - min0) * weight;
+            double value = (min1 - min0) * weight;
+            if (exact) {
+                double sum0 = 0;
+                double sum1 = 0;
+                for (int i = 0; i < levels; i++) {
+                    double d = y - amplitudeOfLevel[i];
+                    double d2 = d * d;
+                    if (((labelOfLevel[i] >>> shift) & 1) == 0) {
+                        sum0 += Math.exp(-(d2 - min0) * weight);
+                    } else {
+                        sum1 += Math.exp(-(d2 - min1) * weight);
+                    }
+                }
+                value += Math.log(sum0) - Math.log(sum1);
+            }
+            llr[l++] = value;
         }
         return l;
     }
