@@ -313,7 +313,7 @@ final class RunCommand implements Callable<Integer> {
         }
         String effective = effectiveScenario(scenario);
         return new RunPlan(link, snr.trim(), snrDb, rules, seed, nThreads, confidence, SweepJob.checkOutDir(out),
-                archivePath, resume, quiet, scenario, linkOptions.codeFile, bounds, targetFer, traceOut, traceOutBlocks,
+                archivePath, resume, quiet, scenario, bounds, targetFer, traceOut, traceOutBlocks,
                 effective);
     }
 

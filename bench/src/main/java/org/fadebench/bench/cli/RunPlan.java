@@ -9,21 +9,19 @@ import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.scenario.Scenario;
 import org.fadebench.bench.sweep.StopRules;
 import org.fadebench.coding.stbc.SpaceTimeCodeFile;
-import org.fadebench.coding.stbc.SpaceTimeCodes;
 
 /**
  * A validated {@code run}: everything needed to simulate, report and resume.
  *
  * @param scenario the scenario file it came from, or null
  * @param archive  the archive to write, or null
- * @param codeFile the file the space-time code came from, or null for a catalogue code
  * @param bounds   the outage bounds to compare with, or null when they do not apply to the code
  * @param traceOut where to write the channels of the first point's fading blocks, or null
  * @param scenarioText the run's settings as a scenario file (written beside the results)
  */
 record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rules, long seed, int threads,
                double confidence, Path outDir, Path archive, boolean resume, boolean quiet, Scenario scenario,
-               Path codeFile, BoundSettings bounds, double targetFer, Path traceOut, int traceOutBlocks,
+               BoundSettings bounds, double targetFer, Path traceOut, int traceOutBlocks,
                String scenarioText) {
 
     /** The settings as results.json records them (option names without dashes). */

@@ -95,7 +95,7 @@ final class SweepJob {
         ProgressDisplay progress = ProgressDisplay.startIfTerminal(plan.snrDb(), plan.quiet());
         long start = System.nanoTime();
         // the handler stays installed while the outputs are written: a signal then changes nothing
-        try (SignalStop signals = SignalStop.install(engine::requestStop)) {
+        try (SignalStop ignored = SignalStop.install(engine::requestStop)) {
             SweepOutcome outcome;
             try {
                 outcome = engine.run(plan.snrDb(), resume, listener(table, progress, fingerprint, start));
