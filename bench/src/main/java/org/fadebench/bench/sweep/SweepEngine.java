@@ -126,6 +126,10 @@ public final class SweepEngine {
                 }
                 listener.progress(s.progress());
             }
+        } catch (RuntimeException | Error e) {
+            // the listener failed (e.g. the checkpoint could not be written): stop the workers too
+            s.interrupt();
+            throw e;
         } catch (InterruptedException e) {
             s.interrupt();
             Thread.currentThread().interrupt();
