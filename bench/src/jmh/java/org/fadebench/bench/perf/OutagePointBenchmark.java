@@ -38,7 +38,7 @@ public class OutagePointBenchmark {
     @Setup
     public void setUp() {
         settings = new BoundSettings(4, 4, 1.0, Modulation.QAM16, 8.0, MutualInformation.Kind.CODED_MODULATION,
-                DRAWS, 1L);
+                DRAWS, 1L, null, null);
     }
 
     @Benchmark
