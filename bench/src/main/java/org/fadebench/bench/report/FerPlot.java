@@ -22,6 +22,9 @@ import org.fadebench.bench.analysis.BoundPoint;
 import org.fadebench.bench.analysis.BoundSettings;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
+import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.Crc;
+import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
@@ -260,8 +263,14 @@ public final class FerPlot {
     static String title(LinkSettings link) {
         String antennasAndSignal = String.format(Locale.ROOT, "%d×%d, %s, %s fading", link.transmitAntennas(),
                 link.receiveAntennas(), link.modulation(), capitalised(link.fading().cliName()));
-        return link.code() == SpaceTimeCodes.NONE ? antennasAndSignal + ", no space-time code"
+        String title = link.code() == SpaceTimeCodes.NONE ? antennasAndSignal + ", no space-time code"
                 : capitalised(link.code().name()) + " " + antennasAndSignal;
+        FecScheme fec = link.coding().scheme();
+        if (link.coding().coded()) {
+            title += ", " + (fec.code() == ChannelCode.NONE ? "uncoded" : fec.code().cliName())
+                    + (fec.crc() == Crc.NONE ? "" : " + " + fec.crc().cliName());
+        }
+        return title;
     }
 
     private static String subtitle(BoundSettings s, double confidence) {
