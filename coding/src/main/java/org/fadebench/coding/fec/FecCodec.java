@@ -4,8 +4,13 @@ package org.fadebench.coding.fec;
  * Encodes and decodes frames of a fixed payload size under one {@link FecScheme}: payload → CRC
  * appended → convolutional encoding with zero tail → puncturing → interleaving, and back from LLRs
  * with deinterleaving, depuncturing (zero LLRs), Viterbi decoding and the CRC check. Uncoded
- * schemes decide each bit from the sign of its LLR. Buffers are allocated once; encoding and
- * decoding allocate nothing. Not thread-safe: one instance per thread.
+ * schemes decide each bit from the sign of its LLR.
+ *
+ * <p>Decoding takes frames in batches of up to {@link #lanes()}, which the {@link ViterbiDecoder}
+ * decodes together: {@link #receive} each frame into a lane, {@link #decodeReceived} them, read
+ * each with {@link #decided}. {@link #decode(double[], int, byte[], int)} does all three for one
+ * frame. Buffers are allocated once; encoding and decoding allocate nothing. Not thread-safe: one
+ * instance per thread.
  */
 public final class FecCodec {
 
@@ -13,6 +18,7 @@ public final class FecCodec {
     private final int payloadBits;
     private final int infoBits;
     private final int codedBits;
+    private final int lanes;
     private final BitInterleaver interleaver;
     private final Puncturer puncturer;
     private final ViterbiDecoder decoder;
@@ -21,15 +27,22 @@ public final class FecCodec {
     private final byte[] sent;
     private final double[] received;
     private final double[] motherLlr;
+    /** Uncoded schemes: the hard decisions of each lane. */
+    private final byte[][] hard;
+    private int receivedLanes;
 
-    FecCodec(FecScheme scheme, int payloadBits, BitInterleaver interleaver) {
+    FecCodec(FecScheme scheme, int payloadBits, BitInterleaver interleaver, int lanes) {
         if (payloadBits < 1) {
             throw new IllegalArgumentException("payload of " + payloadBits + " bits; need at least 1");
+        }
+        if (lanes < 1) {
+            throw new IllegalArgumentException(lanes + " lanes; need at least 1");
         }
         this.scheme = scheme;
         this.payloadBits = payloadBits;
         this.infoBits = scheme.infoBits(payloadBits);
         this.codedBits = scheme.codedBits(payloadBits);
+        this.lanes = lanes;
         if (interleaver.length() != codedBits) {
             throw new IllegalArgumentException("interleaver of " + interleaver.length() + " bits does not fit the "
                     + codedBits + " coded bits of " + payloadBits + " payload bits with " + scheme);
@@ -41,14 +54,16 @@ public final class FecCodec {
         if (scheme.code().isCoded()) {
             this.puncturer = scheme.code().puncturer();
             ConvolutionalCode code = puncturer.code();
-            this.decoder = new ViterbiDecoder(code, infoBits);
+            this.decoder = new ViterbiDecoder(code, infoBits, lanes);
             this.mother = new byte[code.codedBits(infoBits)];
             this.motherLlr = new double[mother.length];
+            this.hard = null;
         } else {
             this.puncturer = null;
             this.decoder = null;
             this.mother = null;
             this.motherLlr = null;
+            this.hard = new byte[lanes][infoBits];
         }
     }
 
@@ -66,6 +81,11 @@ public final class FecCodec {
         return codedBits;
     }
 
+    /** The most frames one {@link #decodeReceived} takes. */
+    public int lanes() {
+        return lanes;
+    }
+
     /** Encodes {@link #payloadBits()} bits from {@code payload[off ..]} into {@link #codedBits()} at {@code coded[codedOff ..]}. */
     public void encode(byte[] payload, int off, byte[] coded, int codedOff) {
         System.arraycopy(payload, off, info, 0, payloadBits);
@@ -80,22 +100,65 @@ public final class FecCodec {
     }
 
     /**
-     * Decodes {@link #codedBits()} LLRs from {@code llr[off ..]} (L = ln P(0)/P(1)), writing the
-     * decided payload to {@code payload[outOff ..]}.
+     * Takes one frame's {@link #codedBits()} LLRs from {@code llr[off ..]} (L = ln P(0)/P(1),
+     * finite) into a lane of the next {@link #decodeReceived}: deinterleaved, depunctured.
+     */
+    public void receive(int lane, double[] llr, int off) {
+        if (lane < 0 || lane >= lanes) {
+            throw new IllegalArgumentException("lane " + lane + "; valid lanes are 0 to " + (lanes - 1));
+        }
+        interleaver.deinterleave(llr, off, received, 0);
+        if (puncturer == null) {
+            byte[] bits = hard[lane];
+            for (int i = 0; i < infoBits; i++) {
+                bits[i] = (byte) (received[i] < 0 ? 1 : 0);
+            }
+        } else {
+            puncturer.depuncture(received, 0, infoBits, motherLlr, 0);
+            decoder.load(lane, motherLlr, 0);
+        }
+    }
+
+    /** Decodes the frames received into lanes 0 .. {@code frames} − 1. */
+    public void decodeReceived(int frames) {
+        if (frames < 1 || frames > lanes) {
+            throw new IllegalArgumentException("batch of " + frames + " frames; this codec takes 1 to " + lanes);
+        }
+        if (decoder != null) {
+            decoder.decode(frames);
+        }
+        receivedLanes = frames;
+    }
+
+    /**
+     * Writes the decided payload of a lane of the last {@link #decodeReceived} to
+     * {@code payload[outOff ..]}.
+     *
+     * @return whether the CRC of the decided bits checks (always true without a CRC)
+     */
+    public boolean decided(int lane, byte[] payload, int outOff) {
+        if (lane < 0 || lane >= receivedLanes) {
+            throw new IllegalArgumentException("lane " + lane + "; valid lanes are 0 to " + (receivedLanes - 1));
+        }
+        if (decoder != null) {
+            decoder.decided(lane, info, 0);
+        } else {
+            System.arraycopy(hard[lane], 0, info, 0, infoBits);
+        }
+        System.arraycopy(info, 0, payload, outOff, payloadBits);
+        return scheme.crc().check(info, 0, infoBits);
+    }
+
+    /**
+     * Decodes one frame's {@link #codedBits()} LLRs from {@code llr[off ..]}, writing the decided
+     * payload to {@code payload[outOff ..]}: {@link #receive} into lane 0, {@link #decodeReceived},
+     * {@link #decided}.
      *
      * @return whether the CRC of the decided bits checks (always true without a CRC)
      */
     public boolean decode(double[] llr, int off, byte[] payload, int outOff) {
-        interleaver.deinterleave(llr, off, received, 0);
-        if (puncturer == null) {
-            for (int i = 0; i < infoBits; i++) {
-                info[i] = (byte) (received[i] < 0 ? 1 : 0);
-            }
-        } else {
-            puncturer.depuncture(received, 0, infoBits, motherLlr, 0);
-            decoder.decode(motherLlr, 0, infoBits, info, 0);
-        }
-        System.arraycopy(info, 0, payload, outOff, payloadBits);
-        return scheme.crc().check(info, 0, infoBits);
+        receive(0, llr, off);
+        decodeReceived(1);
+        return decided(0, payload, outOff);
     }
 }

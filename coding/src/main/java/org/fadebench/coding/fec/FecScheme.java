@@ -36,13 +36,25 @@ public record FecScheme(Crc crc, ChannelCode code) {
     }
 
     /**
-     * A worker for frames of {@code payloadBits}, owning its buffers (one per thread).
+     * A worker for frames of {@code payloadBits}, decoding one frame at a time, owning its buffers
+     * (one per thread).
      *
      * @param interleaver a permutation of {@link #codedBits(int) codedBits(payloadBits)} bits
      * @throws IllegalArgumentException if the payload is empty or the interleaver has another length
      */
     public FecCodec newCodec(int payloadBits, BitInterleaver interleaver) {
-        return new FecCodec(this, payloadBits, interleaver);
+        return newCodec(payloadBits, interleaver, 1);
+    }
+
+    /**
+     * A worker for frames of {@code payloadBits} that decodes up to {@code lanes} frames at once
+     * (see {@link FecCodec}), owning its buffers (one per thread).
+     *
+     * @throws IllegalArgumentException if the payload is empty, the interleaver has another length
+     *                                  or {@code lanes} is below 1
+     */
+    public FecCodec newCodec(int payloadBits, BitInterleaver interleaver, int lanes) {
+        return new FecCodec(this, payloadBits, interleaver, lanes);
     }
 
     @Override

@@ -80,7 +80,7 @@ class UnionBoundTest {
         byte[] coded = new byte[CODE.codedBits(INFO_BITS)];
         double[] llr = new double[coded.length];
         byte[] decided = new byte[INFO_BITS];
-        ViterbiDecoder decoder = new ViterbiDecoder(CODE, INFO_BITS);
+        ViterbiDecoder decoder = new ViterbiDecoder(CODE, INFO_BITS, 1);
         double sum = 0;
         double sumSquares = 0;
         int framesInError = 0;
@@ -92,7 +92,7 @@ class UnionBoundTest {
             for (int i = 0; i < coded.length; i++) {
                 llr[i] = llrScale * (1 - 2 * coded[i] + sigma * gaussian.sample());
             }
-            decoder.decode(llr, 0, INFO_BITS, decided, 0);
+            decoder.decode(llr, 0, decided, 0);
             int errors = 0;
             for (int i = 0; i < INFO_BITS; i++) {
                 errors += decided[i] ^ info[i];

@@ -3,6 +3,7 @@ package org.fadebench.coding.fec;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Arrays;
 import java.util.Random;
@@ -15,7 +16,8 @@ class ViterbiDecoderTest {
      * 2^k information words for the word whose terminated codeword c maximises Σ L·(1−2c) (the
      * log-likelihood up to a constant for independent bits with LLRs L; Viterbi 1967, see
      * {@link ViterbiDecoder}). Random Gaussian LLRs make ties impossible in practice. The (5, 7) code
-     * for k = 1..10, and the punctured 64-state codes (zero LLRs where bits were removed) for k ≤ 8.
+     * for k = 1..10, and the punctured 64-state codes (zero LLRs where bits were removed) for k = 1,
+     * 8 and 12.
      */
     @Test
     void decisionsEqualExhaustiveMaximumLikelihood() {
@@ -26,7 +28,7 @@ class ViterbiDecoderTest {
             }
         }
         for (ChannelCode code : new ChannelCode[] {ChannelCode.CONV_R12, ChannelCode.CONV_R23, ChannelCode.CONV_R34}) {
-            for (int k = 1; k <= 8; k += 7) {
+            for (int k : new int[] {1, 8, 12}) {
                 for (int trial = 0; trial < 10; trial++) {
                     checkAgainstExhaustiveSearch(code.puncturer(), k, random);
                 }
@@ -59,7 +61,7 @@ class ViterbiDecoderTest {
             }
         }
         byte[] decided = new byte[k];
-        new ViterbiDecoder(code, k).decode(llr, 0, k, decided, 0);
+        new ViterbiDecoder(code, k, 1).decode(llr, 0, decided, 0);
         assertArrayEquals(best, decided, code + " " + punctured + " k=" + k);
     }
 
@@ -81,8 +83,8 @@ class ViterbiDecoderTest {
             }
             Puncturer punctured = channelCode.puncturer();
             ConvolutionalCode code = punctured.code();
-            ViterbiDecoder decoder = new ViterbiDecoder(code, 600);
             for (int k : new int[] {1, 2, 3, 50, 517, 600}) {
+                ViterbiDecoder decoder = new ViterbiDecoder(code, k, 1);
                 byte[] info = CrcTest.randomBits(random, k);
                 byte[] mother = new byte[code.codedBits(k)];
                 code.encode(info, 0, k, mother, 0);
@@ -95,38 +97,97 @@ class ViterbiDecoderTest {
                 double[] llr = new double[mother.length + 2];
                 punctured.depuncture(received, 1, k, llr, 2);
                 byte[] decided = new byte[k + 3];
-                decoder.decode(llr, 2, k, decided, 3);
+                decoder.decode(llr, 2, decided, 3);
                 assertArrayEquals(info, Arrays.copyOfRange(decided, 3, k + 3), channelCode + " k=" + k);
             }
         }
     }
 
-    /** A decoder is reused frame after frame: short and long frames in turn decode independently. */
+    /**
+     * Frames decoded together in lanes are decoded independently: each lane's bits equal those of
+     * the same frame decoded alone, for full and partial batches, and a decoder is reused batch
+     * after batch. Noisy LLRs (BPSK at 1 dB, rate 1/2) so that the frames carry errors to agree on.
+     */
     @Test
-    void decoderIsReusable() {
+    void lanesDecodeIndependently() {
         ConvolutionalCode code = ConvolutionalCode.K7_133_171;
-        ViterbiDecoder decoder = new ViterbiDecoder(code, 300);
+        int k = 300;
+        int lanes = 37;
+        ViterbiDecoder batch = new ViterbiDecoder(code, k, lanes);
+        ViterbiDecoder alone = new ViterbiDecoder(code, k, 1);
         Random random = new Random(9);
-        for (int k : new int[] {300, 7, 300, 1, 64}) {
-            byte[] info = CrcTest.randomBits(random, k);
-            byte[] coded = new byte[code.codedBits(k)];
-            code.encode(info, 0, k, coded, 0);
-            double[] llr = new double[coded.length];
-            for (int i = 0; i < llr.length; i++) {
-                llr[i] = 1 - 2 * coded[i];
+        double sigma = Math.sqrt(1 / Math.pow(10, 0.1));
+        int differing = 0;
+        for (int frames : new int[] {lanes, 1, 20, lanes}) {
+            byte[][] info = new byte[frames][];
+            double[][] llr = new double[frames][code.codedBits(k)];
+            for (int l = 0; l < frames; l++) {
+                info[l] = CrcTest.randomBits(random, k);
+                byte[] coded = new byte[code.codedBits(k)];
+                code.encode(info[l], 0, k, coded, 0);
+                for (int i = 0; i < coded.length; i++) {
+                    llr[l][i] = 2 * (1 - 2 * coded[i] + sigma * random.nextGaussian()) / (sigma * sigma);
+                }
+                batch.load(l, llr[l], 0);
+            }
+            batch.decode(frames);
+            for (int l = 0; l < frames; l++) {
+                byte[] together = new byte[k];
+                batch.decided(l, together, 0);
+                byte[] single = new byte[k];
+                alone.decode(llr[l], 0, single, 0);
+                assertArrayEquals(single, together, "lane " + l + " of " + frames);
+                differing += Arrays.equals(single, info[l]) ? 0 : 1;
+            }
+        }
+        assertTrue(differing > 0, "some frames should be decoded wrongly at 1 dB");
+    }
+
+    /**
+     * Only the ratios of LLRs matter: a frame scaled by 1e-200 or 1e200 decodes as the original
+     * (each frame is scaled to its largest LLR before rounding).
+     */
+    @Test
+    void decisionsDoNotDependOnTheLlrScale() {
+        ConvolutionalCode code = ConvolutionalCode.K7_133_171;
+        int k = 200;
+        ViterbiDecoder decoder = new ViterbiDecoder(code, k, 1);
+        Random random = new Random(5);
+        double[] llr = new double[code.codedBits(k)];
+        for (int i = 0; i < llr.length; i++) {
+            llr[i] = 1 + 1.5 * random.nextGaussian();
+        }
+        byte[] reference = new byte[k];
+        decoder.decode(llr, 0, reference, 0);
+        for (double factor : new double[] {1e-200, 1e200}) {
+            double[] scaled = llr.clone();
+            for (int i = 0; i < scaled.length; i++) {
+                scaled[i] *= factor;
             }
             byte[] decided = new byte[k];
-            decoder.decode(llr, 0, k, decided, 0);
-            assertArrayEquals(info, decided);
+            decoder.decode(scaled, 0, decided, 0);
+            assertArrayEquals(reference, decided, "scale " + factor);
         }
     }
 
     @Test
-    void frameLengthIsChecked() {
-        ViterbiDecoder decoder = new ViterbiDecoder(ConvolutionalCode.K3_5_7, 10);
-        assertEquals("frame of 11 information bits; this decoder takes 1 to 10",
-                assertThrows(IllegalArgumentException.class,
-                        () -> decoder.decode(new double[40], 0, 11, new byte[11], 0)).getMessage());
-        assertThrows(IllegalArgumentException.class, () -> new ViterbiDecoder(ConvolutionalCode.K3_5_7, 0));
+    void argumentsAreChecked() {
+        ViterbiDecoder decoder = new ViterbiDecoder(ConvolutionalCode.K3_5_7, 10, 4);
+        assertEquals("batch of 5 frames; this decoder takes 1 to 4",
+                assertThrows(IllegalArgumentException.class, () -> decoder.decode(5)).getMessage());
+        assertEquals("lane 4; valid lanes are 0 to 3",
+                assertThrows(IllegalArgumentException.class, () -> decoder.load(4, new double[24], 0)).getMessage());
+        double[] bad = new double[24];
+        bad[3] = Double.NaN;
+        assertEquals("LLRs of lane 1 are not all finite",
+                assertThrows(IllegalArgumentException.class, () -> decoder.load(1, bad, 0)).getMessage());
+        bad[3] = Double.NEGATIVE_INFINITY;
+        assertThrows(IllegalArgumentException.class, () -> decoder.load(1, bad, 0));
+        decoder.load(0, new double[24], 0);
+        decoder.decode(1);
+        assertEquals("lane 1; valid lanes are 0 to 0",
+                assertThrows(IllegalArgumentException.class, () -> decoder.decided(1, new byte[10], 0)).getMessage());
+        assertThrows(IllegalArgumentException.class, () -> new ViterbiDecoder(ConvolutionalCode.K3_5_7, 0, 1));
+        assertThrows(IllegalArgumentException.class, () -> new ViterbiDecoder(ConvolutionalCode.K3_5_7, 10, 0));
     }
 }
