@@ -52,7 +52,7 @@ public class FullFrameBenchmark {
         }
 
         long run() {
-            chain.runFrame(draws, n0, frame++, counters);
+            chain.runFrames(draws, n0, frame++, 1, counters);
             return counters.bitErrors();
         }
     }

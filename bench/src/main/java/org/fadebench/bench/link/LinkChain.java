@@ -2,6 +2,7 @@ package org.fadebench.bench.link;
 
 import org.fadebench.channel.Draws;
 import org.fadebench.channel.LinkChannel;
+import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecCodec;
 import org.fadebench.coding.stbc.Combiner;
 import org.fadebench.coding.stbc.Decoder;
@@ -10,7 +11,7 @@ import org.fadebench.coding.stbc.StbcEncoder;
 import org.fadebench.modem.QamConstellation;
 
 /**
- * One link, end to end, for one frame at a time:
+ * One link, end to end:
  * <pre>
  * info bits → (CRC, convolutional code, puncturing, interleaver) → QAM map → space-time encode
  *   → per fading block: its channel (model, Doppler or trace), Y = X Hᵀ + N, the receiver's
@@ -19,7 +20,9 @@ import org.fadebench.modem.QamConstellation;
  *   → count bit, symbol and frame errors
  * </pre>
  * An uncoded frame carries its bits as symbol labels (the bits of a symbol as one integer), which
- * is the same data and lets errors be counted per symbol. A chain owns all its buffers and
+ * is the same data and lets errors be counted per symbol. Coded frames are sent one by one and
+ * decoded in groups of {@link LinkSettings#framesDecodedTogether()}, which the Viterbi decoder
+ * takes at once; each frame's outcome is the same as if it were decoded alone. A chain owns all its buffers and
  * allocates nothing per frame; each worker thread has its own. Random draws are taken in a fixed
  * order (bits, padding, then per fading block H and noise), so a frame depends only on the stream
  * it is given.
@@ -57,7 +60,11 @@ public final class LinkChain {
 
     // coded frames: bits, LLRs and the codec
     private final FecCodec codec;
-    private final byte[] payload;
+    private final int lanes;
+    /** Row l: the payload sent in lane l of the group being decoded. */
+    private final byte[][] payload;
+    /** Per lane: raw symbol errors (hard decisions on the coded bits' LLRs). */
+    private final int[] rawSymbolErrors;
     private final byte[] payloadOut;
     private final byte[] codedBits;
     private final double[] llr;
@@ -91,9 +98,11 @@ public final class LinkChain {
         this.received = new double[2 * fadeSlots * nr];
         FrameCoding coding = settings.coding();
         if (coding.coded()) {
-            this.codec = coding.scheme().newCodec(frameBits, coding.interleaver(frameBits));
+            this.lanes = settings.framesDecodedTogether();
+            this.codec = coding.scheme().newCodec(frameBits, coding.interleaver(frameBits), lanes);
             this.codedLength = codec.codedBits();
-            this.payload = new byte[frameBits];
+            this.payload = new byte[lanes][frameBits];
+            this.rawSymbolErrors = new int[lanes];
             this.payloadOut = new byte[frameBits];
             this.codedBits = new byte[symbols * bitsPerSymbol];
             this.llr = new double[symbols * bitsPerSymbol];
@@ -101,8 +110,10 @@ public final class LinkChain {
             this.decided = null;
         } else {
             this.codec = null;
+            this.lanes = 1;
             this.codedLength = 0;
             this.payload = null;
+            this.rawSymbolErrors = null;
             this.payloadOut = null;
             this.codedBits = null;
             this.llr = null;
@@ -124,15 +135,26 @@ public final class LinkChain {
     }
 
     /**
-     * Simulates frame number {@code frame} of an SNR point (it numbers the fading blocks, which
-     * select a recorded trace's matrices) at noise level {@code n0} (SNR = 1/n0) and adds it to
-     * {@code counters}.
+     * Simulates frames {@code first .. first+count-1} of an SNR point (the frame number numbers the
+     * fading blocks, which select a recorded trace's matrices) at noise level {@code n0} (SNR =
+     * 1/n0), drawing from {@code draws} frame after frame, and adds them to {@code counters}.
      */
-    public void runFrame(Draws draws, double n0, long frame, FrameCounters counters) {
+    public void runFrames(Draws draws, double n0, long first, int count, FrameCounters counters) {
         if (codec == null) {
-            runUncoded(draws, n0, frame, counters);
-        } else {
-            runCoded(draws, n0, frame, counters);
+            for (int f = 0; f < count; f++) {
+                runUncoded(draws, n0, first + f, counters);
+            }
+            return;
+        }
+        for (int done = 0; done < count; done += lanes) {
+            int group = Math.min(lanes, count - done);
+            for (int lane = 0; lane < group; lane++) {
+                sendCoded(draws, n0, first + done + lane, lane);
+            }
+            codec.decodeReceived(group);
+            for (int lane = 0; lane < group; lane++) {
+                countCoded(lane, counters);
+            }
         }
     }
 
@@ -151,19 +173,17 @@ public final class LinkChain {
         counters.addFrame(frameBits, bitErrors, symbols, symbolErrors);
     }
 
-    private void runCoded(Draws draws, double n0, long frame, FrameCounters counters) {
-        draws.fillBits(payload, 0, frameBits);
-        codec.encode(payload, 0, codedBits, 0);
+    /** One coded frame up to its LLRs, which go into a lane of the codec; counts raw symbol errors. */
+    private void sendCoded(Draws draws, double n0, long frame, int lane) {
+        byte[] bits = payload[lane];
+        draws.fillBits(bits, 0, frameBits);
+        codec.encode(bits, 0, codedBits, 0);
         // padding up to whole code blocks: random bits, sent and ignored
         draws.fillBits(codedBits, codedLength, codedBits.length - codedLength);
         constellation.map(codedBits, 0, txSymbols, 0, symbols);
         transmit(draws, n0, frame);
         constellation.demap(settings.coding().llr(), estimates, gain, 0, n0, llr, 0, symbols);
-        boolean crcOk = codec.decode(llr, 0, payloadOut, 0);
-        int bitErrors = 0;
-        for (int i = 0; i < frameBits; i++) {
-            bitErrors += payload[i] ^ payloadOut[i];
-        }
+        codec.receive(lane, llr, 0);
         // raw symbol errors: the sign of each coded bit's LLR against the bit sent
         int symbolErrors = 0;
         for (int s = 0, b = 0; s < symbols; s++) {
@@ -173,8 +193,19 @@ public final class LinkChain {
             }
             symbolErrors += wrong;
         }
-        boolean withCrc = settings.coding().scheme().crc() != org.fadebench.coding.fec.Crc.NONE;
-        counters.addFrame(frameBits, bitErrors, symbols, symbolErrors, withCrc && !crcOk,
+        rawSymbolErrors[lane] = symbolErrors;
+    }
+
+    /** Compares a decoded lane with its payload and adds the frame to the counters. */
+    private void countCoded(int lane, FrameCounters counters) {
+        boolean crcOk = codec.decided(lane, payloadOut, 0);
+        byte[] bits = payload[lane];
+        int bitErrors = 0;
+        for (int i = 0; i < frameBits; i++) {
+            bitErrors += bits[i] ^ payloadOut[i];
+        }
+        boolean withCrc = settings.coding().scheme().crc() != Crc.NONE;
+        counters.addFrame(frameBits, bitErrors, symbols, rawSymbolErrors[lane], withCrc && !crcOk,
                 withCrc && crcOk && bitErrors > 0);
     }
 

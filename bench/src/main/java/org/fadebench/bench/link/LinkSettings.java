@@ -118,6 +118,11 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
         return symbolsPerFrame() / code.symbolsPerBlock();
     }
 
+    /** How many frames the receiver decodes together (see {@link FrameCoding#framesDecodedTogether}). */
+    public int framesDecodedTogether() {
+        return coding.framesDecodedTogether(frameBits);
+    }
+
     /** Channel uses (slots) per frame. */
     public int slotsPerFrame() {
         return blocksPerFrame() * code.slotsPerBlock();

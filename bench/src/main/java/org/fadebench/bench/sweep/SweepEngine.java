@@ -64,7 +64,17 @@ public final class SweepEngine {
         this.seed = seed;
         this.threads = threads;
         this.confidence = confidence;
-        this.batchFrames = Math.max(1, BATCH_SYMBOLS / link.symbolsPerFrame());
+        this.batchFrames = batchFrames(link);
+    }
+
+    /**
+     * About {@link #BATCH_SYMBOLS} symbols of whole frames, rounded up to a whole number of the
+     * groups the receiver decodes together, so that no group is cut short.
+     */
+    static int batchFrames(LinkSettings link) {
+        int frames = Math.max(1, BATCH_SYMBOLS / link.symbolsPerFrame());
+        int group = link.framesDecodedTogether();
+        return (frames + group - 1) / group * group;
     }
 
     /** Frames per batch (depends only on the link). */
@@ -156,9 +166,7 @@ public final class SweepEngine {
             FrameCounters c = new FrameCounters();
             chain.recordChannels(t.point == 0 ? mine : null);
             long first = t.batch * batchFrames;
-            for (int f = 0; f < t.frames; f++) {
-                chain.runFrame(draws, t.n0, first + f, c);
-            }
+            chain.runFrames(draws, t.n0, first, t.frames, c);
             s.complete(t, c);
         }
     }

@@ -4,10 +4,17 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.channel.Fading;
+import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.Crc;
+import org.fadebench.coding.fec.FecScheme;
+import org.fadebench.coding.fec.Interleaving;
+import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
+import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
 import org.junit.jupiter.api.Test;
 
@@ -37,6 +44,31 @@ class SweepEngineTest {
                 assertEquals(a.symbolErrors(), b.symbolErrors());
             }
         }
+    }
+
+    /**
+     * A coded link's batches are whole groups of the frames its decoder takes together (1024-bit
+     * frames: 1030 QPSK symbols, 31 frames of symbols per batch, rounded up to 128), and its results
+     * too do not depend on the number of threads.
+     */
+    @Test
+    void codedBatchesAreWholeDecodeGroups() {
+        LinkSettings coded = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, Fading.RAYLEIGH, 1024, 0,
+                Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+                        LlrMethod.MAXLOG));
+        assertEquals(128, coded.framesDecodedTogether());
+        assertEquals(128, SweepEngine.batchFrames(coded));
+        assertEquals(SweepEngine.BATCH_SYMBOLS / LINK.symbolsPerFrame(), SweepEngine.batchFrames(LINK));
+        StopRules rules = new StopRules(20, 100_000);
+        FrameCounters one = new SweepEngine(coded, rules, 5, 1, 0.95).run(new double[] {6}, p -> { }).results().get(0)
+                .counts();
+        FrameCounters two = new SweepEngine(coded, rules, 5, 2, 0.95).run(new double[] {6}, p -> { }).results().get(0)
+                .counts();
+        assertTrue(one.frameErrors() >= 20);
+        assertEquals(one.frames(), two.frames());
+        assertEquals(one.frameErrors(), two.frameErrors());
+        assertEquals(one.bitErrors(), two.bitErrors());
+        assertEquals(one.symbolErrors(), two.symbolErrors());
     }
 
     @Test

@@ -35,6 +35,28 @@ public record FecScheme(Crc crc, ChannelCode code) {
         return (double) payloadBits / codedBits(payloadBits);
     }
 
+    /** The most frames a codec decodes together: a multiple of 16 lanes, which vectorises well. */
+    public static final int MAX_LANES = 128;
+
+    /** Bytes of decoder rows (soft inputs and decisions) allowed per codec when choosing lanes. */
+    static final long LANE_BUDGET_BYTES = 8L << 20;
+
+    /**
+     * How many frames of {@code payloadBits} a link's codec should decode together: {@link #MAX_LANES},
+     * fewer for long frames so that the decoder's rows stay within {@value #LANE_BUDGET_BYTES}
+     * bytes (a multiple of 16 where possible), 1 for schemes without a convolutional code.
+     */
+    public int decodeLanes(int payloadBits) {
+        if (!code.isCoded()) {
+            return 1;
+        }
+        ConvolutionalCode mother = code.puncturer().code();
+        long bytesPerLane = 4L * mother.steps(infoBits(payloadBits))
+                * (mother.outputs() + (mother.states() + 31) / 32);
+        long lanes = Math.min(MAX_LANES, Math.max(1, LANE_BUDGET_BYTES / bytesPerLane));
+        return (int) (lanes >= 16 ? lanes / 16 * 16 : lanes);
+    }
+
     /**
      * A worker for frames of {@code payloadBits}, decoding one frame at a time, owning its buffers
      * (one per thread).

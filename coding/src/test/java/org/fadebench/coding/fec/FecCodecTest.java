@@ -82,6 +82,62 @@ class FecCodecTest {
     }
 
     /** Sizes the link needs: CRC-24 on 100 bits, rate 3/4 with 6 tail bits: 130 steps = 43 periods + 1 step. */
+    /**
+     * Frames received into lanes and decoded together come out as each would alone, payload and CRC
+     * verdict, for coded and uncoded schemes and for full and partial batches (noisy LLRs, so that
+     * some frames break).
+     */
+    @Test
+    void batchesDecodeLikeSingleFrames() {
+        Random random = new Random(31);
+        int payloadBits = 200;
+        for (ChannelCode code : new ChannelCode[] {ChannelCode.CONV_R23, ChannelCode.NONE}) {
+            FecScheme scheme = new FecScheme(Crc.CRC16, code);
+            int n = scheme.codedBits(payloadBits);
+            BitInterleaver interleaver = BitInterleaver.random(n, 7);
+            FecCodec batch = scheme.newCodec(payloadBits, interleaver, 16);
+            FecCodec single = scheme.newCodec(payloadBits, interleaver);
+            assertEquals(16, batch.lanes());
+            int broken = 0;
+            for (int frames : new int[] {16, 5}) {
+                double[][] llr = new double[frames][n];
+                for (int lane = 0; lane < frames; lane++) {
+                    byte[] coded = new byte[n];
+                    batch.encode(CrcTest.randomBits(random, payloadBits), 0, coded, 0);
+                    for (int i = 0; i < n; i++) {
+                        llr[lane][i] = 2 * (1 - 2 * coded[i]) + 2.2 * random.nextGaussian();
+                    }
+                    batch.receive(lane, llr[lane], 0);
+                }
+                batch.decodeReceived(frames);
+                for (int lane = 0; lane < frames; lane++) {
+                    byte[] together = new byte[payloadBits];
+                    byte[] alone = new byte[payloadBits];
+                    boolean crcTogether = batch.decided(lane, together, 0);
+                    assertEquals(single.decode(llr[lane], 0, alone, 0), crcTogether, scheme + " lane " + lane);
+                    assertArrayEquals(alone, together, scheme + " lane " + lane);
+                    broken += crcTogether ? 0 : 1;
+                }
+            }
+            assertTrue(broken > 0, scheme + ": some frames should fail their CRC in this noise");
+        }
+    }
+
+    /**
+     * Lanes per codec: 128 for frames of a few thousand bits, fewer for long frames so that the
+     * decoder's rows (4 bytes per LLR and per 32 states, per step and lane) stay within 8 MiB, and
+     * 1 without a convolutional code.
+     */
+    @Test
+    void lanesShrinkForLongFrames() {
+        assertEquals(FecScheme.MAX_LANES, new FecScheme(Crc.CRC24, ChannelCode.CONV_R12).decodeLanes(1024));
+        // 100 000 + 24 + 6 steps of 16 bytes: 1.6 MB per lane, so 5 lanes in 8 MiB
+        assertEquals(5, new FecScheme(Crc.CRC24, ChannelCode.CONV_R12).decodeLanes(100_000));
+        // 30 000 + 6 steps of 16 bytes: 17 lanes fit, rounded down to 16
+        assertEquals(16, new FecScheme(Crc.NONE, ChannelCode.CONV_R34).decodeLanes(30_000));
+        assertEquals(1, new FecScheme(Crc.CRC32, ChannelCode.NONE).decodeLanes(1024));
+    }
+
     @Test
     void sizes() {
         FecScheme scheme = new FecScheme(Crc.CRC24, ChannelCode.CONV_R34);
