@@ -22,8 +22,8 @@ import org.fadebench.modem.QamConstellation;
  * An uncoded frame carries its bits as symbol labels (the bits of a symbol as one integer), which
  * is the same data and lets errors be counted per symbol. Coded frames are sent one by one and
  * decoded in groups of {@link LinkSettings#framesDecodedTogether()}, which the Viterbi decoder
- * takes at once; each frame's outcome is the same as if it were decoded alone. A chain owns all its buffers and
- * allocates nothing per frame; each worker thread has its own. Random draws are taken in a fixed
+ * takes at once; each frame's outcome is the same as if it were decoded alone. A chain owns all
+ * its buffers and allocates nothing per frame; each worker thread has its own. Random draws are taken in a fixed
  * order (bits, padding, then per fading block H and noise), so a frame depends only on the stream
  * it is given.
  */
