@@ -62,6 +62,21 @@ public final class Draws {
     }
 
     /**
+     * The planar form of {@link #fillGaussian(double[], int, int, double)}: the same draws in the
+     * same order, for an interleaved array of rows of {@code planes.length} values stored as one
+     * plane per column. Row i, column j lands in {@code planes[j][i]}; rows {@code from ..
+     * from+rows)} are filled, the columns of a row one after the other.
+     */
+    public void fillGaussian(double[][] planes, int from, int rows, double sigma) {
+        final NormalizedGaussianSampler g = gaussian;
+        for (int i = from, end = from + rows; i < end; i++) {
+            for (double[] plane : planes) {
+                plane[i] = sigma * g.sample();
+            }
+        }
+    }
+
+    /**
      * Fills {@code labels[off .. off+n)} with independent uniform labels of {@code bits} bits each
      * (1 to 16), i.e. the bits of n symbols; 64-bit draws are used up {@code 64 / bits} labels at a
      * time.
@@ -77,6 +92,29 @@ public final class Draws {
             for (int j = 0; j < take; j++) {
                 labels[i++] = (int) (r & mask);
                 r >>>= bits;
+            }
+        }
+    }
+
+    /**
+     * The planar form of {@link #fillLabels(int[], int, int, int)}: the same labels for the
+     * sequence of {@code rows·planes.length} labels read as rows of {@code planes.length}, label j
+     * of row i landing in {@code planes[j][i]}, rows {@code from .. from+rows)}.
+     */
+    public void fillLabels(int[][] planes, int from, int rows, int bits) {
+        final int perDraw = 64 / bits;
+        final long mask = (1L << bits) - 1;
+        int left = 0;
+        long r = 0;
+        for (int i = from, end = from + rows; i < end; i++) {
+            for (int[] plane : planes) {
+                if (left == 0) {
+                    r = uniform.nextLong();
+                    left = perDraw;
+                }
+                plane[i] = (int) (r & mask);
+                r >>>= bits;
+                left--;
             }
         }
     }

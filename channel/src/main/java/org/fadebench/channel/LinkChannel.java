@@ -73,6 +73,20 @@ public final class LinkChannel {
         }
     }
 
+    /**
+     * {@link #transmit} on planar arrays, for two transmit antennas and a channel that does not
+     * vary within the block: the block's slots, as rows of T slots from row {@code from} of the
+     * planes {@code x} (4·T planes), into the same rows of {@code y}, with the same draws and results
+     * (see {@link MimoChannel#applyTwoTransmittersPlanar}).
+     */
+    public void transmit(double[][] x, int from, double n0, Draws draws, double[][] y) {
+        int slotsPerRow = x.length / 4;
+        if (doppler != null || mt != 2 || slots % slotsPerRow != 0) {
+            throw new IllegalStateException("planar transmit needs two transmit antennas, block fading and whole rows");
+        }
+        MimoChannel.applyTwoTransmittersPlanar(h, nr, x, from, slots / slotsPerRow, n0, draws, y);
+    }
+
     /** Writes the receiver's estimate Ĥ (Nr x Mt) of the block's channel into {@code hHat}. */
     public void estimate(double n0, Draws draws, double[] hHat) {
         csi.estimate(h, n0, draws, hHat);

@@ -43,6 +43,49 @@ public final class MimoChannel {
         }
     }
 
+    /**
+     * {@link #apply} for two transmit antennas on planar arrays: the same noise draws and the same
+     * arithmetic per element, with the grid and the received signal split into planes of real and
+     * imaginary parts so that each product is a unit-stride loop over rows.
+     *
+     * <p>A row is a run of T slots (a code block): with x of 4·T planes and y of 2·T·Nr planes,
+     * plane {@code 2·(τ·Mt + t)} of x holds the real parts of slot τ, antenna t of every row and
+     * plane {@code 2·(τ·Mt + t) + 1} the imaginary parts (Mt = 2); y likewise with Nr antennas. That
+     * is the interleaved grid read as an array of rows of T·Mt entries, one plane per value of a row,
+     * so slot {@code i·T + τ} of the interleaved grid is element {@code i} of the planes of τ. Rows
+     * {@code from .. from+rows)} are passed through {@code h} (Nr x 2, interleaved).
+     */
+    public static void applyTwoTransmittersPlanar(double[] h, int nr, double[][] x, int from, int rows,
+                                                  double n0, Draws draws, double[][] y) {
+        int slots = x.length / 4;
+        if (x.length != 4 * slots || y.length != 2 * slots * nr) {
+            throw new IllegalArgumentException("planes: x needs 4·T, y 2·T·Nr, got " + x.length + " and " + y.length);
+        }
+        draws.fillGaussian(y, from, rows, Math.sqrt(0.5 * n0));
+        int end = from + rows;
+        for (int tau = 0; tau < slots; tau++) {
+            double[] x1r = x[4 * tau];
+            double[] x1i = x[4 * tau + 1];
+            double[] x2r = x[4 * tau + 2];
+            double[] x2i = x[4 * tau + 3];
+            for (int r = 0; r < nr; r++) {
+                double h1r = h[4 * r];
+                double h1i = h[4 * r + 1];
+                double h2r = h[4 * r + 2];
+                double h2i = h[4 * r + 3];
+                // the expressions of addTwoTransmitters, one loop per part (short loops vectorise)
+                double[] yr = y[2 * (tau * nr + r)];
+                for (int i = from; i < end; i++) {
+                    yr[i] = Math.fma(h1r, x1r[i], Math.fma(-h1i, x1i[i], Math.fma(h2r, x2r[i], Math.fma(-h2i, x2i[i], yr[i]))));
+                }
+                double[] yi = y[2 * (tau * nr + r) + 1];
+                for (int i = from; i < end; i++) {
+                    yi[i] = Math.fma(h1r, x1i[i], Math.fma(h1i, x1r[i], Math.fma(h2r, x2i[i], Math.fma(h2i, x2r[i], yi[i]))));
+                }
+            }
+        }
+    }
+
     /** y += x Hᵀ over {@code slots} slots, with H starting at {@code h[ho]}. */
     private static void addSignal(double[] h, int ho, int nr, int mt, double[] x, int xo, int slots,
                                   double[] y, int yo) {

@@ -123,6 +123,48 @@ public final class QamConstellation {
         }
     }
 
+    /**
+     * {@link #mapLabels(int[], int, double[], int, int)} into planes of real and imaginary parts:
+     * the label {@code labels[i]} to {@code re[i]}, {@code im[i]} for i in {@code from .. from+count)}.
+     */
+    public void mapLabels(int[] labels, double[] re, double[] im, int from, int count) {
+        final int m = bitsPerAxis;
+        final int mask = (1 << m) - 1;
+        final double[] amp = amplitudeOfLabel;
+        final int end = from + count;
+        if (twoAxes) {
+            for (int i = from; i < end; i++) {
+                re[i] = amp[labels[i] >>> m];
+                im[i] = amp[labels[i] & mask];
+            }
+        } else {
+            for (int i = from; i < end; i++) {
+                re[i] = amp[labels[i]];
+                im[i] = 0.0;
+            }
+        }
+    }
+
+    /**
+     * {@link #demapLabels(double[], int, int[], int, int)} from planes of real and imaginary parts:
+     * the estimate {@code re[i]}, {@code im[i]} to {@code labels[i]} for i in {@code from ..
+     * from+count)}.
+     */
+    public void demapLabels(double[] re, double[] im, int[] labels, int from, int count) {
+        final int m = bitsPerAxis;
+        final int[] label = labelOfLevel;
+        final int end = from + count;
+        if (twoAxes) {
+            for (int i = from; i < end; i++) {
+                labels[i] = (label[slice(re[i])] << m) | label[slice(im[i])];
+            }
+        } else {
+            for (int i = from; i < end; i++) {
+                labels[i] = label[slice(re[i])];
+            }
+        }
+    }
+
     /** Hard decisions as labels (see {@link #mapLabels}), by per-axis slicing. */
     public void demapLabels(double[] estimates, int symOffset, int[] labels, int labelOffset, int count) {
         final int m = bitsPerAxis;

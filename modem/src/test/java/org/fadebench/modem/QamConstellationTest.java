@@ -120,6 +120,44 @@ class QamConstellationTest {
         assertArrayEquals(bits, back);
     }
 
+    /** Planar mapping and slicing give exactly the interleaved ones' symbols and labels. */
+    @ParameterizedTest
+    @EnumSource(Modulation.class)
+    void planarLabelsEqualInterleaved(Modulation mod) {
+        QamConstellation c = mod.constellation();
+        int n = 500;
+        int from = 2;
+        Random rnd = new Random(4);
+        int[] labels = new int[from + n];
+        for (int i = from; i < labels.length; i++) {
+            labels[i] = rnd.nextInt(mod.order());
+        }
+        double[] s = new double[2 * n];
+        c.mapLabels(labels, from, s, 0, n);
+        double[] re = new double[from + n];
+        double[] im = new double[from + n];
+        c.mapLabels(labels, re, im, from, n);
+        for (int i = 0; i < n; i++) {
+            assertEquals(s[2 * i], re[from + i], 0.0);
+            assertEquals(s[2 * i + 1], im[from + i], 0.0);
+        }
+        // noisy estimates, some far outside the constellation
+        for (int i = 0; i < 2 * n; i++) {
+            s[i] += rnd.nextGaussian() * (i % 7 == 0 ? 3.0 : 0.3);
+        }
+        for (int i = 0; i < n; i++) {
+            re[from + i] = s[2 * i];
+            im[from + i] = s[2 * i + 1];
+        }
+        int[] expected = new int[n];
+        c.demapLabels(s, 0, expected, 0, n);
+        int[] got = new int[from + n];
+        c.demapLabels(re, im, got, from, n);
+        for (int i = 0; i < n; i++) {
+            assertEquals(expected[i], got[from + i]);
+        }
+    }
+
     /**
      * Max-log LLR equals its definition evaluated by brute force over all M points (max-log
      * approximation of the bit LLR: Proakis and Salehi, Digital Communications, 5th ed.; common

@@ -3,6 +3,7 @@ package org.fadebench.bench.perf;
 import java.util.concurrent.TimeUnit;
 import org.fadebench.channel.Draws;
 import org.fadebench.channel.MimoChannel;
+import org.fadebench.coding.stbc.AlamoutiKernel;
 import org.fadebench.coding.stbc.Combiner;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
@@ -21,7 +22,8 @@ import org.openjdk.jmh.annotations.Warmup;
 
 /**
  * Space-time stages on 512 symbols, score in symbols/s. {@code alamoutiEncodeChannelCombine}: the
- * Alamouti 2x2 kernel with the channel and its noise; {@code generalDecodeG4}: the general EJML
+ * Alamouti 2x2 kernel with the channel and its noise; {@code alamoutiPlanarEncodeChannelCombine}: the
+ * same on planar arrays (the link's path for uncoded Alamouti frames); {@code generalDecodeG4}: the general EJML
  * matched filter on G4 4x1 (channel set once per 512 symbols, as in a quasi-static frame).
  */
 @State(Scope.Thread)
@@ -45,6 +47,12 @@ public class CombinerBenchmark {
     private final double[] grid22 = new double[2 * 2 * SYMBOLS];
     private final double[] rx22 = new double[2 * 2 * SYMBOLS];
 
+    private final double[][] symbolPlanes = new double[4][SYMBOLS / 2];
+    private final double[][] gridPlanes = new double[8][SYMBOLS / 2];
+    private final double[][] rxPlanes = new double[8][SYMBOLS / 2];
+    private final double[][] estimatePlanes = new double[4][SYMBOLS / 2];
+    private final AlamoutiKernel alamoutiPlanar = new AlamoutiKernel(2);
+
     private Combiner g4Combiner;
     private final double[] h41 = new double[8];
     private double[] rx41;
@@ -59,6 +67,9 @@ public class CombinerBenchmark {
         for (int i = 0; i < 8; i++) {
             h22[i] = draws.gaussian();
             h41[i] = draws.gaussian();
+        }
+        for (int i = 0; i < symbols.length; i++) {
+            symbolPlanes[i % 4][i / 4] = symbols[i];
         }
         alamoutiEncoder = SpaceTimeCodes.ALAMOUTI.newEncoder();
         alamoutiCombiner = SpaceTimeCodes.ALAMOUTI.newCombiner(2);
@@ -79,6 +90,16 @@ public class CombinerBenchmark {
         alamoutiCombiner.setChannel(h22);
         alamoutiCombiner.combine(rx22, 0, SYMBOLS / 2, estimates, gain, 0);
         return estimates;
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(SYMBOLS)
+    public double[][] alamoutiPlanarEncodeChannelCombine() {
+        AlamoutiKernel.encode(symbolPlanes, 0, SYMBOLS / 2, gridPlanes);
+        MimoChannel.applyTwoTransmittersPlanar(h22, 2, gridPlanes, 0, SYMBOLS / 2, 0.05, draws, rxPlanes);
+        alamoutiPlanar.setChannel(h22);
+        alamoutiPlanar.combine(rxPlanes, 0, SYMBOLS / 2, estimatePlanes);
+        return estimatePlanes;
     }
 
     @Benchmark

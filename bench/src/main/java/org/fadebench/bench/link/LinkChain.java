@@ -4,6 +4,7 @@ import org.fadebench.channel.Draws;
 import org.fadebench.channel.LinkChannel;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecCodec;
+import org.fadebench.coding.stbc.AlamoutiKernel;
 import org.fadebench.coding.stbc.Combiner;
 import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCode;
@@ -23,9 +24,15 @@ import org.fadebench.modem.QamConstellation;
  * is the same data and lets errors be counted per symbol. Coded frames are sent one by one and
  * decoded in groups of {@link LinkSettings#framesDecodedTogether()}, which the Viterbi decoder
  * takes at once; each frame's outcome is the same as if it were decoded alone. A chain owns all
- * its buffers and allocates nothing per frame; each worker thread has its own. Random draws are taken in a fixed
- * order (bits, padding, then per fading block H and noise), so a frame depends only on the stream
- * it is given.
+ * its buffers and allocates nothing per frame; each worker thread has its own. Random draws are
+ * taken in a fixed order (bits, padding, then per fading block H and noise), so a frame depends
+ * only on the stream it is given.
+ *
+ * <p>Uncoded Alamouti frames over channels that stay constant within a fading block take a faster
+ * path with the same draws and the same arithmetic: symbols, grid, received signal and estimates
+ * are kept as planes, one array per real or imaginary part of each symbol, slot and antenna of a
+ * code block, indexed by code block, so that encoder, channel and combiner run as short
+ * unit-stride loops the JIT vectorises. Every other link takes the general interleaved path.
  */
 public final class LinkChain {
 
@@ -58,6 +65,16 @@ public final class LinkChain {
     private final int[] sent;
     private final int[] decided;
 
+    // the planar path (null on the general path): 2 label planes sent and decided, 4 symbol, 8 grid,
+    // 4·Nr received and 4 estimate planes
+    private final AlamoutiKernel alamouti;
+    private final int[][] sentPlanes;
+    private final int[][] decidedPlanes;
+    private final double[][] symbolPlanes;
+    private final double[][] gridPlanes;
+    private final double[][] receivedPlanes;
+    private final double[][] estimatePlanes;
+
     // coded frames: bits, LLRs and the codec
     private final FecCodec codec;
     private final int lanes;
@@ -71,6 +88,11 @@ public final class LinkChain {
     private final int codedLength;
 
     public LinkChain(LinkSettings settings) {
+        this(settings, true);
+    }
+
+    /** A chain that takes the planar path where it applies ({@code planar}) or always the general one. */
+    LinkChain(LinkSettings settings, boolean planar) {
         this.settings = settings;
         SpaceTimeCode code = settings.code();
         this.constellation = settings.modulation().constellation();
@@ -120,6 +142,23 @@ public final class LinkChain {
             this.sent = new int[symbols];
             this.decided = new int[symbols];
         }
+        if (planar && codec == null && code.kernel() == SpaceTimeCode.Kernel.ALAMOUTI && !channel.varies()) {
+            this.alamouti = new AlamoutiKernel(nr);
+            this.sentPlanes = new int[2][blocksPerFrame];
+            this.decidedPlanes = new int[2][blocksPerFrame];
+            this.symbolPlanes = new double[4][blocksPerFrame];
+            this.gridPlanes = new double[8][blocksPerFrame];
+            this.receivedPlanes = new double[4 * nr][blocksPerFrame];
+            this.estimatePlanes = new double[4][blocksPerFrame];
+        } else {
+            this.alamouti = null;
+            this.sentPlanes = null;
+            this.decidedPlanes = null;
+            this.symbolPlanes = null;
+            this.gridPlanes = null;
+            this.receivedPlanes = null;
+            this.estimatePlanes = null;
+        }
     }
 
     public LinkSettings settings() {
@@ -159,18 +198,48 @@ public final class LinkChain {
     }
 
     private void runUncoded(Draws draws, double n0, long frame, FrameCounters counters) {
-        draws.fillLabels(sent, 0, symbols, bitsPerSymbol);
-        constellation.mapLabels(sent, 0, txSymbols, 0, symbols);
-        transmit(draws, n0, frame);
-        constellation.demapLabels(estimates, 0, decided, 0, symbols);
         int bitErrors = 0;
         int symbolErrors = 0;
-        for (int s = 0; s < symbols; s++) {
-            int wrong = sent[s] ^ decided[s];
-            bitErrors += Integer.bitCount(wrong);
-            symbolErrors += wrong != 0 ? 1 : 0;
+        if (alamouti != null) {
+            // symbol k of code block i is label 2i + k of the frame, in plane k
+            draws.fillLabels(sentPlanes, 0, blocksPerFrame, bitsPerSymbol);
+            for (int k = 0; k < 2; k++) {
+                constellation.mapLabels(sentPlanes[k], symbolPlanes[2 * k], symbolPlanes[2 * k + 1], 0, blocksPerFrame);
+            }
+            transmit(draws, n0, frame);
+            for (int k = 0; k < 2; k++) {
+                constellation.demapLabels(estimatePlanes[2 * k], estimatePlanes[2 * k + 1], decidedPlanes[k], 0,
+                        blocksPerFrame);
+                bitErrors += bitErrors(sentPlanes[k], decidedPlanes[k], blocksPerFrame);
+                symbolErrors += symbolErrors(sentPlanes[k], decidedPlanes[k], blocksPerFrame);
+            }
+        } else {
+            draws.fillLabels(sent, 0, symbols, bitsPerSymbol);
+            constellation.mapLabels(sent, 0, txSymbols, 0, symbols);
+            transmit(draws, n0, frame);
+            constellation.demapLabels(estimates, 0, decided, 0, symbols);
+            bitErrors = bitErrors(sent, decided, symbols);
+            symbolErrors = symbolErrors(sent, decided, symbols);
         }
         counters.addFrame(frameBits, bitErrors, symbols, symbolErrors);
+    }
+
+    /** Bits in which labels {@code decided[0 .. n)} differ from {@code sent}. */
+    private static int bitErrors(int[] sent, int[] decided, int n) {
+        int errors = 0;
+        for (int s = 0; s < n; s++) {
+            errors += Integer.bitCount(sent[s] ^ decided[s]);
+        }
+        return errors;
+    }
+
+    /** Labels {@code decided[0 .. n)} that differ from {@code sent}. */
+    private static int symbolErrors(int[] sent, int[] decided, int n) {
+        int errors = 0;
+        for (int s = 0; s < n; s++) {
+            errors += sent[s] != decided[s] ? 1 : 0;
+        }
+        return errors;
     }
 
     /** One coded frame up to its LLRs, which go into a lane of the codec; counts raw symbol errors. */
@@ -223,13 +292,39 @@ public final class LinkChain {
         for (int first = 0; first < blocksPerFrame; first += blocksPerFade, fade++) {
             int blocks = Math.min(blocksPerFade, blocksPerFrame - first);
             channel.startBlock(draws, fade, blocks * t);
-            encoder.encode(txSymbols, first * k, blocks, grid, 0);
-            channel.transmit(grid, 0, n0, draws, received, 0);
-            channel.estimate(n0, draws, hHat);
-            combiner.setChannel(hHat);
-            combiner.combine(received, 0, blocks, estimates, gain, first * k);
+            if (alamouti != null) {
+                AlamoutiKernel.encode(symbolPlanes, first, blocks, gridPlanes);
+                channel.transmit(gridPlanes, first, n0, draws, receivedPlanes);
+                channel.estimate(n0, draws, hHat);
+                alamouti.setChannel(hHat);
+                alamouti.combine(receivedPlanes, first, blocks, estimatePlanes);
+            } else {
+                encoder.encode(txSymbols, first * k, blocks, grid, 0);
+                channel.transmit(grid, 0, n0, draws, received, 0);
+                channel.estimate(n0, draws, hHat);
+                combiner.setChannel(hHat);
+                combiner.combine(received, 0, blocks, estimates, gain, first * k);
+            }
             if (recorder != null) {
                 recorder.record(channel, fade);
+            }
+        }
+    }
+
+    /** Whether this chain takes the planar path. */
+    boolean planar() {
+        return alamouti != null;
+    }
+
+    /** The last frame's symbol estimates, interleaved complex, into {@code out} (for tests). */
+    void copyEstimates(double[] out) {
+        if (alamouti == null) {
+            System.arraycopy(estimates, 0, out, 0, 2 * symbols);
+            return;
+        }
+        for (int i = 0; i < blocksPerFrame; i++) {
+            for (int j = 0; j < 4; j++) {
+                out[4 * i + j] = estimatePlanes[j][i];
             }
         }
     }

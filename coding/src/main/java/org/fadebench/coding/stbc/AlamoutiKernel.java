@@ -1,5 +1,7 @@
 package org.fadebench.coding.stbc;
 
+import java.util.Arrays;
+
 /**
  * Alamouti's two-antenna code, specialised. Grid (rows = slots, columns = antennas), scaled by 1/√2
  * so the two antennas share unit total energy per slot:
@@ -42,6 +44,29 @@ public final class AlamoutiKernel implements Combiner {
             x[xo + 5] = s2i;
             x[xo + 6] = s1r;
             x[xo + 7] = -s1i;
+        }
+    }
+
+    /**
+     * {@link #encode(double[], int, int, double[], int)} on planar arrays, the same values in the
+     * same places: {@code s} holds four planes (Re s1, Im s1, Re s2, Im s2 of each block), {@code x}
+     * eight (slot τ, antenna t, real and imaginary parts in plane 2·(2τ + t) and the next), element
+     * i of each plane belonging to block i. Blocks {@code from .. from+blocks)} are encoded.
+     */
+    public static void encode(double[][] s, int from, int blocks, double[][] x) {
+        // slot 1: (s1, s2)/√2 in planes 0-3; slot 2: (-s2*, s1*)/√2 in planes 4-7
+        spread(s[0], from, blocks, x[0], x[6], 1.0);
+        spread(s[1], from, blocks, x[1], x[7], -1.0);
+        spread(s[2], from, blocks, x[2], x[4], -1.0);
+        spread(s[3], from, blocks, x[3], x[5], 1.0);
+    }
+
+    /** a = s/√2 and b = sign·s/√2 over {@code from .. from+n)}; sign ±1, so b is exactly ±a. */
+    private static void spread(double[] s, int from, int n, double[] a, double[] b, double sign) {
+        for (int i = from, end = from + n; i < end; i++) {
+            double v = s[i] * INV_SQRT2;
+            a[i] = v;
+            b[i] = v * sign;
         }
     }
 
@@ -90,6 +115,53 @@ public final class AlamoutiKernel implements Combiner {
             est[2 * so + 3] = z2i * scale;
             gainOut[so] = gain;
             gainOut[so + 1] = gain;
+        }
+    }
+
+    /**
+     * {@link #combine(double[], int, int, double[], double[], int)} on planar arrays, with the same
+     * arithmetic per element: {@code y} holds 4·Nr planes (slot τ, receive antenna r, real and
+     * imaginary parts in plane 2·(τ·Nr + r) and the next), {@code est} four (Re ŝ1, Im ŝ1, Re ŝ2,
+     * Im ŝ2), element i of each plane belonging to block i. Blocks {@code from .. from+blocks)} are
+     * combined. No gains are written: every symbol's is ‖Ĥ‖²/2, as the interleaved combine writes.
+     */
+    public void combine(double[][] y, int from, int blocks, double[][] est) {
+        final int end = from + blocks;
+        final double[] z1r = est[0];
+        final double[] z1i = est[1];
+        final double[] z2r = est[2];
+        final double[] z2i = est[3];
+        for (double[] z : est) {
+            Arrays.fill(z, from, end, 0.0);
+        }
+        // the sums of the interleaved combine, one loop per part and antenna (short loops vectorise)
+        for (int r = 0; r < nr; r++) {
+            double h1r = h[4 * r];
+            double h1i = h[4 * r + 1];
+            double h2r = h[4 * r + 2];
+            double h2i = h[4 * r + 3];
+            double[] a1r = y[2 * r];
+            double[] a1i = y[2 * r + 1];
+            double[] a2r = y[2 * (nr + r)];
+            double[] a2i = y[2 * (nr + r) + 1];
+            for (int i = from; i < end; i++) {
+                z1r[i] = Math.fma(h1r, a1r[i], Math.fma(h1i, a1i[i], Math.fma(h2r, a2r[i], Math.fma(h2i, a2i[i], z1r[i]))));
+            }
+            for (int i = from; i < end; i++) {
+                z1i[i] = Math.fma(h1r, a1i[i], Math.fma(-h1i, a1r[i], Math.fma(h2i, a2r[i], Math.fma(-h2r, a2i[i], z1i[i]))));
+            }
+            for (int i = from; i < end; i++) {
+                z2r[i] = Math.fma(h2r, a1r[i], Math.fma(h2i, a1i[i], Math.fma(-h1r, a2r[i], Math.fma(-h1i, a2i[i], z2r[i]))));
+            }
+            for (int i = from; i < end; i++) {
+                z2i[i] = Math.fma(h2r, a1i[i], Math.fma(-h2i, a1r[i], Math.fma(-h1i, a2r[i], Math.fma(h1r, a2i[i], z2i[i]))));
+            }
+        }
+        final double scale = this.scale;
+        for (double[] z : est) {
+            for (int i = from; i < end; i++) {
+                z[i] *= scale;
+            }
         }
     }
 }

@@ -27,6 +27,51 @@ class CombinerAgreementTest {
     }
 
     /**
+     * The planar Alamouti encoder and combiner give exactly the interleaved ones' numbers (the
+     * planes are the interleaved arrays read as rows of one code block); an exact claim, checked
+     * without tolerance.
+     */
+    @ParameterizedTest
+    @ValueSource(ints = {1, 2, 3, 4})
+    void alamoutiPlanarEqualsInterleaved(int nr) {
+        Random rnd = new Random(200 + nr);
+        int blocks = 9;
+        int from = 3;
+        double[] s = TestCodes.gaussians(rnd, 4 * blocks, 1);
+        double[] x = new double[8 * blocks];
+        AlamoutiKernel.encode(s, 0, blocks, x, 0);
+        double[][] xPlanes = new double[8][from + blocks];
+        AlamoutiKernel.encode(planes(s, 4, from), from, blocks, xPlanes);
+        assertPlanesEqual(x, xPlanes, from);
+
+        double[] h = TestCodes.gaussians(rnd, 4 * nr, Math.sqrt(0.5));
+        double[] y = TestCodes.gaussians(rnd, 4 * nr * blocks, 1.3);
+        AlamoutiKernel kernel = new AlamoutiKernel(nr);
+        kernel.setChannel(h);
+        double[] est = new double[4 * blocks];
+        kernel.combine(y, 0, blocks, est, new double[2 * blocks], 0);
+        double[][] estPlanes = new double[4][from + blocks];
+        kernel.combine(planes(y, 4 * nr, from), from, blocks, estPlanes);
+        assertPlanesEqual(est, estPlanes, from);
+    }
+
+    /** Rows of {@code width} values of {@code a} as planes, row i at element {@code from + i}. */
+    private static double[][] planes(double[] a, int width, int from) {
+        double[][] p = new double[width][from + a.length / width];
+        for (int i = 0; i < a.length; i++) {
+            p[i % width][from + i / width] = a[i];
+        }
+        return p;
+    }
+
+    private static void assertPlanesEqual(double[] interleaved, double[][] planes, int from) {
+        double[][] expected = planes(interleaved, planes.length, from);
+        for (int j = 0; j < planes.length; j++) {
+            assertArrayEquals(expected[j], planes[j], "plane " + j);
+        }
+    }
+
+    /**
      * Alamouti's kernel and the single-antenna MRC kernel agree with the general EJML matched
      * filter to 1e-12 on random channels and noise, for 1 to 4 receive antennas.
      */

@@ -1,0 +1,105 @@
+package org.fadebench.bench.link;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Random;
+import java.util.stream.Stream;
+import org.fadebench.channel.ChannelSpec;
+import org.fadebench.channel.ChannelTrace;
+import org.fadebench.channel.Draws;
+import org.fadebench.channel.Fading;
+import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.Crc;
+import org.fadebench.coding.fec.FecScheme;
+import org.fadebench.coding.fec.Interleaving;
+import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.SpaceTimeCodes;
+import org.fadebench.modem.LlrMethod;
+import org.fadebench.modem.Modulation;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * The planar Alamouti path gives exactly the general path's results: the same error counts and the
+ * same symbol estimates to the last bit, frame after frame, and it leaves the random stream at the
+ * same place (so it took the same draws). An exact claim, so exact comparison: no tolerance.
+ */
+class PlanarPathTest {
+
+    private static final double[] SNR_DB = {0, 7, 14, 21, 28};
+    private static final int FRAMES = 40;
+
+    private static LinkSettings alamouti(Modulation mod, int rx, ChannelSpec channel, int frameBits, int coherence,
+                                         Decoder decoder) {
+        return new LinkSettings(mod, SpaceTimeCodes.ALAMOUTI, 2, rx, channel, frameBits, coherence, decoder,
+                FrameCoding.NONE);
+    }
+
+    static Stream<LinkSettings> planarLinks() {
+        double[] matrices = new double[2 * 2 * 2 * 7];
+        Random rnd = new Random(3);
+        for (int i = 0; i < matrices.length; i++) {
+            matrices[i] = rnd.nextGaussian();
+        }
+        ChannelTrace trace = ChannelTrace.of("random", 2, 2, matrices);
+        return Stream.of(
+                alamouti(Modulation.QAM16, 2, ChannelSpec.of(Fading.RAYLEIGH), 2048, 0, Decoder.MF),
+                // 50 code blocks, 3 per fading block: the last fading block is short
+                alamouti(Modulation.QPSK, 1, ChannelSpec.of(Fading.RAYLEIGH), 200, 6, Decoder.MF),
+                alamouti(Modulation.QAM64, 3, ChannelSpec.of(Fading.RICIAN).withKFactor(3).withRxCorr(0.5), 600, 4,
+                        Decoder.MF),
+                alamouti(Modulation.BPSK, 2, ChannelSpec.of(Fading.NAKAGAMI).withNakagamiM(2), 128, 2, Decoder.MF),
+                alamouti(Modulation.QAM256, 2, ChannelSpec.of(Fading.RAYLEIGH).withCsiError(0.05), 1024, 0,
+                        Decoder.MF),
+                alamouti(Modulation.QAM16, 2, ChannelSpec.of(Fading.RAYLEIGH).withPilots(4).withTxCorr(0.3), 512, 8,
+                        Decoder.MF),
+                alamouti(Modulation.QAM16, 2, ChannelSpec.of(Fading.RAYLEIGH), 512, 0, Decoder.MMSE),
+                alamouti(Modulation.QPSK, 2, ChannelSpec.of(Fading.RAYLEIGH).withTrace(trace), 256, 2, Decoder.ZF),
+                alamouti(Modulation.QAM16, 4, ChannelSpec.of(Fading.NONE), 512, 0, Decoder.MF));
+    }
+
+    @ParameterizedTest
+    @MethodSource("planarLinks")
+    void planarPathEqualsGeneralPath(LinkSettings settings) {
+        LinkChain planar = new LinkChain(settings, true);
+        LinkChain general = new LinkChain(settings, false);
+        assertTrue(planar.planar(), settings.describe());
+        assertFalse(general.planar());
+        Draws planarDraws = Draws.of(11, 4, 2);
+        Draws generalDraws = Draws.of(11, 4, 2);
+        double[] planarEstimates = new double[2 * settings.symbolsPerFrame()];
+        double[] generalEstimates = new double[2 * settings.symbolsPerFrame()];
+        for (int frame = 0; frame < FRAMES; frame++) {
+            double n0 = Math.pow(10, -SNR_DB[frame % SNR_DB.length] / 10);
+            FrameCounters p = new FrameCounters();
+            FrameCounters g = new FrameCounters();
+            planar.runFrames(planarDraws, n0, frame, 1, p);
+            general.runFrames(generalDraws, n0, frame, 1, g);
+            assertEquals(g.bitErrors(), p.bitErrors(), "frame " + frame);
+            assertEquals(g.symbolErrors(), p.symbolErrors(), "frame " + frame);
+            assertEquals(g.frameErrors(), p.frameErrors(), "frame " + frame);
+            planar.copyEstimates(planarEstimates);
+            general.copyEstimates(generalEstimates);
+            // assertArrayEquals on double[] without a delta compares the bit patterns
+            assertArrayEquals(generalEstimates, planarEstimates, "frame " + frame);
+        }
+        assertEquals(generalDraws.uniform().nextLong(), planarDraws.uniform().nextLong());
+    }
+
+    /** Links the planar path does not cover keep the general path. */
+    @Test
+    void otherLinksTakeTheGeneralPath() {
+        ChannelSpec rayleigh = ChannelSpec.of(Fading.RAYLEIGH);
+        assertFalse(new LinkChain(alamouti(Modulation.QPSK, 2, rayleigh.withDoppler(0.01), 256, 0, Decoder.MF))
+                .planar());
+        assertFalse(new LinkChain(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2, rayleigh, 256, 0,
+                Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+                LlrMethod.MAXLOG))).planar());
+        assertFalse(new LinkChain(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.G4, 4, 1, Fading.RAYLEIGH, 256, 0))
+                .planar());
+    }
+}
