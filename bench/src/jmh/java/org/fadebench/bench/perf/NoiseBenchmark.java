@@ -50,17 +50,21 @@ public class NoiseBenchmark {
     /** One of the candidate samplers. */
     @State(Scope.Thread)
     public static class Candidate {
-        @Param({"commons-ziggurat", "commons-ziggurat-old", "commons-marsaglia", "commons-boxmuller",
-            "jdk17-xoshiro"})
+        @Param({"fadebench-ziggurat", "commons-ziggurat", "commons-ziggurat-old", "commons-marsaglia",
+            "commons-boxmuller", "jdk17-xoshiro"})
         public String sampler;
 
         NormalizedGaussianSampler commons;
         RandomGenerator jdk;
+        Draws own;
 
         @Setup
         public void setUp() {
             UniformRandomProvider rng = RandomSource.XO_SHI_RO_256_PP.create(12345L);
             switch (sampler) {
+                case "fadebench-ziggurat":
+                    own = Draws.of(12345L);
+                    break;
                 case "commons-ziggurat":
                     commons = ZigguratSampler.NormalizedGaussian.of(rng);
                     break;
@@ -86,7 +90,11 @@ public class NoiseBenchmark {
     @OperationsPerInvocation(N)
     public double draw(Candidate c) {
         double s = 0;
-        if (c.jdk != null) {
+        if (c.own != null) {
+            for (int i = 0; i < N; i++) {
+                s += c.own.gaussian();
+            }
+        } else if (c.jdk != null) {
             for (int i = 0; i < N; i++) {
                 s += c.jdk.nextGaussian();
             }
