@@ -89,6 +89,29 @@ class ChannelStatisticsTest {
         assertEquals(n0, power, 4 * n0 / Math.sqrt(slots));
     }
 
+    /**
+     * The planar fill takes the same draws as the interleaved one and puts row i, column j in plane
+     * j at i, for any number of planes, and leaves the stream where the interleaved fill leaves it.
+     */
+    @Test
+    void planarFillTakesTheSameDraws() {
+        for (int cols : new int[] {1, 3, 4, 8, 16}) {
+            int rows = 37;
+            double[] flat = new double[cols * rows];
+            Draws a = Draws.of(8, cols);
+            a.fillGaussian(flat, 0, flat.length, 0.7);
+            double[][] planes = new double[cols][rows + 2];
+            Draws b = Draws.of(8, cols);
+            b.fillGaussian(planes, 2, rows, 0.7);
+            for (int i = 0; i < rows; i++) {
+                for (int j = 0; j < cols; j++) {
+                    assertEquals(flat[i * cols + j], planes[j][i + 2], 0.0, cols + " planes, row " + i);
+                }
+            }
+            assertEquals(a.gaussian(), b.gaussian(), 0.0, cols + " planes: stream position");
+        }
+    }
+
     @Test
     void streamsDependOnlyOnSeedAndKeys() {
         Draws a = Draws.of(42, 3, 7);
