@@ -39,7 +39,7 @@ public record FecScheme(Crc crc, ChannelCode code) {
     public static final int MAX_LANES = 128;
 
     /** Bytes of decoder rows (soft inputs and decisions) allowed per codec when choosing lanes. */
-    static final long LANE_BUDGET_BYTES = 8L << 20;
+    static final long LANE_BUDGET_BYTES = 32L << 20;
 
     /**
      * How many frames of {@code payloadBits} a link's codec should decode together: {@link #MAX_LANES},

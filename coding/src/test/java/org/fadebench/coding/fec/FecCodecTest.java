@@ -125,16 +125,16 @@ class FecCodecTest {
 
     /**
      * Lanes per codec: 128 for frames of a few thousand bits, fewer for long frames so that the
-     * decoder's rows (4 bytes per LLR and per 32 states, per step and lane) stay within 8 MiB, and
+     * decoder's rows (4 bytes per LLR and per 32 states, per step and lane) stay within 32 MiB, and
      * 1 without a convolutional code.
      */
     @Test
     void lanesShrinkForLongFrames() {
         assertEquals(FecScheme.MAX_LANES, new FecScheme(Crc.CRC24, ChannelCode.CONV_R12).decodeLanes(1024));
-        // 100 000 + 24 + 6 steps of 16 bytes: 1.6 MB per lane, so 5 lanes in 8 MiB
-        assertEquals(5, new FecScheme(Crc.CRC24, ChannelCode.CONV_R12).decodeLanes(100_000));
-        // 30 000 + 6 steps of 16 bytes: 17 lanes fit, rounded down to 16
-        assertEquals(16, new FecScheme(Crc.NONE, ChannelCode.CONV_R34).decodeLanes(30_000));
+        // 400 000 + 24 + 6 steps of 16 bytes: 6.4 MB per lane, so 5 lanes in 32 MiB
+        assertEquals(5, new FecScheme(Crc.CRC24, ChannelCode.CONV_R12).decodeLanes(400_000));
+        // 120 000 + 6 steps of 16 bytes: 17 lanes fit, rounded down to 16
+        assertEquals(16, new FecScheme(Crc.NONE, ChannelCode.CONV_R34).decodeLanes(120_000));
         assertEquals(1, new FecScheme(Crc.CRC32, ChannelCode.NONE).decodeLanes(1024));
     }
 
