@@ -44,11 +44,6 @@ public record FrameCoding(FecScheme scheme, Interleaving interleaving, int inter
         return coded() ? scheme.codedBits(payloadBits) : payloadBits;
     }
 
-    /** How many frames of a payload size the receiver decodes together (1 without a channel code). */
-    public int framesDecodedTogether(int payloadBits) {
-        return coded() ? scheme.decodeLanes(payloadBits) : 1;
-    }
-
     /** Checks the interleaver against the coded frame; the message names the option and valid sizes. */
     void check(int payloadBits) {
         int n = codedBits(payloadBits);

@@ -64,6 +64,9 @@ public final class LinkChain {
     // uncoded frames: symbol labels
     private final int[] sent;
     private final int[] decided;
+    /** The uncoded frame being counted: wrong bits and wrong labels so far. */
+    private int labelBitErrors;
+    private int labelSymbolErrors;
 
     // the planar path (null on the general path): 2 label planes sent and decided, 4 symbol, 8 grid,
     // 4·Nr received and 4 estimate planes
@@ -77,6 +80,8 @@ public final class LinkChain {
 
     // coded frames: bits, LLRs and the codec
     private final FecCodec codec;
+    /** Whether coded frames carry a CRC (else no frame counts as a CRC failure or undetected). */
+    private final boolean withCrc;
     private final int lanes;
     /** Row l: the payload sent in lane l of the group being decoded. */
     private final byte[][] payload;
@@ -120,6 +125,7 @@ public final class LinkChain {
         this.received = new double[2 * fadeSlots * nr];
         FrameCoding coding = settings.coding();
         if (coding.coded()) {
+            this.withCrc = coding.scheme().crc() != Crc.NONE;
             this.lanes = settings.framesDecodedTogether();
             this.codec = coding.scheme().newCodec(frameBits, coding.interleaver(frameBits), lanes);
             this.codedLength = codec.codedBits();
@@ -132,6 +138,7 @@ public final class LinkChain {
             this.decided = null;
         } else {
             this.codec = null;
+            this.withCrc = false;
             this.lanes = 1;
             this.codedLength = 0;
             this.payload = null;
@@ -198,8 +205,8 @@ public final class LinkChain {
     }
 
     private void runUncoded(Draws draws, double n0, long frame, FrameCounters counters) {
-        int bitErrors = 0;
-        int symbolErrors = 0;
+        labelBitErrors = 0;
+        labelSymbolErrors = 0;
         if (alamouti != null) {
             // symbol k of code block i is label 2i + k of the frame, in plane k
             draws.fillLabels(sentPlanes, 0, blocksPerFrame, bitsPerSymbol);
@@ -210,36 +217,29 @@ public final class LinkChain {
             for (int k = 0; k < 2; k++) {
                 constellation.demapLabels(estimatePlanes[2 * k], estimatePlanes[2 * k + 1], decidedPlanes[k], 0,
                         blocksPerFrame);
-                bitErrors += bitErrors(sentPlanes[k], decidedPlanes[k], blocksPerFrame);
-                symbolErrors += symbolErrors(sentPlanes[k], decidedPlanes[k], blocksPerFrame);
+                countLabelErrors(sentPlanes[k], decidedPlanes[k], blocksPerFrame);
             }
         } else {
             draws.fillLabels(sent, 0, symbols, bitsPerSymbol);
             constellation.mapLabels(sent, 0, txSymbols, 0, symbols);
             transmit(draws, n0, frame);
             constellation.demapLabels(estimates, 0, decided, 0, symbols);
-            bitErrors = bitErrors(sent, decided, symbols);
-            symbolErrors = symbolErrors(sent, decided, symbols);
+            countLabelErrors(sent, decided, symbols);
         }
-        counters.addFrame(frameBits, bitErrors, symbols, symbolErrors);
+        counters.addFrame(frameBits, labelBitErrors, symbols, labelSymbolErrors);
     }
 
-    /** Bits in which labels {@code decided[0 .. n)} differ from {@code sent}. */
-    private static int bitErrors(int[] sent, int[] decided, int n) {
-        int errors = 0;
+    /** Adds the bits and the labels in which {@code decided[0 .. n)} differ from {@code sent}. */
+    private void countLabelErrors(int[] sent, int[] decided, int n) {
+        int bitErrors = 0;
+        int symbolErrors = 0;
         for (int s = 0; s < n; s++) {
-            errors += Integer.bitCount(sent[s] ^ decided[s]);
+            int wrong = sent[s] ^ decided[s];
+            bitErrors += Integer.bitCount(wrong);
+            symbolErrors += wrong != 0 ? 1 : 0;
         }
-        return errors;
-    }
-
-    /** Labels {@code decided[0 .. n)} that differ from {@code sent}. */
-    private static int symbolErrors(int[] sent, int[] decided, int n) {
-        int errors = 0;
-        for (int s = 0; s < n; s++) {
-            errors += sent[s] != decided[s] ? 1 : 0;
-        }
-        return errors;
+        labelBitErrors += bitErrors;
+        labelSymbolErrors += symbolErrors;
     }
 
     /** One coded frame up to its LLRs, which go into a lane of the codec; counts raw symbol errors. */
@@ -273,7 +273,6 @@ public final class LinkChain {
         for (int i = 0; i < frameBits; i++) {
             bitErrors += bits[i] ^ payloadOut[i];
         }
-        boolean withCrc = settings.coding().scheme().crc() != Crc.NONE;
         counters.addFrame(frameBits, bitErrors, symbols, rawSymbolErrors[lane], withCrc && !crcOk,
                 withCrc && crcOk && bitErrors > 0);
     }

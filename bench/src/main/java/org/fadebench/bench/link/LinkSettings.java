@@ -2,6 +2,7 @@ package org.fadebench.bench.link;
 
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
+import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.modem.Modulation;
@@ -118,9 +119,12 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
         return symbolsPerFrame() / code.symbolsPerBlock();
     }
 
-    /** How many frames the receiver decodes together (see {@link FrameCoding#framesDecodedTogether}). */
+    /**
+     * How many frames the receiver decodes together: 1 without a convolutional code (see
+     * {@link FecScheme#decodeLanes}).
+     */
     public int framesDecodedTogether() {
-        return coding.framesDecodedTogether(frameBits);
+        return coding.scheme().decodeLanes(frameBits);
     }
 
     /** Channel uses (slots) per frame. */
