@@ -101,6 +101,23 @@ public final class Draws {
     public void fillLabels(int[][] planes, int from, int rows, int bits) {
         final int perDraw = 64 / bits;
         final long mask = (1L << bits) - 1;
+        if (planes.length == 2 && perDraw % 2 == 0) {
+            // each draw holds whole rows: the labels of the loop below, without its bookkeeping
+            final int[] first = planes[0];
+            final int[] second = planes[1];
+            final int rowsPerDraw = perDraw / 2;
+            final int end = from + rows;
+            int i = from;
+            while (i < end) {
+                long r = uniform.nextLong();
+                for (int stop = Math.min(end, i + rowsPerDraw); i < stop; i++) {
+                    first[i] = (int) (r & mask);
+                    second[i] = (int) ((r >>> bits) & mask);
+                    r >>>= 2 * bits;
+                }
+            }
+            return;
+        }
         int left = 0;
         long r = 0;
         for (int i = from, end = from + rows; i < end; i++) {

@@ -79,21 +79,27 @@ class LinkChannelTest {
                 () -> moving.transmit(new double[8][1], 0, 0.1, Draws.of(1), new double[4][1]));
     }
 
-    /** Planar labels are the interleaved labels read as rows of the planes' count, from the same draws. */
+    /**
+     * Planar labels are the interleaved labels read as rows of the planes' count, from the same
+     * draws, for every label width of the modulations (1, 2, 4, 6, 8 bits) and for widths whose
+     * draws do not hold whole rows (3 bits: 21 labels per draw).
+     */
     @Test
     void planarLabelsEqualInterleaved() {
-        for (int width = 1; width <= 3; width++) {
-            int rows = 37;
-            int[] flat = new int[width * rows];
-            int[][] planes = new int[width][rows + 1];
-            Draws a = Draws.of(5);
-            Draws b = Draws.of(5);
-            a.fillLabels(flat, 0, flat.length, 6);
-            b.fillLabels(planes, 1, rows, 6);
-            for (int i = 0; i < flat.length; i++) {
-                assertEquals(flat[i], planes[i % width][1 + i / width]);
+        for (int bits : new int[] {1, 2, 3, 4, 6, 8}) {
+            for (int width = 1; width <= 3; width++) {
+                int rows = 37;
+                int[] flat = new int[width * rows];
+                int[][] planes = new int[width][rows + 1];
+                Draws a = Draws.of(5);
+                Draws b = Draws.of(5);
+                a.fillLabels(flat, 0, flat.length, bits);
+                b.fillLabels(planes, 1, rows, bits);
+                for (int i = 0; i < flat.length; i++) {
+                    assertEquals(flat[i], planes[i % width][1 + i / width], "bits " + bits + ", width " + width);
+                }
+                assertEquals(a.uniform().nextLong(), b.uniform().nextLong());
             }
-            assertEquals(a.uniform().nextLong(), b.uniform().nextLong());
         }
     }
 
