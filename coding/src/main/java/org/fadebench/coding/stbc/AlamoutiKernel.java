@@ -1,7 +1,5 @@
 package org.fadebench.coding.stbc;
 
-import java.util.Arrays;
-
 /**
  * Alamouti's two-antenna code, specialised. Grid (rows = slots, columns = antennas), scaled by 1/√2
  * so the two antennas share unit total energy per slot:
@@ -127,14 +125,8 @@ public final class AlamoutiKernel implements Combiner {
      */
     public void combine(double[][] y, int from, int blocks, double[][] est) {
         final int end = from + blocks;
-        final double[] z1r = est[0];
-        final double[] z1i = est[1];
-        final double[] z2r = est[2];
-        final double[] z2i = est[3];
-        for (double[] z : est) {
-            Arrays.fill(z, from, end, 0.0);
-        }
-        // the sums of the interleaved combine, one loop per part and antenna (short loops vectorise)
+        // the sums of the interleaved combine, one loop per part and antenna (short loops vectorise);
+        // the first antenna starts each sum from 0, the last one applies the scale
         for (int r = 0; r < nr; r++) {
             double h1r = h[4 * r];
             double h1i = h[4 * r + 1];
@@ -144,23 +136,28 @@ public final class AlamoutiKernel implements Combiner {
             double[] a1i = y[2 * r + 1];
             double[] a2r = y[2 * (nr + r)];
             double[] a2i = y[2 * (nr + r) + 1];
-            for (int i = from; i < end; i++) {
-                z1r[i] = Math.fma(h1r, a1r[i], Math.fma(h1i, a1i[i], Math.fma(h2r, a2r[i], Math.fma(h2i, a2i[i], z1r[i]))));
-            }
-            for (int i = from; i < end; i++) {
-                z1i[i] = Math.fma(h1r, a1i[i], Math.fma(-h1i, a1r[i], Math.fma(h2i, a2r[i], Math.fma(-h2r, a2i[i], z1i[i]))));
-            }
-            for (int i = from; i < end; i++) {
-                z2r[i] = Math.fma(h2r, a1r[i], Math.fma(h2i, a1i[i], Math.fma(-h1r, a2r[i], Math.fma(-h1i, a2i[i], z2r[i]))));
-            }
-            for (int i = from; i < end; i++) {
-                z2i[i] = Math.fma(h2r, a1i[i], Math.fma(-h2i, a1r[i], Math.fma(-h1i, a2r[i], Math.fma(h1r, a2i[i], z2i[i]))));
-            }
+            boolean add = r > 0;
+            double s = r == nr - 1 ? scale : 1.0;
+            sumInto(est[0], h1r, a1r, h1i, a1i, h2r, a2r, h2i, a2i, add, s, from, end);
+            sumInto(est[1], h1r, a1i, -h1i, a1r, h2i, a2r, -h2r, a2i, add, s, from, end);
+            sumInto(est[2], h2r, a1r, h2i, a1i, -h1r, a2r, -h1i, a2i, add, s, from, end);
+            sumInto(est[3], h2r, a1i, -h2i, a1r, -h1i, a2r, h1r, a2i, add, s, from, end);
         }
-        final double scale = this.scale;
-        for (double[] z : est) {
+    }
+
+    /**
+     * {@code z[i] = (c1·a[i] + c2·b[i] + c3·c[i] + c4·d[i] + (add ? z[i] : 0)) · s} for i in
+     * {@code from .. end)}, as the fused multiply-adds of the interleaved combine (s = 1 is exact).
+     */
+    private static void sumInto(double[] z, double c1, double[] a, double c2, double[] b, double c3, double[] c,
+                                double c4, double[] d, boolean add, double s, int from, int end) {
+        if (add) {
             for (int i = from; i < end; i++) {
-                z[i] *= scale;
+                z[i] = Math.fma(c1, a[i], Math.fma(c2, b[i], Math.fma(c3, c[i], Math.fma(c4, d[i], z[i])))) * s;
+            }
+        } else {
+            for (int i = from; i < end; i++) {
+                z[i] = Math.fma(c1, a[i], Math.fma(c2, b[i], Math.fma(c3, c[i], Math.fma(c4, d[i], 0.0)))) * s;
             }
         }
     }
