@@ -31,6 +31,10 @@ public final class QamConstellation {
     private final int[] labelOfLevel;
     /** Amplitude of level index i. */
     private final double[] amplitudeOfLevel;
+    /** Estimates are clamped to ± this (half a spacing beyond the outermost amplitudes) before the check. */
+    private final double clampEdge;
+    /** Estimates within this of their sent amplitude are surely sliced to it. */
+    private final double surelyInside;
 
     QamConstellation(Modulation modulation) {
         this.modulation = modulation;
@@ -51,6 +55,8 @@ public final class QamConstellation {
             amplitudeOfLevel[i] = amplitude;
             amplitudeOfLabel[gray] = amplitude;
         }
+        this.clampEdge = (levels - 0.5) * scale;
+        this.surelyInside = (1.0 - 1e-9) * scale;
     }
 
     public Modulation modulation() {
@@ -151,35 +157,72 @@ public final class QamConstellation {
      * from+count)}.
      */
     public void demapLabels(double[] re, double[] im, int[] labels, int from, int count) {
-        final int m = bitsPerAxis;
-        final int[] label = labelOfLevel;
-        final int end = from + count;
-        if (twoAxes) {
-            for (int i = from; i < end; i++) {
-                labels[i] = (label[slice(re[i])] << m) | label[slice(im[i])];
-            }
-        } else {
-            for (int i = from; i < end; i++) {
-                labels[i] = label[slice(re[i])];
+        for (int i = from, end = from + count; i < end; i++) {
+            labels[i] = decide(re[i], im[i]);
+        }
+    }
+
+    /**
+     * Counts the errors of hard decisions on the estimates {@code re[i]}, {@code im[i]} of symbols
+     * sent with labels {@code labels[i]}, which {@link #mapLabels(int[], double[], double[], int, int)}
+     * mapped to {@code sentRe[i]}, {@code sentIm[i]}, for i in {@code from .. from+count)}: adds the
+     * wrong bits to {@code counts[0]} and the wrong symbols to {@code counts[1]}. The counts equal
+     * those of {@link #demapLabels(double[], double[], int[], int, int)} compared label by label;
+     * only estimates not {@link #surelyDecided} on both axes are sliced.
+     */
+    public void countHardErrors(int[] labels, double[] sentRe, double[] sentIm, double[] re, double[] im,
+                                int from, int count, int[] counts) {
+        int bitErrors = 0;
+        int symbolErrors = 0;
+        for (int i = from, end = from + count; i < end; i++) {
+            // one branch per symbol: & evaluates both axes
+            if (!(surelyDecided(re[i], sentRe[i]) & (!twoAxes || surelyDecided(im[i], sentIm[i])))) {
+                int wrong = labels[i] ^ decide(re[i], im[i]);
+                bitErrors += Integer.bitCount(wrong);
+                symbolErrors += wrong != 0 ? 1 : 0;
             }
         }
+        counts[0] += bitErrors;
+        counts[1] += symbolErrors;
+    }
+
+    /**
+     * {@link #countHardErrors(int[], double[], double[], double[], double[], int, int, int[])} on
+     * interleaved complex arrays: labels from {@code labelOffset}, the symbols sent ({@code sent})
+     * and their estimates from complex index {@code symOffset}.
+     */
+    public void countHardErrors(int[] labels, int labelOffset, double[] sent, double[] estimates, int symOffset,
+                                int count, int[] counts) {
+        int bitErrors = 0;
+        int symbolErrors = 0;
+        for (int n = 0, e = symOffset << 1; n < count; n++, e += 2) {
+            if (!(surelyDecided(estimates[e], sent[e]) & (!twoAxes || surelyDecided(estimates[e + 1], sent[e + 1])))) {
+                int wrong = labels[labelOffset + n] ^ decide(estimates[e], estimates[e + 1]);
+                bitErrors += Integer.bitCount(wrong);
+                symbolErrors += wrong != 0 ? 1 : 0;
+            }
+        }
+        counts[0] += bitErrors;
+        counts[1] += symbolErrors;
+    }
+
+    /**
+     * Whether the estimate {@code y} of an amplitude {@code sent} of this constellation is surely
+     * sliced to {@code sent}: {@code |clamp(y) - sent| < (1 - 1e-9)·halfSpacing}, where clamp
+     * limits y to half a spacing beyond the outermost amplitudes (every estimate beyond an outermost
+     * amplitude is sliced to it). The margin of 1e-9 covers the rounding of the slicer's
+     * arithmetic, below 1e-13 of a spacing for up to 16 levels per axis; NaN is never surely
+     * decided.
+     */
+    private boolean surelyDecided(double y, double sent) {
+        double clamped = y > clampEdge ? clampEdge : y < -clampEdge ? -clampEdge : y;
+        return Math.abs(clamped - sent) < surelyInside;
     }
 
     /** Hard decisions as labels (see {@link #mapLabels}), by per-axis slicing. */
     public void demapLabels(double[] estimates, int symOffset, int[] labels, int labelOffset, int count) {
-        final int m = bitsPerAxis;
-        final int[] label = labelOfLevel;
-        int e = symOffset << 1;
-        if (twoAxes) {
-            for (int n = 0; n < count; n++) {
-                labels[labelOffset + n] = (label[slice(estimates[e])] << m) | label[slice(estimates[e + 1])];
-                e += 2;
-            }
-        } else {
-            for (int n = 0; n < count; n++) {
-                labels[labelOffset + n] = label[slice(estimates[e])];
-                e += 2;
-            }
+        for (int n = 0, e = symOffset << 1; n < count; n++, e += 2) {
+            labels[labelOffset + n] = decide(estimates[e], estimates[e + 1]);
         }
     }
 
@@ -199,6 +242,14 @@ public final class QamConstellation {
             }
             e += 2;
         }
+    }
+
+    /** The label of the hard decision on the estimate (re, im) (BPSK: on re alone). */
+    private int decide(double re, double im) {
+        if (twoAxes) {
+            return (labelOfLevel[slice(re)] << bitsPerAxis) | labelOfLevel[slice(im)];
+        }
+        return labelOfLevel[slice(re)];
     }
 
     /** Level index nearest to amplitude {@code y}: level i sits at (L-1-2i)·scale. */

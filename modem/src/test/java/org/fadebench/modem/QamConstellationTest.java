@@ -159,6 +159,88 @@ class QamConstellationTest {
     }
 
     /**
+     * Counting hard-decision errors against the symbols sent equals slicing every estimate and
+     * comparing labels (bits by popcount, symbols by inequality), in planar and interleaved form,
+     * for estimates that sit on both sides of every decision boundary within a few ulps, exactly on
+     * it, far outside the constellation, at ±infinity and NaN, and under Gaussian noise of several
+     * strengths. The check that skips slicing must never skip a wrong decision.
+     */
+    @ParameterizedTest
+    @EnumSource(Modulation.class)
+    void countingHardErrorsEqualsSlicingEveryEstimate(Modulation mod) {
+        QamConstellation c = mod.constellation();
+        int levels = c.levelsPerAxis();
+        double h = c.halfSpacing();
+        // per axis: boundaries (L-2-2j)·h and the points themselves, each nudged by 0 to ±4 ulps
+        java.util.List<Double> axis = new java.util.ArrayList<>();
+        for (int j = -1; j <= 2 * levels - 1; j++) {
+            double v = (levels - 1 - j) * h;
+            double up = v;
+            double down = v;
+            axis.add(v);
+            for (int u = 0; u < 4; u++) {
+                up = Math.nextUp(up);
+                down = Math.nextDown(down);
+                axis.add(up);
+                axis.add(down);
+            }
+            axis.add(v * (1 + 1e-9));
+            axis.add(v * (1 - 1e-9));
+        }
+        for (double v : new double[] {0.0, -0.0, 1e300, -1e300, Double.POSITIVE_INFINITY,
+            Double.NEGATIVE_INFINITY, Double.NaN}) {
+            axis.add(v);
+        }
+        Random rnd = new Random(11);
+        int n = 20000;
+        int[] labels = new int[n];
+        double[] sent = new double[2 * n];
+        double[] sentRe = new double[n];
+        double[] sentIm = new double[n];
+        double[] est = new double[2 * n];
+        for (int i = 0; i < n; i++) {
+            labels[i] = rnd.nextInt(mod.order());
+        }
+        c.mapLabels(labels, 0, sent, 0, n);
+        c.mapLabels(labels, sentRe, sentIm, 0, n);
+        for (int i = 0; i < 2 * n; i++) {
+            if (i < n) {
+                est[i] = axis.get(rnd.nextInt(axis.size()));
+            } else {
+                double sigma = new double[] {0.05, 0.3, 1.0, 5.0}[i % 4] * h;
+                est[i] = sent[i] + sigma * rnd.nextGaussian();
+            }
+        }
+        double[] re = new double[n];
+        double[] im = new double[n];
+        for (int i = 0; i < n; i++) {
+            re[i] = est[2 * i];
+            im[i] = est[2 * i + 1];
+        }
+        int[] decided = new int[n];
+        c.demapLabels(est, 0, decided, 0, n);
+        int bitErrors = 0;
+        int symbolErrors = 0;
+        for (int i = 0; i < n; i++) {
+            bitErrors += Integer.bitCount(labels[i] ^ decided[i]);
+            symbolErrors += labels[i] != decided[i] ? 1 : 0;
+        }
+        assertTrue(symbolErrors > n / 10, "the estimates exercise wrong decisions");
+        int[] planar = {5, 7};
+        c.countHardErrors(labels, sentRe, sentIm, re, im, 0, n, planar);
+        assertArrayEquals(new int[] {5 + bitErrors, 7 + symbolErrors}, planar);
+        int[] interleaved = new int[2];
+        c.countHardErrors(labels, 0, sent, est, 0, n, interleaved);
+        assertArrayEquals(new int[] {bitErrors, symbolErrors}, interleaved);
+        // one symbol at a time, so a single wrong decision cannot hide among the others
+        for (int i = 0; i < n; i++) {
+            int[] one = new int[2];
+            c.countHardErrors(labels, sentRe, sentIm, re, im, i, 1, one);
+            assertEquals(Integer.bitCount(labels[i] ^ decided[i]), one[0], "symbol " + i);
+        }
+    }
+
+    /**
      * Max-log LLR equals its definition evaluated by brute force over all M points (max-log
      * approximation of the bit LLR: Proakis and Salehi, Digital Communications, 5th ed.; common
      * practice), and its sign agrees with the hard decision.

@@ -63,16 +63,13 @@ public final class LinkChain {
 
     // uncoded frames: symbol labels
     private final int[] sent;
-    private final int[] decided;
     /** The uncoded frame being counted: wrong bits and wrong labels so far. */
-    private int labelBitErrors;
-    private int labelSymbolErrors;
+    private final int[] labelErrors = new int[2];
 
-    // the planar path (null on the general path): 2 label planes sent and decided, 4 symbol, 8 grid,
-    // 4·Nr received and 4 estimate planes
+    // the planar path (null on the general path): 2 label, 4 symbol, 8 grid, 4·Nr received and
+    // 4 estimate planes
     private final AlamoutiKernel alamouti;
     private final int[][] sentPlanes;
-    private final int[][] decidedPlanes;
     private final double[][] symbolPlanes;
     private final double[][] gridPlanes;
     private final double[][] receivedPlanes;
@@ -135,7 +132,6 @@ public final class LinkChain {
             this.codedBits = new byte[symbols * bitsPerSymbol];
             this.llr = new double[symbols * bitsPerSymbol];
             this.sent = null;
-            this.decided = null;
         } else {
             this.codec = null;
             this.withCrc = false;
@@ -147,12 +143,10 @@ public final class LinkChain {
             this.codedBits = null;
             this.llr = null;
             this.sent = new int[symbols];
-            this.decided = new int[symbols];
         }
         if (planar && codec == null && code.kernel() == SpaceTimeCode.Kernel.ALAMOUTI && !channel.varies()) {
             this.alamouti = new AlamoutiKernel(nr);
             this.sentPlanes = new int[2][blocksPerFrame];
-            this.decidedPlanes = new int[2][blocksPerFrame];
             this.symbolPlanes = new double[4][blocksPerFrame];
             this.gridPlanes = new double[8][blocksPerFrame];
             this.receivedPlanes = new double[4 * nr][blocksPerFrame];
@@ -160,7 +154,6 @@ public final class LinkChain {
         } else {
             this.alamouti = null;
             this.sentPlanes = null;
-            this.decidedPlanes = null;
             this.symbolPlanes = null;
             this.gridPlanes = null;
             this.receivedPlanes = null;
@@ -205,8 +198,8 @@ public final class LinkChain {
     }
 
     private void runUncoded(Draws draws, double n0, long frame, FrameCounters counters) {
-        labelBitErrors = 0;
-        labelSymbolErrors = 0;
+        labelErrors[0] = 0;
+        labelErrors[1] = 0;
         if (alamouti != null) {
             // symbol k of code block i is label 2i + k of the frame, in plane k
             draws.fillLabels(sentPlanes, 0, blocksPerFrame, bitsPerSymbol);
@@ -215,31 +208,16 @@ public final class LinkChain {
             }
             transmit(draws, n0, frame);
             for (int k = 0; k < 2; k++) {
-                constellation.demapLabels(estimatePlanes[2 * k], estimatePlanes[2 * k + 1], decidedPlanes[k], 0,
-                        blocksPerFrame);
-                countLabelErrors(sentPlanes[k], decidedPlanes[k], blocksPerFrame);
+                constellation.countHardErrors(sentPlanes[k], symbolPlanes[2 * k], symbolPlanes[2 * k + 1],
+                        estimatePlanes[2 * k], estimatePlanes[2 * k + 1], 0, blocksPerFrame, labelErrors);
             }
         } else {
             draws.fillLabels(sent, 0, symbols, bitsPerSymbol);
             constellation.mapLabels(sent, 0, txSymbols, 0, symbols);
             transmit(draws, n0, frame);
-            constellation.demapLabels(estimates, 0, decided, 0, symbols);
-            countLabelErrors(sent, decided, symbols);
+            constellation.countHardErrors(sent, 0, txSymbols, estimates, 0, symbols, labelErrors);
         }
-        counters.addFrame(frameBits, labelBitErrors, symbols, labelSymbolErrors);
-    }
-
-    /** Adds the bits and the labels in which {@code decided[0 .. n)} differ from {@code sent}. */
-    private void countLabelErrors(int[] sent, int[] decided, int n) {
-        int bitErrors = 0;
-        int symbolErrors = 0;
-        for (int s = 0; s < n; s++) {
-            int wrong = sent[s] ^ decided[s];
-            bitErrors += Integer.bitCount(wrong);
-            symbolErrors += wrong != 0 ? 1 : 0;
-        }
-        labelBitErrors += bitErrors;
-        labelSymbolErrors += symbolErrors;
+        counters.addFrame(frameBits, labelErrors[0], symbols, labelErrors[1]);
     }
 
     /** One coded frame up to its LLRs, which go into a lane of the codec; counts raw symbol errors. */
