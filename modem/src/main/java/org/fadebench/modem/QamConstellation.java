@@ -168,7 +168,7 @@ public final class QamConstellation {
      * mapped to {@code sentRe[i]}, {@code sentIm[i]}, for i in {@code from .. from+count)}: adds the
      * wrong bits to {@code counts[0]} and the wrong symbols to {@code counts[1]}. The counts equal
      * those of {@link #demapLabels(double[], double[], int[], int, int)} compared label by label;
-     * only estimates not {@link #surelyDecided} on both axes are sliced.
+     * only estimates not surely decided on both axes (see surelyDecided) are sliced.
      */
     public void countHardErrors(int[] labels, double[] sentRe, double[] sentIm, double[] re, double[] im,
                                 int from, int count, int[] counts) {
