@@ -47,7 +47,7 @@ public class ModemBenchmark {
     private int[] labels;
     private int[] decidedLabels;
     private final double[] labelSymbols = new double[2 * SYMBOLS];
-    private double[] labelNoisy;
+    private final double[] labelNoisy = new double[2 * SYMBOLS];
     private final int[] errorCounts = new int[2];
 
     @Setup
@@ -71,7 +71,6 @@ public class ModemBenchmark {
         decidedLabels = new int[SYMBOLS];
         d.fillLabels(labels, 0, SYMBOLS, b);
         constellation.mapLabels(labels, 0, labelSymbols, 0, SYMBOLS);
-        labelNoisy = new double[2 * SYMBOLS];
         for (int i = 0; i < labelNoisy.length; i++) {
             labelNoisy[i] = labelSymbols[i] + 0.25 * constellation.halfSpacing() * d.gaussian();
         }
