@@ -137,21 +137,29 @@ public final class ChannelSpec {
         return doppler > 0.0;
     }
 
+    /** The normalised Doppler f_D·T_s, 0 for block fading. */
+    public double doppler() {
+        return varies() ? doppler : 0.0;
+    }
+
     /** Pilot slots per fading block (0 without {@code --pilots}). */
     public int pilots() {
         return pilots;
     }
 
     /**
-     * The share of slots spent on pilots, N/(N + data slots per fading block); 0 without pilots.
-     * Pilots are not charged to the SNR: report this beside the spectral efficiency (the net value is
-     * the nominal one times 1 − overhead).
+     * The share of slots spent on pilots in a frame of {@code dataSlots} data slots over
+     * {@code fadingBlocks} fading blocks, N·B/(N·B + data slots) for N pilot slots per block; 0 without
+     * pilots. Pilots are not charged to the SNR: report this beside the spectral efficiency (the net
+     * value is the nominal one times 1 − overhead).
      */
-    public double pilotOverhead(int dataSlotsPerBlock) {
-        if (dataSlotsPerBlock < 1) {
-            throw new IllegalArgumentException("data slots per block must be >= 1, got " + dataSlotsPerBlock);
+    public double pilotOverhead(int dataSlots, int fadingBlocks) {
+        if (dataSlots < 1 || fadingBlocks < 1) {
+            throw new IllegalArgumentException("data slots and fading blocks must be >= 1, got " + dataSlots + " and "
+                    + fadingBlocks);
         }
-        return pilots == 0 ? 0.0 : (double) pilots / (pilots + dataSlotsPerBlock);
+        double pilotSlots = (double) pilots * fadingBlocks;
+        return pilots == 0 ? 0.0 : pilotSlots / (pilotSlots + dataSlots);
     }
 
     /**
@@ -273,13 +281,16 @@ public final class ChannelSpec {
                 && !given(doppler);
     }
 
-    /** A short label, e.g. {@code rician K=3, rx-corr 0.5, doppler 0.01, pilots 4}. */
+    /**
+     * A short label naming the model with its parameters and the receiver's CSI, e.g.
+     * {@code rician fading K=3.0, rx-corr 0.5, doppler 0.01, pilots 4} or {@code rayleigh fading, perfect CSI}.
+     */
     public String describe() {
         StringBuilder sb = new StringBuilder();
         if (trace != null) {
             sb.append("trace ").append(trace.source()).append(" (").append(trace.size()).append(" matrices)");
         } else {
-            sb.append(fading.cliName());
+            sb.append(fading.cliName()).append(" fading");
             if (given(kFactor)) {
                 sb.append(" K=").append(kFactor);
             }
@@ -304,6 +315,9 @@ public final class ChannelSpec {
         }
         if (pilots > 0) {
             sb.append(", pilots ").append(pilots);
+        }
+        if (!given(csiError) && pilots == 0) {
+            sb.append(", perfect CSI");
         }
         return sb.toString();
     }

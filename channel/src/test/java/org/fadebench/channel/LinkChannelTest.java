@@ -269,13 +269,15 @@ class LinkChannelTest {
         assertTrue(ChannelSpec.of(Fading.NONE).newModel(2, 2) instanceof NoFading);
         ChannelTrace trace = ChannelTrace.of("t.npy", 1, 1, new double[] {1, 0, 0, 1});
         assertTrue(ChannelSpec.of(Fading.RAYLEIGH).withTrace(trace).newModel(1, 1) instanceof TraceFading);
-        assertEquals("rician K=3.0, rx-corr 0.5, doppler 0.01, pilots 4", ChannelSpec.of(Fading.RICIAN).withKFactor(3)
+        assertEquals("rician fading K=3.0, rx-corr 0.5, doppler 0.01, pilots 4", ChannelSpec.of(Fading.RICIAN).withKFactor(3)
                 .withRxCorr(0.5).withDoppler(0.01).withPilots(4).toString());
         assertEquals("trace t.npy (2 matrices), csi-error 0.1", ChannelSpec.of(Fading.RAYLEIGH).withTrace(trace)
                 .withCsiError(0.1).describe());
         ChannelSpec pilots = ChannelSpec.of(Fading.RAYLEIGH).withPilots(4);
-        assertEquals(4.0 / 20.0, pilots.pilotOverhead(16), 1e-15);
-        assertEquals(0.0, ChannelSpec.of(Fading.RAYLEIGH).pilotOverhead(16));
+        assertEquals(4.0 / 20.0, pilots.pilotOverhead(16, 1), 1e-15);
+        assertEquals(8.0 / 38.0, pilots.pilotOverhead(30, 2), 1e-15, "two blocks of 15 and 15 slots, 4 pilots each");
+        assertEquals(0.0, ChannelSpec.of(Fading.RAYLEIGH).pilotOverhead(16, 1));
+        assertEquals("rayleigh fading, tx-corr 0.2, perfect CSI", ChannelSpec.of(Fading.RAYLEIGH).withTxCorr(0.2).describe());
         assertEquals(0.2 * 2 / 4, pilots.newLinkChannel(3, 2, 8).csiErrorVariance(0.2), 1e-15);
     }
 

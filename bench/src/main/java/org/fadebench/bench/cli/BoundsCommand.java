@@ -25,7 +25,7 @@ import picocli.CommandLine.Option;
  * {@code fadebench bounds}: the three outage bounds of a link over i.i.d. Rayleigh block fading,
  * without simulating it: a table on the terminal and {@code DIR/bounds.csv}.
  */
-@Command(name = "bounds", mixinStandardHelpOptions = true, sortOptions = false,
+@Command(name = "bounds", mixinStandardHelpOptions = true, sortOptions = false, abbreviateSynopsis = true,
         description = {"Print and write the outage bounds of a link (i.i.d. Rayleigh block fading) without simulating it.",
             "SNR is the total transmitted energy per channel use over N0 at each receive antenna."})
 final class BoundsCommand implements Callable<Integer> {

@@ -7,7 +7,10 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.fadebench.bench.analysis.DiversityFit;
 import org.fadebench.bench.scenario.ScenarioLoader;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -43,6 +46,7 @@ final class DemoCommand implements Callable<Integer> {
         w.println("Demo: a hilltop gateway with two transmit antennas (Alamouti) sends 256-bit QPSK telemetry");
         w.println("frames to field sensors through slow (per-frame) Rayleigh fading.");
         List<String> folders = new ArrayList<>();
+        List<Optional<DiversityFit>> fits = new ArrayList<>();
         for (String name : SCENARIOS) {
             w.println();
             w.println("== " + name + " ==");
@@ -62,11 +66,42 @@ final class DemoCommand implements Callable<Integer> {
                 return code;
             }
             folders.add(out + "/" + name);
+            fits.add(run.summary.diversity());
         }
         w.println();
-        w.println("With two receive antennas the FER falls about twice as fast with SNR (diversity 4 against 2).");
-        w.println("Outputs: " + String.join(", ", folders) + " (results.csv, results.json, fer.png, fer.svg, scenario.yaml).");
+        w.println(closing(fits.get(0), fits.get(1)));
+        w.println("Outputs: " + String.join(", ", folders) + " (" + FadebenchCli.RUN_OUTPUTS + ").");
         return ExitCodes.OK;
+    }
+
+    /**
+     * The demo's closing words, from the two runs' fitted diversity orders: each with its interval,
+     * and how much faster the FER falls with two receive antennas when the intervals tell the two
+     * apart.
+     */
+    static String closing(Optional<DiversityFit> oneRx, Optional<DiversityFit> twoRx) {
+        if (oneRx.isEmpty() || twoRx.isEmpty()) {
+            return "Too few points with errors to fit a diversity order for "
+                    + (oneRx.isEmpty() && twoRx.isEmpty() ? "either sensor" : oneRx.isEmpty() ? "sensor-1rx" : "sensor-2rx")
+                    + "; compare the FER columns above.";
+        }
+        DiversityFit one = oneRx.get();
+        DiversityFit two = twoRx.get();
+        String orders = "Fitted diversity order: " + order(one) + " with one receive antenna, " + order(two)
+                + " with two";
+        boolean apart = one.hasInterval() && two.hasInterval() && (two.low() > one.high() || one.low() > two.high());
+        if (!apart) {
+            return orders + "; at this run's length the fits do not tell the two apart.";
+        }
+        return orders + (two.order() > one.order()
+                ? String.format(Locale.ROOT, ": with two receive antennas the FER falls %.1f times as fast with SNR.",
+                        two.order() / one.order())
+                : ": with two receive antennas the FER falls more slowly with SNR than with one.");
+    }
+
+    private static String order(DiversityFit f) {
+        return f.hasInterval() ? String.format(Locale.ROOT, "%.1f (95 %% interval %.1f to %.1f)", f.order(), f.low(),
+                f.high()) : String.format(Locale.ROOT, "%.1f", f.order());
     }
 
     private static String resource(String name) {

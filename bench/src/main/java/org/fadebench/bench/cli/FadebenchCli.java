@@ -4,14 +4,21 @@ import java.io.PrintStream;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.util.List;
+import org.fadebench.bench.report.ToolVersion;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
-/** The {@code fadebench} command: {@code run}, {@code demo}. */
+/** The {@code fadebench} command: {@code run}, {@code bounds}, {@code codes}, {@code demo}. */
 @Command(name = "fadebench", mixinStandardHelpOptions = true, versionProvider = FadebenchCli.Version.class,
-        description = "Monte Carlo link-level bench for multi-antenna diversity links over block fading.",
+        description = {"Monte Carlo link-level bench for multi-antenna diversity links over block fading.",
+            "Outputs: run writes " + FadebenchCli.RUN_OUTPUTS + " into its --out folder, with checkpoint.json while it"
+                + " runs, the --trace-out file and the --archive file when asked; bounds writes bounds.csv; demo"
+                + " writes a run's outputs per sensor."},
         subcommands = {RunCommand.class, BoundsCommand.class, CodesCommand.class, DemoCommand.class, CommandLine.HelpCommand.class})
 public final class FadebenchCli implements Runnable {
+
+    /** The files every {@code run} writes, for the help texts. */
+    static final String RUN_OUTPUTS = "results.csv, results.json, fer.png, fer.svg and scenario.yaml";
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -23,6 +30,7 @@ public final class FadebenchCli implements Runnable {
     /** Runs the command line and returns the exit code; output goes to the given streams. */
     public static int execute(String[] args, PrintStream out, PrintStream err) {
         CommandLine cli = new CommandLine(new FadebenchCli());
+        HelpLayout.install(cli);
         PrintWriter errWriter = new PrintWriter(err, true);
         cli.setOut(new PrintWriter(out, true));
         cli.setErr(errWriter);
@@ -74,12 +82,11 @@ public final class FadebenchCli implements Runnable {
                 "choose a command: run, bounds, codes, demo (or --help)");
     }
 
-    /** Version from the jar manifest, or "development" when run from classes. */
+    /** The project version, as the build recorded it. */
     static final class Version implements CommandLine.IVersionProvider {
         @Override
         public String[] getVersion() {
-            String v = FadebenchCli.class.getPackage().getImplementationVersion();
-            return new String[] {"fadebench " + (v == null ? "development" : v)};
+            return new String[] {"fadebench " + ToolVersion.version()};
         }
     }
 }

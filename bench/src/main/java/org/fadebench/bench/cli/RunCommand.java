@@ -1,10 +1,14 @@
 package org.fadebench.bench.cli;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.function.Supplier;
 import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.analysis.CsiAgeing;
+import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.coding.fec.ChannelCode;
@@ -13,6 +17,7 @@ import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
 import org.fadebench.modem.LlrMethod;
 import org.fadebench.bench.report.Archive;
+import org.fadebench.bench.report.FerPlot;
 import org.fadebench.bench.scenario.Scenario;
 import org.fadebench.bench.scenario.ScenarioException;
 import org.fadebench.bench.scenario.ScenarioKey;
@@ -34,9 +39,9 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** {@code fadebench run [SCENARIO.yaml] [options]}: simulate one link over a sweep of SNR points. */
-@Command(name = "run", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Simulate one link over a sweep of SNR points; print a table and write results.csv, "
-                + "results.json and scenario.yaml.",
+@Command(name = "run", mixinStandardHelpOptions = true, sortOptions = false, abbreviateSynopsis = true,
+        description = {"Simulate one link over a sweep of SNR points; print a table and write "
+                + FadebenchCli.RUN_OUTPUTS + ".",
             "SNR is the total transmitted energy per channel use over N0 at each receive antenna "
                 + "(E|h|^2 = 1, power split equally over the transmit antennas).",
             "Options given on the command line override the scenario file."})
@@ -74,7 +79,8 @@ final class RunCommand implements Callable<Integer> {
     String llr;
 
     @Option(names = "--fading", paramLabel = "NAME", defaultValue = "rayleigh",
-            description = "Fading model: rayleigh, none (default: ${DEFAULT-VALUE}).")
+            description = "Fading model: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).",
+            completionCandidates = FadingNames.class)
     String fading;
 
     @Option(names = "--k-factor", paramLabel = "K", description = "Rician K-factor, linear (with --fading rician).")
@@ -164,8 +170,19 @@ final class RunCommand implements Callable<Integer> {
             description = "Folder for the outputs (default: ${DEFAULT-VALUE}).")
     String out;
 
-    @Option(names = "--archive", paramLabel = "FILE", description = "Also bundle the outputs into FILE.tar.xz or FILE.tar.gz.")
+    @Option(names = "--archive", paramLabel = "FILE",
+            description = "Also bundle the outputs into FILE, named as given; its name must end in .tar.xz, .txz, "
+                    + ".tar.gz or .tgz.")
     String archive;
+
+    @Option(names = "--plot-x", paramLabel = "NAME", defaultValue = "snr",
+            description = "X axis of fer.png and fer.svg: snr, ebn0 (default: ${DEFAULT-VALUE}).")
+    String plotX;
+
+    @Option(names = "--plot-floor", paramLabel = "P",
+            description = "Fixed lower end of the plot's y axes, e.g. 1e-6, so that two runs' plots line up "
+                    + "(default: fitted to the values).")
+    Double plotFloor;
 
     @Option(names = "--resume", description = "Continue an interrupted run from the checkpoint in --out.")
     boolean resume;
@@ -179,6 +196,9 @@ final class RunCommand implements Callable<Integer> {
     /** A scenario given by the caller instead of a file (the built-in demo). */
     Scenario preloaded;
 
+    /** The summary of the sweep, once {@link #call} has run it (for the demo's closing words). */
+    RunSummary summary;
+
     @Override
     public Integer call() {
         Scenario scenario = loadScenario();
@@ -191,12 +211,13 @@ final class RunCommand implements Callable<Integer> {
         } catch (InvalidInputException e) {
             throw locate(e, scenario);
         }
-        if (!plan.link().code().isOrthogonal() && !plan.quiet()) {
-            spec.commandLine().getErr().println("fadebench run: warning: code " + plan.link().code().name()
-                    + " is not orthogonal; " + plan.link().decoder().cliName()
-                    + " linear decoding is not maximum-likelihood, so expect a loss against ML decoding");
+        if (!plan.quiet()) {
+            plan.warnings().forEach(w -> spec.commandLine().getErr().println("fadebench run: warning: " + w));
         }
-        return new SweepJob(plan, spec.commandLine().getOut()).run();
+        SweepJob job = new SweepJob(plan, spec.commandLine().getOut());
+        int code = job.run();
+        summary = job.summary();
+        return code;
     }
 
     private Scenario loadScenario() {
@@ -311,10 +332,23 @@ final class RunCommand implements Callable<Integer> {
             }
             archivePath = Path.of(archive);
         }
+        FerPlot.XQuantity x = parse("--plot-x", () -> FerPlot.XQuantity.fromCliName(plotX));
+        FerPlot.Axes axes = parse(null, () -> new FerPlot.Axes(x, plotFloor == null ? Double.NaN : plotFloor));
         String effective = effectiveScenario(scenario);
         return new RunPlan(link, snr.trim(), snrDb, rules, seed, nThreads, confidence, SweepJob.checkOutDir(out),
                 archivePath, resume, quiet, scenario, bounds, targetFer, traceOut, traceOutBlocks,
-                effective);
+                effective, axes, warnings(link));
+    }
+
+    /** What the user should know before trusting the results: a decoder that is not ML, CSI that is meaningless. */
+    private static List<String> warnings(LinkSettings link) {
+        List<String> w = new ArrayList<>();
+        if (!link.code().isOrthogonal()) {
+            w.add("code " + link.code().name() + " is not orthogonal; " + link.decoder().cliName()
+                    + " linear decoding is not maximum-likelihood, so expect a loss against ML decoding");
+        }
+        CsiAgeing.warning(link).ifPresent(w::add);
+        return List.copyOf(w);
     }
 
     /**
@@ -431,6 +465,14 @@ final class RunCommand implements Callable<Integer> {
                 : coded ? Interleaving.RANDOM : Interleaving.NONE;
         LlrMethod method = parse("--llr", () -> LlrMethod.fromCliName(llr));
         return parse(null, () -> new FrameCoding(new FecScheme(c, code), il, interleaverRows, method));
+    }
+
+    /** The fading models' names, for the help text. */
+    static final class FadingNames implements Iterable<String> {
+        @Override
+        public java.util.Iterator<String> iterator() {
+            return java.util.Arrays.stream(Fading.values()).map(Fading::cliName).iterator();
+        }
     }
 
     /** Runs a parser; its IllegalArgumentException becomes invalid input, prefixed with the option. */

@@ -3,9 +3,11 @@ package org.fadebench.bench.cli;
 import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import org.fadebench.bench.analysis.BoundSettings;
 import org.fadebench.bench.link.LinkSettings;
+import org.fadebench.bench.report.FerPlot;
 import org.fadebench.bench.scenario.Scenario;
 import org.fadebench.bench.sweep.StopRules;
 import org.fadebench.coding.stbc.SpaceTimeCodeFile;
@@ -18,11 +20,13 @@ import org.fadebench.coding.stbc.SpaceTimeCodeFile;
  * @param bounds   the outage bounds to compare with, or null when they do not apply to the code
  * @param traceOut where to write the channels of the first point's fading blocks, or null
  * @param scenarioText the run's settings as a scenario file (written beside the results)
+ * @param plotAxes the plot's x quantity and y-axis floor
+ * @param warnings what the user should know before trusting the results (printed, and kept in results.json)
  */
 record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rules, long seed, int threads,
                double confidence, Path outDir, Path archive, boolean resume, boolean quiet, Scenario scenario,
                BoundSettings bounds, double targetFer, Path traceOut, int traceOutBlocks,
-               String scenarioText) {
+               String scenarioText, FerPlot.Axes plotAxes, List<String> warnings) {
 
     /** The settings as results.json records them (option names without dashes). */
     Map<String, Object> settings() {
@@ -54,6 +58,8 @@ record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rule
         m.put("outage_draws", bounds == null ? null : bounds.mimoDraws());
         m.put("seed", seed);
         m.put("threads", threads);
+        m.put("plot_x", plotAxes.x().cliName());
+        m.put("plot_floor", Double.isNaN(plotAxes.floor()) ? null : plotAxes.floor());
         m.put("out", outDir.toString());
         m.put("archive", archive == null ? null : archive.toString());
         m.put("scenario", scenario == null ? null : scenario.source());

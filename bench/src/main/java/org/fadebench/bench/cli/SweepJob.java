@@ -37,6 +37,8 @@ final class SweepJob {
 
     private final RunPlan plan;
     private final PrintWriter out;
+    /** The summary of the finished sweep, once {@link #run} has written the outputs. */
+    private RunSummary summary;
 
     SweepJob(RunPlan plan, PrintWriter out) {
         this.plan = plan;
@@ -77,6 +79,9 @@ final class SweepJob {
             out.println("link: " + link.describe());
             out.println("SNR convention: " + ResultsCsv.SNR_CONVENTION + "; Eb/N0 = SNR / "
                     + Numbers.db(link.bitsPerChannelUse()) + " information bits per channel use");
+            if (link.channel().pilots() > 0) {
+                out.println(ResultsCsv.pilotLine(link));
+            }
             out.println(String.format(Locale.ROOT, "stop: %s frame errors or %d frames per point%s; seed %d; %d thread%s",
                     plan.rules().minErrors() == 0 ? "no minimum of" : Long.toString(plan.rules().minErrors()),
                     plan.rules().maxFrames(),
@@ -161,7 +166,7 @@ final class SweepJob {
         BoundCurves curves = boundsApply() && !results.isEmpty()
                 ? BoundCurves.compute(plan.bounds(), results.stream().mapToDouble(PointResult::snrDb).toArray())
                 : null;
-        RunSummary summary = RunSummary.of(outcome.complete(), curves, plan.targetFer());
+        summary = RunSummary.of(outcome.complete(), curves, plan.targetFer());
         if (!plan.quiet()) {
             summary.lines().forEach(out::println);
         }
@@ -173,11 +178,13 @@ final class SweepJob {
             Path json = dir.resolve("results.json");
             double seconds = outcome.nanos() * 1e-9;
             ResultsJson.Run run = new ResultsJson.Run(plan.settings(), plan.link(), plan.seed(), outcome.results(),
-                    !interrupted, outcome.stopReason(), outcome.framesSimulated(), seconds, plan.threads(), summary);
+                    !interrupted, outcome.stopReason(), outcome.framesSimulated(), seconds, plan.threads(), summary,
+                    plan.warnings());
             ResultsJson.write(json, run);
             written.add(json);
             if (!results.isEmpty()) {
-                FerPlot.write(dir, plan.link(), results, plan.confidence(), curves);
+                FerPlot.write(dir, plan.link(), plan.seed(), results, plan.confidence(), curves, plan.targetFer(),
+                        plan.plotAxes());
                 written.add(dir.resolve(FerPlot.PNG_FILE));
                 written.add(dir.resolve(FerPlot.SVG_FILE));
             }
@@ -216,6 +223,11 @@ final class SweepJob {
         }
         out.flush();
         return interrupted ? INTERRUPTED : ExitCodes.OK;
+    }
+
+    /** The summary of the sweep {@link #run} finished, or null before. */
+    RunSummary summary() {
+        return summary;
     }
 
     /** The outage bounds need an orthogonal code and a channel constant over each block (see BoundOptions). */

@@ -148,6 +148,19 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
         return (double) frameBits / slotsPerFrame();
     }
 
+    /**
+     * The share of slots spent on pilots ({@code --pilots}, N per fading block), 0 without: pilots
+     * are not counted in the SNR or in {@link #bitsPerChannelUse}, only reported as this overhead.
+     */
+    public double pilotOverhead() {
+        return channel.pilotOverhead(slotsPerFrame(), fadingBlocksPerFrame());
+    }
+
+    /** Information bits per channel use with the pilot slots counted: R·(1 − pilot overhead). */
+    public double netBitsPerChannelUse() {
+        return bitsPerChannelUse() * (1.0 - pilotOverhead());
+    }
+
     /** Eb/N0 in dB at a given SNR in dB: Eb/N0 = SNR / R. */
     public double ebN0Db(double snrDb) {
         return snrDb - 10.0 * Math.log10(bitsPerChannelUse());
@@ -160,7 +173,7 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
                 : effectiveCoherenceSlots() + " slots per fading block (" + fadingBlocksPerFrame() + " per frame)";
         String dec = code.isOrthogonal() ? "" : ", " + decoder.cliName() + " decoder";
         String fec = coding.coded() ? ", " + coding.describe() : "";
-        return String.format(java.util.Locale.ROOT, "%s %dx%d, %s, %s fading, %d bits/frame (%d symbols, %d slots), %s%s%s",
+        return String.format(java.util.Locale.ROOT, "%s %dx%d, %s, %s, %d bits/frame (%d symbols, %d slots), %s%s%s",
                 code.name(), transmitAntennas, receiveAntennas, modulation.cliName(), channel.describe(),
                 frameBits, symbolsPerFrame(), slotsPerFrame(), coherence, dec, fec);
     }

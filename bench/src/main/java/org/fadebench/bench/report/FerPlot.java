@@ -5,6 +5,7 @@ import java.awt.Color;
 import java.awt.Font;
 import java.awt.Shape;
 import java.awt.Stroke;
+import java.awt.font.FontRenderContext;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
@@ -14,8 +15,10 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.text.DecimalFormat;
 import java.text.DecimalFormatSymbols;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.DoubleUnaryOperator;
 import org.fadebench.bench.analysis.Bound;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundPoint;
@@ -33,8 +36,9 @@ import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.axis.NumberTickUnit;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
-import org.jfree.chart.block.GridArrangement;
+import org.jfree.chart.plot.CombinedDomainXYPlot;
 import org.jfree.chart.plot.SeriesRenderingOrder;
+import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.DeviationRenderer;
 import org.jfree.chart.renderer.xy.XYErrorRenderer;
@@ -42,8 +46,11 @@ import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.text.TextUtils;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.title.TextTitle;
+import org.jfree.chart.ui.Layer;
+import org.jfree.chart.ui.RectangleAnchor;
 import org.jfree.chart.ui.RectangleEdge;
 import org.jfree.chart.ui.RectangleInsets;
+import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.jfree.data.xy.YIntervalSeries;
@@ -51,40 +58,57 @@ import org.jfree.data.xy.YIntervalSeriesCollection;
 import org.jfree.svg.SVGGraphics2D;
 
 /**
- * Writes {@code fer.png} and {@code fer.svg}: simulated FER and BER against SNR on a logarithmic
- * axis, each point with a bar over its confidence interval, and the three outage bounds as lines.
+ * Writes {@code fer.png} and {@code fer.svg}: two panels over a shared x axis (SNR or Eb/N0, see
+ * {@link Axes}). The upper panel holds the simulated FER with a bar over each point's confidence
+ * interval, the outage bounds as lines and the target FER as a thin grey line; the lower panel holds
+ * the simulated BER on its own axis, so that a BER below an outage bound never reads as a link that
+ * beats the bound (the bounds are limits on the frame error rate).
+ *
+ * <p>The title names the link, and the lines under it everything else that defines the run, in the
+ * words of the terminal's {@code link:} line ({@link LinkSettings#describe}) and the seed, wrapped
+ * between list items, never inside a word.
  *
  * <p>Look: white background, faint decade grid, colours from the Okabe–Ito colour-blind-safe set
  * (M. Okabe and K. Ito, "Color Universal Design (CUD): how to make figures and presentations that
  * are friendly to colorblind people", 2008; from memory). Simulated curves are solid with markers
- * (FER blue circles, BER vermillion squares); bounds have no markers and each its own dash (MIMO
- * black long dashes, STBC bluish-green dash-dots, QAM reddish-purple short dashes), so the chart
- * also reads in grey. A Monte Carlo MIMO bound carries a light band over its 95 % interval.
+ * (FER blue circles, BER vermillion squares); bounds are broken lines without markers, each its own
+ * pattern (MIMO black long dashes, STBC bluish-green dash-dots, QAM reddish-purple short dashes), so
+ * the chart also reads in grey; a subtitle says so in words. A Monte Carlo MIMO bound carries a
+ * light band over its 95 % interval.
  *
  * <p>A point with no errors has an error rate of 0, which a log axis cannot show. It is drawn as
  * an open downward triangle at the upper end of its interval, the largest rate the run leaves
  * plausible, and is left out of the connecting line. Bound values of 0 (Monte Carlo with no outage)
- * are left out likewise. The y axis spans whole decades from below the lowest simulated value to 1,
- * with a small margin.
+ * are left out likewise. Each y axis spans whole decades from below the lowest simulated value of its
+ * panel to 1, with a small margin, unless {@link Axes#floor} fixes its lower end (so that two runs can
+ * be laid side by side).
  */
 public final class FerPlot {
 
     public static final String PNG_FILE = "fer.png";
     public static final String SVG_FILE = "fer.svg";
     public static final int WIDTH = 1000;
-    public static final int HEIGHT = 700;
+    public static final int HEIGHT = 900;
 
-    static final String X_AXIS_TITLE = "SNR (dB): total transmit energy per channel use / N0 per receive antenna";
-    static final String Y_AXIS_TITLE = "Error rate, outage probability";
+    static final String SNR_AXIS_TITLE = "SNR (dB): total transmit energy per channel use / N0 per receive antenna";
+    static final String FER_AXIS_TITLE = "FER, outage probability";
+    static final String BER_AXIS_TITLE = "BER (not comparable with outage)";
+    static final String STYLE_WORDS = "simulated: solid lines with markers   ·   outage bounds: broken lines"
+            + "   ·   grey line: target FER";
 
     private static final Color BLUE = new Color(0x0072B2);
     private static final Color VERMILLION = new Color(0xD55E00);
     private static final Color BLACK = new Color(0x000000);
     private static final Color BLUISH_GREEN = new Color(0x009E73);
     private static final Color REDDISH_PURPLE = new Color(0xCC79A7);
+    private static final Color TARGET_GREY = new Color(0x777777);
     private static final Color GRID = new Color(0xD9D9D9);
     private static final Color MINOR_GRID = new Color(0xF0F0F0);
     private static final String FONT = Font.SANS_SERIF;
+    private static final Font TITLE_FONT = new Font(FONT, Font.BOLD, 21);
+    private static final Font RUN_FONT = new Font(FONT, Font.PLAIN, 14);
+    /** Widest line of the title and the run lines, in pixels: the chart less its padding and a margin. */
+    private static final double TEXT_WIDTH = WIDTH - 80;
     /** The y axis reaches this factor beyond 1 and below its lowest decade. */
     private static final double MARGIN = 1.6;
 
@@ -96,6 +120,56 @@ public final class FerPlot {
         TextUtils.setUseDrawRotatedStringWorkaround(false);
     }
 
+    /** The quantity on the x axis. */
+    public enum XQuantity {
+        SNR("snr"), EBN0("ebn0");
+
+        private final String cliName;
+
+        XQuantity(String cliName) {
+            this.cliName = cliName;
+        }
+
+        public String cliName() {
+            return cliName;
+        }
+
+        /** The quantity named {@code name} ({@code snr} or {@code ebn0}). */
+        public static XQuantity fromCliName(String name) {
+            for (XQuantity q : values()) {
+                if (q.cliName.equals(name.trim().toLowerCase(Locale.ROOT))) {
+                    return q;
+                }
+            }
+            throw new IllegalArgumentException("unknown x axis '" + name + "'; valid: snr, ebn0");
+        }
+    }
+
+    /**
+     * The axes' layout.
+     *
+     * @param x     SNR or Eb/N0 on the x axis
+     * @param floor the fixed lower end of both y axes, in (0, 1), or NaN to fit each panel's values
+     */
+    public record Axes(XQuantity x, double floor) {
+        /** SNR on the x axis, y axes fitted to the values. */
+        public static final Axes AUTOMATIC = new Axes(XQuantity.SNR, Double.NaN);
+
+        public Axes {
+            if (x == null) {
+                throw new IllegalArgumentException("--plot-x must be snr or ebn0");
+            }
+            if (!Double.isNaN(floor) && !(floor > 0.0 && floor < 1.0)) {
+                throw new IllegalArgumentException("--plot-floor must lie strictly between 0 and 1 (e.g. 1e-6), got "
+                        + floor);
+            }
+        }
+
+        boolean fixedFloor() {
+            return !Double.isNaN(floor);
+        }
+    }
+
     private FerPlot() {
     }
 
@@ -103,12 +177,14 @@ public final class FerPlot {
      * Writes {@value #PNG_FILE} ({@value #WIDTH} x {@value #HEIGHT} pixels) and {@value #SVG_FILE}
      * into {@code directory}, each atomically.
      *
+     * @param seed       the run's master seed, named under the title
      * @param confidence the level of the points' intervals, for the subtitle (e.g. 0.95)
      * @param bounds     the outage bounds to draw, or null when they do not apply to the channel
+     * @param targetFer  the FER drawn as a line across the FER panel
      */
-    public static void write(Path directory, LinkSettings link, List<PointResult> points, double confidence,
-                             BoundCurves bounds) throws IOException {
-        JFreeChart chart = chart(link, points, confidence, bounds);
+    public static void write(Path directory, LinkSettings link, long seed, List<PointResult> points, double confidence,
+                             BoundCurves bounds, double targetFer, Axes axes) throws IOException {
+        JFreeChart chart = chart(link, seed, points, confidence, bounds, targetFer, axes);
         AtomicFiles.write(directory.resolve(PNG_FILE), out -> ChartUtils.writeChartAsPNG(out, chart, WIDTH, HEIGHT));
         SVGGraphics2D svg = new SVGGraphics2D(WIDTH, HEIGHT);
         svg.setDefsKeyPrefix("fer-"); // fixed ids, so the same results give the same file
@@ -118,12 +194,70 @@ public final class FerPlot {
     }
 
     /** The chart, for callers that draw it elsewhere. */
-    public static JFreeChart chart(LinkSettings link, List<PointResult> points, double confidence,
-                                   BoundCurves bounds) {
+    public static JFreeChart chart(LinkSettings link, long seed, List<PointResult> points, double confidence,
+                                   BoundCurves bounds, double targetFer, Axes axes) {
         if (!(confidence > 0.0 && confidence < 1.0)) {
             throw new IllegalArgumentException("confidence level must be in (0, 1), e.g. 0.95, got " + confidence);
         }
-        double floor = axisLowerBound(points);
+        if (!(targetFer > 0.0 && targetFer < 1.0)) {
+            throw new IllegalArgumentException("target FER must be in (0, 1), e.g. 0.01, got " + targetFer);
+        }
+        DoubleUnaryOperator x = axes.x() == XQuantity.EBN0 ? link::ebN0Db : snrDb -> snrDb;
+        double ferFloor = axes.fixedFloor() ? axes.floor() : axisLowerBound(points, Measure.FER);
+        double berFloor = axes.fixedFloor() ? axes.floor() : axisLowerBound(points, Measure.BER);
+        XYPlot fer = panel(FER_AXIS_TITLE, ferFloor);
+        addSimulated(fer, points, Measure.FER, x, ferFloor);
+        if (bounds != null) {
+            addBounds(fer, link, bounds, ferFloor, x);
+        }
+        fer.addRangeMarker(targetLine(targetFer), Layer.BACKGROUND);
+        XYPlot ber = panel(BER_AXIS_TITLE, berFloor);
+        addSimulated(ber, points, Measure.BER, x, berFloor);
+
+        CombinedDomainXYPlot plot = new CombinedDomainXYPlot(xAxis(link, axes.x()));
+        plot.setGap(16.0);
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setOutlineVisible(false);
+        plot.add(fer, 3);
+        plot.add(ber, 2);
+
+        List<String> titleLines = wrap(title(link), TITLE_FONT);
+        JFreeChart chart = new JFreeChart(titleLines.get(0), TITLE_FONT, plot, false);
+        chart.setBackgroundPaint(Color.WHITE);
+        chart.setPadding(new RectangleInsets(8, 8, 12, 20));
+        for (String line : titleLines.subList(1, titleLines.size())) {
+            chart.addSubtitle(textLine(line, TITLE_FONT, Color.BLACK, 0));
+        }
+        List<String> runLines = wrap(runLine(link, seed), RUN_FONT);
+        for (int i = 0; i < runLines.size(); i++) {
+            chart.addSubtitle(textLine(runLines.get(i), RUN_FONT, new Color(0x222222), i == 0 ? 4 : 0));
+        }
+        String sub = bounds != null ? subtitle(bounds.settings(), confidence)
+                : String.format(Locale.ROOT, "bars: %s %% confidence intervals   ·   no outage bounds for this channel",
+                        Numbers.db(100 * confidence));
+        chart.addSubtitle(textLine(sub, RUN_FONT, new Color(0x444444), 6));
+        chart.addSubtitle(textLine(STYLE_WORDS, RUN_FONT, new Color(0x444444), 0));
+        // items flow in rows as their widths allow, so a long label never runs into its neighbour
+        LegendTitle legend = new LegendTitle(plot);
+        legend.setPosition(RectangleEdge.BOTTOM);
+        legend.setItemFont(new Font(FONT, Font.PLAIN, 14));
+        legend.setFrame(BlockBorder.NONE);
+        legend.setMargin(new RectangleInsets(12, 0, 0, 0));
+        legend.setItemLabelPadding(new RectangleInsets(3, 4, 3, 14));
+        chart.addSubtitle(legend);
+        return chart;
+    }
+
+    /** A centred line of text under the title; {@code above}: space above it in pixels. */
+    private static TextTitle textLine(String text, Font font, Color colour, double above) {
+        TextTitle t = new TextTitle(text, font);
+        t.setPaint(colour);
+        t.setPadding(new RectangleInsets(above, 0, 2, 0));
+        return t;
+    }
+
+    /** One panel: white, faint decade grid, a logarithmic y axis from {@code floor} to just above 1. */
+    private static XYPlot panel(String yTitle, double floor) {
         XYPlot plot = new XYPlot();
         plot.setBackgroundPaint(Color.WHITE);
         plot.setOutlinePaint(GRID);
@@ -136,36 +270,31 @@ public final class FerPlot {
         plot.setRangeMinorGridlineStroke(new BasicStroke(1f));
         plot.setAxisOffset(RectangleInsets.ZERO_INSETS);
         plot.setSeriesRenderingOrder(SeriesRenderingOrder.FORWARD);
-        plot.setDomainAxis(snrAxis());
-        plot.setRangeAxis(rateAxis(floor));
-        addSimulated(plot, points, floor);
-        if (bounds != null) {
-            addBounds(plot, link, bounds, floor);
-        }
-
-        JFreeChart chart = new JFreeChart(title(link), new Font(FONT, Font.BOLD, 21), plot, false);
-        chart.setBackgroundPaint(Color.WHITE);
-        chart.setPadding(new RectangleInsets(8, 8, 12, 20));
-        String sub = bounds != null ? subtitle(bounds.settings(), confidence)
-                : String.format(Locale.ROOT, "bars: %s %% confidence intervals   ·   no outage bounds for this channel",
-                        new java.math.BigDecimal(String.valueOf(100 * confidence)).stripTrailingZeros().toPlainString());
-        TextTitle subtitle = new TextTitle(sub, new Font(FONT, Font.PLAIN, 14));
-        subtitle.setPaint(new Color(0x444444));
-        subtitle.setPadding(new RectangleInsets(2, 0, 10, 0));
-        chart.addSubtitle(subtitle);
-        int rows = (plot.getLegendItems().getItemCount() + 1) / 2;
-        LegendTitle legend = new LegendTitle(plot, new GridArrangement(rows, 2), new GridArrangement(rows, 2));
-        legend.setPosition(RectangleEdge.BOTTOM);
-        legend.setItemFont(new Font(FONT, Font.PLAIN, 14));
-        legend.setFrame(BlockBorder.NONE);
-        legend.setMargin(new RectangleInsets(12, 0, 0, 0));
-        legend.setItemLabelPadding(new RectangleInsets(3, 4, 3, 14));
-        chart.addSubtitle(legend);
-        return chart;
+        plot.setRangeAxis(rateAxis(yTitle, floor));
+        return plot;
     }
 
-    private static NumberAxis snrAxis() {
-        NumberAxis x = new NumberAxis(X_AXIS_TITLE);
+    /** The target FER: a thin solid grey line (no bound is solid, no simulated curve is grey), labelled. */
+    private static ValueMarker targetLine(double targetFer) {
+        ValueMarker m = new ValueMarker(targetFer, TARGET_GREY, new BasicStroke(1.4f));
+        m.setLabel("target FER " + targetFer);
+        m.setLabelFont(new Font(FONT, Font.PLAIN, 13));
+        m.setLabelPaint(TARGET_GREY);
+        m.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+        m.setLabelAnchor(RectangleAnchor.BOTTOM_LEFT);
+        m.setLabelTextAnchor(TextAnchor.TOP_LEFT);
+        m.setLabelOffset(new RectangleInsets(4, 6, 4, 6));
+        return m;
+    }
+
+    static String xAxisTitle(LinkSettings link, XQuantity x) {
+        return x == XQuantity.SNR ? SNR_AXIS_TITLE
+                : "Eb/N0 (dB) = SNR − 10·log10(R), R = " + Numbers.db(link.bitsPerChannelUse())
+                        + " information bits per channel use";
+    }
+
+    private static NumberAxis xAxis(LinkSettings link, XQuantity quantity) {
+        NumberAxis x = new NumberAxis(xAxisTitle(link, quantity));
         x.setAutoRangeIncludesZero(false);
         x.setAutoRangeStickyZero(false);
         x.setLowerMargin(0.03);
@@ -175,8 +304,8 @@ public final class FerPlot {
     }
 
     /** Logarithmic, from {@code floor} to just above 1, labelled 10⁰, 10⁻¹, … with a minor tick per unit. */
-    private static LogAxis rateAxis(double floor) {
-        LogAxis y = new LogAxis(Y_AXIS_TITLE);
+    private static LogAxis rateAxis(String title, double floor) {
+        LogAxis y = new LogAxis(title);
         y.setBase(10.0);
         y.setBaseSymbol("10");
         y.setSmallestValue(1e-300);
@@ -192,21 +321,32 @@ public final class FerPlot {
         return y;
     }
 
-    /** Dataset 0: FER and BER with interval bars; dataset 1: upper-limit markers of points without errors. */
-    private static void addSimulated(XYPlot plot, List<PointResult> points, double floor) {
-        YIntervalSeries fer = new YIntervalSeries("FER, simulated");
-        YIntervalSeries ber = new YIntervalSeries("BER, simulated");
-        XYSeries ferLimit = new XYSeries("FER upper limit (no frame error seen)", false);
-        XYSeries berLimit = new XYSeries("BER upper limit (no bit error seen)", false);
+    /** What a panel of simulated values shows. */
+    private enum Measure { FER, BER }
+
+    /**
+     * Dataset 0: the simulated FER or BER with interval bars; dataset 1: upper-limit markers of points
+     * without errors.
+     */
+    private static void addSimulated(XYPlot plot, List<PointResult> points, Measure m, DoubleUnaryOperator x,
+                                     double floor) {
+        boolean isFer = m == Measure.FER;
+        YIntervalSeries rate = new YIntervalSeries(isFer ? "FER, simulated" : "BER, simulated");
+        XYSeries limit = new XYSeries(isFer ? "FER upper limit (no frame error seen)"
+                : "BER upper limit (no bit error seen)", false);
         for (PointResult p : points) {
+            double at = x.applyAsDouble(p.snrDb());
             if (p.counts().frameErrors() > 0) {
-                fer.add(p.snrDb(), p.counts().fer(), Math.max(p.ferLow(), floor), p.ferHigh());
-                ber.add(p.snrDb(), p.counts().ber(), Math.max(p.berLow(), floor), p.berHigh());
+                if (isFer) {
+                    rate.add(at, p.counts().fer(), Math.max(p.ferLow(), floor), p.ferHigh());
+                } else {
+                    rate.add(at, p.counts().ber(), Math.max(p.berLow(), floor), p.berHigh());
+                }
             } else if (p.counts().frames() > 0) {
-                ferLimit.add(p.snrDb(), p.ferHigh());
-                berLimit.add(p.snrDb(), p.berHigh());
+                limit.add(at, isFer ? p.ferHigh() : p.berHigh());
             }
         }
+        Color colour = isFer ? BLUE : VERMILLION;
         YIntervalSeriesCollection simulated = new YIntervalSeriesCollection();
         XYErrorRenderer renderer = new XYErrorRenderer();
         renderer.setDefaultLinesVisible(true);
@@ -214,8 +354,7 @@ public final class FerPlot {
         renderer.setDrawXError(false);
         renderer.setCapLength(7.0);
         renderer.setErrorStroke(new BasicStroke(1.5f));
-        addSeries(simulated, renderer, fer, BLUE, new BasicStroke(2.4f), circle(9));
-        addSeries(simulated, renderer, ber, VERMILLION, new BasicStroke(2.4f), square(8));
+        addSeries(simulated, renderer, rate, colour, new BasicStroke(2.4f), isFer ? circle(9) : square(8));
         plot.setDataset(0, simulated);
         plot.setRenderer(0, renderer);
 
@@ -224,22 +363,19 @@ public final class FerPlot {
         limitRenderer.setUseFillPaint(true);
         limitRenderer.setDefaultFillPaint(Color.WHITE);
         limitRenderer.setUseOutlinePaint(false);
-        for (XYSeries limit : List.of(ferLimit, berLimit)) {
-            if (limit.getItemCount() > 0) {
-                // A point without errors usually has the same limit for both: BER's smaller triangle sits inside.
-                int i = limits.getSeriesCount();
-                limits.addSeries(limit);
-                limitRenderer.setSeriesPaint(i, limit == ferLimit ? BLUE : VERMILLION);
-                limitRenderer.setSeriesShape(i, downTriangle(limit == ferLimit ? 14 : 8));
-                limitRenderer.setSeriesOutlineStroke(i, new BasicStroke(1.8f));
-            }
+        if (limit.getItemCount() > 0) {
+            limits.addSeries(limit);
+            limitRenderer.setSeriesPaint(0, colour);
+            limitRenderer.setSeriesShape(0, downTriangle(12));
+            limitRenderer.setSeriesOutlineStroke(0, new BasicStroke(1.8f));
         }
         plot.setDataset(1, limits);
         plot.setRenderer(1, limitRenderer);
     }
 
     /** Dataset 2: the three bounds as dashed lines; the Monte Carlo MIMO bound with a band over its interval. */
-    private static void addBounds(XYPlot plot, LinkSettings link, BoundCurves bounds, double floor) {
+    private static void addBounds(XYPlot plot, LinkSettings link, BoundCurves bounds, double floor,
+                                  DoubleUnaryOperator x) {
         YIntervalSeriesCollection outage = new YIntervalSeriesCollection();
         DeviationRenderer renderer = new DeviationRenderer(true, false);
         renderer.setAlpha(0.18f);
@@ -250,7 +386,7 @@ public final class FerPlot {
                 double v = p.value(b);
                 if (v > 0.0) {
                     boolean band = b == Bound.MIMO && !p.mimoExact();
-                    series.add(p.snrDb(), v, band ? Math.max(p.mimoLow(), floor) : v, band ? p.mimoHigh() : v);
+                    series.add(x.applyAsDouble(p.snrDb()), v, band ? Math.max(p.mimoLow(), floor) : v, band ? p.mimoHigh() : v);
                 }
             }
             addSeries(outage, renderer, series, boundColour(b), boundStroke(b), null);
@@ -259,7 +395,7 @@ public final class FerPlot {
         plot.setRenderer(2, renderer);
     }
 
-    /** E.g. "Alamouti 2×2, 16QAM, Rayleigh fading" or "1×2, BPSK, Rayleigh fading, no space-time code". */
+    /** E.g. "Alamouti 2×2, QPSK, Rayleigh fading" or "1×2, BPSK, Rayleigh fading, no space-time code". */
     static String title(LinkSettings link) {
         String antennasAndSignal = String.format(Locale.ROOT, "%d×%d, %s, %s fading", link.transmitAntennas(),
                 link.receiveAntennas(), link.modulation(), capitalised(link.fading().cliName()));
@@ -273,10 +409,47 @@ public final class FerPlot {
         return title;
     }
 
+    /**
+     * Everything that defines the run, as the terminal's {@code link:} line says it (fading model and
+     * its parameters, CSI, frame length, fading blocks, channel code, CRC, interleaver, LLRs), and the seed.
+     */
+    static String runLine(LinkSettings link, long seed) {
+        return "Run: " + link.describe() + ", seed " + seed;
+    }
+
+    /**
+     * {@code text} in lines no wider than the chart, broken only after the ", " or "; " between list
+     * items, never inside a word (an item wider than the chart keeps a line of its own).
+     */
+    static List<String> wrap(String text, Font font) {
+        FontRenderContext frc = new FontRenderContext(null, true, true);
+        List<String> items = new ArrayList<>();
+        int from = 0;
+        for (int i = 0; i < text.length() - 1; i++) {
+            char c = text.charAt(i);
+            if ((c == ',' || c == ';') && text.charAt(i + 1) == ' ') {
+                items.add(text.substring(from, i + 2));
+                from = i + 2;
+            }
+        }
+        items.add(text.substring(from));
+        List<String> lines = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String item : items) {
+            String longer = line + item;
+            if (line.length() > 0 && font.getStringBounds(longer.strip(), frc).getWidth() > TEXT_WIDTH) {
+                lines.add(line.toString().strip());
+                line.setLength(0);
+            }
+            line.append(item);
+        }
+        lines.add(line.toString().strip());
+        return lines;
+    }
+
     private static String subtitle(BoundSettings s, double confidence) {
-        return String.format(Locale.ROOT, "R = %s bits per channel use   ·   bars: %s %% confidence intervals"
-                        + "   ·   dashed: outage bounds at the same R",
-                Numbers.db(s.spectralEfficiency()), Numbers.db(100 * confidence));
+        return String.format(Locale.ROOT, "bars: %s %% confidence intervals   ·   outage bounds at R = %s bits per"
+                        + " channel use", Numbers.db(100 * confidence), Numbers.db(s.spectralEfficiency()));
     }
 
     static String boundLabel(Bound b, LinkSettings link, BoundSettings s) {
@@ -342,19 +515,18 @@ public final class FerPlot {
     }
 
     /**
-     * The decade at or below the lowest simulated value (BER, FER, or the upper limit of a point
-     * without errors), at most 1e-2, or 1e-6 when nothing was simulated; less a margin so that
+     * The decade at or below the lowest simulated value of the panel (the rate, or the upper limit of
+     * a point without errors), at most 1e-2, or 1e-6 when nothing was simulated; less a margin so that
      * markers on that decade show whole. Interval ends below it, including ends at 0, are drawn from it.
      */
-    private static double axisLowerBound(List<PointResult> points) {
+    private static double axisLowerBound(List<PointResult> points, Measure m) {
         double lowest = Double.POSITIVE_INFINITY;
         for (PointResult p : points) {
             boolean errors = p.counts().frameErrors() > 0;
-            for (double v : errors ? new double[] {p.counts().fer(), p.counts().ber()}
-                    : new double[] {p.ferHigh(), p.berHigh()}) {
-                if (v > 0.0) {
-                    lowest = Math.min(lowest, v);
-                }
+            double v = m == Measure.FER ? (errors ? p.counts().fer() : p.ferHigh())
+                    : (errors ? p.counts().ber() : p.berHigh());
+            if (v > 0.0) {
+                lowest = Math.min(lowest, v);
             }
         }
         double decade = lowest == Double.POSITIVE_INFINITY ? 1e-6

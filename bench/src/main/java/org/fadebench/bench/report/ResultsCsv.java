@@ -3,6 +3,7 @@ package org.fadebench.bench.report;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Locale;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundPoint;
 import org.fadebench.bench.analysis.BoundSettings;
@@ -29,6 +30,16 @@ public final class ResultsCsv {
     private ResultsCsv() {
     }
 
+    /**
+     * The pilots' overhead as the README states it: not charged to the SNR, reported as the share of
+     * slots and the net information bits per channel use. One line, for the terminal and the header.
+     */
+    public static String pilotLine(LinkSettings link) {
+        return "pilots: " + link.channel().pilots() + " slots per fading block, not counted in the SNR or in R;"
+                + String.format(Locale.ROOT, " overhead %.2f %% of the slots, so ", 100 * link.pilotOverhead())
+                + Numbers.db(link.netBitsPerChannelUse()) + " net information bits per channel use";
+    }
+
     /** The file's text. */
     public static String text(LinkSettings link, long seed, double confidence, List<PointResult> results,
                               boolean interrupted, BoundCurves bounds) {
@@ -39,6 +50,9 @@ public final class ResultsCsv {
         w.append("# ").append(SNR_CONVENTION).append('\n');
         w.append("# ebn0_db = snr_db - 10 log10(").append(Numbers.db(link.bitsPerChannelUse()))
                 .append(" information bits per channel use)\n");
+        if (link.channel().pilots() > 0) {
+            w.append("# ").append(pilotLine(link)).append('\n');
+        }
         w.append("# fer_ci_*: two-sided ").append(level).append(" Clopper-Pearson interval over frames; ber_ci_*: ")
                 .append(level).append(" interval with frames as clusters of bits (see README)\n");
         if (bounds != null) {

@@ -27,7 +27,7 @@ public final class ResultsJson {
     /** Everything results.json says about one run. */
     public record Run(Map<String, Object> settings, LinkSettings link, long seed, List<PointResult> results,
                       boolean complete, String stopReason, long framesSimulated, double seconds, int threads,
-                      RunSummary summary) {
+                      RunSummary summary, List<String> warnings) {
 
         /** Data QAM symbols simulated per wall-clock second (speculative batches included). */
         public double symbolsPerSecond() {
@@ -38,8 +38,7 @@ public final class ResultsJson {
     public static ObjectNode tree(Run run) {
         ObjectNode root = JSON.createObjectNode();
         root.put("tool", "fadebench");
-        String version = ResultsJson.class.getPackage().getImplementationVersion();
-        root.put("version", version == null ? "development" : version);
+        root.put("version", ToolVersion.version());
         root.put("java", System.getProperty("java.version"));
         root.put("complete", run.complete());
         if (run.stopReason() == null) {
@@ -53,6 +52,10 @@ public final class ResultsJson {
         root.put("link", run.link().describe());
         root.put("snr_convention", ResultsCsv.SNR_CONVENTION);
         root.put("bits_per_channel_use", run.link().bitsPerChannelUse());
+        root.put("pilot_overhead", run.link().pilotOverhead());
+        root.put("net_bits_per_channel_use", run.link().netBitsPerChannelUse());
+        ArrayNode warnings = root.putArray("warnings");
+        run.warnings().forEach(warnings::add);
         ArrayNode points = root.putArray("points");
         for (PointResult r : run.results()) {
             FrameCounters c = r.counts();

@@ -56,7 +56,9 @@ public final class ScenarioSchema {
             new ScenarioKey("output", "archive", "--archive", Kind.TEXT, ".tar.xz or .tar.gz bundle"),
             new ScenarioKey("output", "quiet", "--quiet", Kind.FLAG, "no table or progress bar"),
             new ScenarioKey("output", "trace_out", "--trace-out", Kind.TEXT, "record the channels drawn"),
-            new ScenarioKey("output", "trace_out_blocks", "--trace-out-blocks", Kind.WHOLE, "most blocks recorded"));
+            new ScenarioKey("output", "trace_out_blocks", "--trace-out-blocks", Kind.WHOLE, "most blocks recorded"),
+            new ScenarioKey("output", "plot_x", "--plot-x", Kind.TEXT, "snr or ebn0"),
+            new ScenarioKey("output", "plot_floor", "--plot-floor", Kind.NUMBER, "lower end of the plot's y axes"));
 
     private ScenarioSchema() {
     }

@@ -1,14 +1,18 @@
 package org.fadebench.bench.report;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.awt.BasicStroke;
+import java.awt.Font;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Collection;
 import java.util.List;
 import java.util.stream.Stream;
 import javax.imageio.ImageIO;
@@ -16,19 +20,34 @@ import javax.xml.parsers.DocumentBuilderFactory;
 import org.fadebench.bench.analysis.Bound;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.BinomialInterval;
 import org.fadebench.bench.sweep.PointResult;
+import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
+import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.Crc;
+import org.fadebench.coding.fec.FecScheme;
+import org.fadebench.coding.fec.Interleaving;
+import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
+import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.LegendItem;
+import org.jfree.chart.LegendItemCollection;
+import org.jfree.chart.plot.CombinedDomainXYPlot;
+import org.jfree.chart.plot.ValueMarker;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.ui.Layer;
 import org.jfree.data.xy.XYDataset;
 import org.jfree.data.xy.YIntervalSeriesCollection;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.w3c.dom.Document;
+import org.w3c.dom.NodeList;
 
 class FerPlotTest {
 
@@ -56,9 +75,28 @@ class FerPlotTest {
         return BoundCurves.compute(BoundSettings.of(LINK).withSpectralEfficiency(1.5).withMimoDraws(5000, 2L), SNR_DB);
     }
 
+    private static final long SEED = 1;
+    private static final double TARGET_FER = 0.01;
+
+    private static JFreeChart chart(List<PointResult> points, FerPlot.Axes axes) {
+        return FerPlot.chart(LINK, SEED, points, 0.95, bounds(), TARGET_FER, axes);
+    }
+
+    private static void write(Path dir, LinkSettings link, FerPlot.Axes axes) throws IOException {
+        FerPlot.write(dir, link, SEED, sweep(), 0.95, bounds(), TARGET_FER, axes);
+    }
+
+    /** The FER panel (upper) and the BER panel (lower). */
+    private static List<XYPlot> panels(JFreeChart chart) {
+        @SuppressWarnings("unchecked")
+        List<XYPlot> panels = ((CombinedDomainXYPlot) chart.getXYPlot()).getSubplots();
+        assertEquals(2, panels.size());
+        return panels;
+    }
+
     @Test
     void writesPngAndSvg(@TempDir Path dir) throws Exception {
-        FerPlot.write(dir, LINK, sweep(), 0.95, bounds());
+        write(dir, LINK, FerPlot.Axes.AUTOMATIC);
 
         BufferedImage png = ImageIO.read(dir.resolve(FerPlot.PNG_FILE).toFile());
         assertEquals(FerPlot.WIDTH, png.getWidth());
@@ -68,10 +106,11 @@ class FerPlotTest {
 
         String text = svgText(dir.resolve(FerPlot.SVG_FILE));
         BoundSettings s = bounds().settings();
-        for (String expected : List.of(FerPlot.title(LINK), FerPlot.X_AXIS_TITLE, FerPlot.Y_AXIS_TITLE,
+        for (String expected : List.of(FerPlot.title(LINK), FerPlot.SNR_AXIS_TITLE, FerPlot.FER_AXIS_TITLE,
+                FerPlot.BER_AXIS_TITLE, FerPlot.STYLE_WORDS, "target FER 0.01",
                 "FER, simulated", "BER, simulated", "FER upper limit (no frame error seen)",
                 FerPlot.boundLabel(Bound.MIMO, LINK, s), FerPlot.boundLabel(Bound.STBC, LINK, s),
-                FerPlot.boundLabel(Bound.QAM, LINK, s), "R = 1.5 bits per channel use")) {
+                FerPlot.boundLabel(Bound.QAM, LINK, s), "outage bounds at R = 1.5 bits per channel use")) {
             assertTrue(text.contains(expected), "SVG lacks '" + expected + "'");
         }
         try (Stream<Path> files = Files.list(dir)) {
@@ -82,8 +121,8 @@ class FerPlotTest {
     /** The same results give byte-identical files. */
     @Test
     void reproducible(@TempDir Path dir) throws IOException {
-        FerPlot.write(dir.resolve("a"), LINK, sweep(), 0.95, bounds());
-        FerPlot.write(dir.resolve("b"), LINK, sweep(), 0.95, bounds());
+        write(dir.resolve("a"), LINK, FerPlot.Axes.AUTOMATIC);
+        write(dir.resolve("b"), LINK, FerPlot.Axes.AUTOMATIC);
         for (String f : List.of(FerPlot.PNG_FILE, FerPlot.SVG_FILE)) {
             assertEquals(-1L, Files.mismatch(dir.resolve("a").resolve(f), dir.resolve("b").resolve(f)), f);
         }
@@ -97,21 +136,114 @@ class FerPlotTest {
     @Test
     void zeroErrorPointIsAnUpperLimit() {
         List<PointResult> points = sweep();
-        JFreeChart chart = FerPlot.chart(LINK, points, 0.95, bounds());
-        YIntervalSeriesCollection sim = (YIntervalSeriesCollection) chart.getXYPlot().getDataset(0);
-        assertEquals("FER, simulated", sim.getSeriesKey(0));
-        assertEquals(4, sim.getItemCount(0));
-        XYDataset limits = chart.getXYPlot().getDataset(1);
+        List<XYPlot> panels = panels(chart(points, FerPlot.Axes.AUTOMATIC));
+        YIntervalSeriesCollection fer = (YIntervalSeriesCollection) panels.get(0).getDataset(0);
+        assertEquals("FER, simulated", fer.getSeriesKey(0));
+        assertEquals(4, fer.getItemCount(0));
+        XYDataset limits = panels.get(0).getDataset(1);
         assertEquals("FER upper limit (no frame error seen)", limits.getSeriesKey(0));
         assertEquals(20.0, limits.getXValue(0, 0));
         double upper = points.get(4).ferHigh();
         assertEquals(upper, limits.getYValue(0, 0));
         assertEquals(3.69 / 20_000, upper, 0.01 / 20_000);
-        double floor = chart.getXYPlot().getRangeAxis().getLowerBound();
-        assertEquals(1e-6 / 1.6, floor, 1e-20, "decade below the smallest value, the BER 3/(128·20000) = 1.2e-6,"
+        assertEquals(1e-4 / 1.6, panels.get(0).getRangeAxis().getLowerBound(), 1e-20,
+                "decade below the smallest FER value, the upper limit 1.8e-4, less the margin");
+        YIntervalSeriesCollection ber = (YIntervalSeriesCollection) panels.get(1).getDataset(0);
+        assertEquals("BER, simulated", ber.getSeriesKey(0));
+        double floor = panels.get(1).getRangeAxis().getLowerBound();
+        assertEquals(1e-6 / 1.6, floor, 1e-20, "decade below the smallest BER, 3/(128·20000) = 1.2e-6,"
                 + " less the margin");
-        for (int i = 0; i < sim.getItemCount(1); i++) {
-            assertTrue(sim.getStartYValue(1, i) >= floor, "BER interval from " + sim.getStartYValue(1, i));
+        for (int i = 0; i < ber.getItemCount(0); i++) {
+            assertTrue(ber.getStartYValue(0, i) >= floor, "BER interval from " + ber.getStartYValue(0, i));
+        }
+    }
+
+    /**
+     * BER has its own panel and axis title: no outage bound shares an axis with it, so a BER below a
+     * bound never reads as a link beating the bound.
+     */
+    @Test
+    void berHasItsOwnPanel() {
+        List<XYPlot> panels = panels(chart(sweep(), FerPlot.Axes.AUTOMATIC));
+        assertEquals(FerPlot.FER_AXIS_TITLE, panels.get(0).getRangeAxis().getLabel());
+        assertEquals(FerPlot.BER_AXIS_TITLE, panels.get(1).getRangeAxis().getLabel());
+        List<String> upper = seriesKeys(panels.get(0));
+        List<String> lower = seriesKeys(panels.get(1));
+        assertTrue(upper.contains("FER, simulated") && upper.stream().anyMatch(k -> k.startsWith("Outage")), upper.toString());
+        assertEquals(List.of("BER, simulated", "BER upper limit (no bit error seen)"), lower,
+                "the BER panel holds the BER alone");
+    }
+
+    /** The target FER is a line across the FER panel, labelled with its value. */
+    @Test
+    void targetFerIsALine() {
+        XYPlot fer = panels(chart(sweep(), FerPlot.Axes.AUTOMATIC)).get(0);
+        Collection<?> markers = fer.getRangeMarkers(Layer.BACKGROUND);
+        assertEquals(1, markers.size());
+        ValueMarker m = (ValueMarker) markers.iterator().next();
+        assertEquals(TARGET_FER, m.getValue());
+        assertEquals("target FER 0.01", m.getLabel());
+        assertEquals(null, ((BasicStroke) m.getStroke()).getDashArray(), "solid, unlike every bound");
+    }
+
+    /**
+     * The subtitle says "simulated: solid lines with markers" and "outage bounds: broken lines": the
+     * legend draws exactly that (the legend items carry the strokes and shapes the renderers use).
+     */
+    @Test
+    void legendStylesMatchTheWords() {
+        JFreeChart chart = chart(sweep(), FerPlot.Axes.AUTOMATIC);
+        assertTrue(FerPlot.STYLE_WORDS.contains("simulated: solid lines with markers"));
+        assertTrue(FerPlot.STYLE_WORDS.contains("outage bounds: broken lines"));
+        LegendItemCollection items = chart.getXYPlot().getLegendItems();
+        int simulated = 0;
+        int bounds = 0;
+        for (int i = 0; i < items.getItemCount(); i++) {
+            LegendItem item = items.get(i);
+            float[] dashes = ((BasicStroke) item.getLineStroke()).getDashArray();
+            if (item.getLabel().endsWith(", simulated")) {
+                simulated++;
+                assertTrue(item.isLineVisible() && dashes == null && item.isShapeVisible(), item.getLabel());
+            } else if (item.getLabel().startsWith("Outage")) {
+                bounds++;
+                assertTrue(item.isLineVisible() && dashes != null && dashes.length >= 2, item.getLabel());
+                assertFalse(item.isShapeVisible(), item.getLabel() + " has no marker");
+            }
+        }
+        assertEquals(2, simulated);
+        assertEquals(3, bounds);
+    }
+
+    /** With --plot-x ebn0 every point and bound sits at Eb/N0 = SNR − 10 log10(R), here R = 2 (QPSK, rate 1). */
+    @Test
+    void ebN0Axis() {
+        List<XYPlot> panels = panels(chart(sweep(), new FerPlot.Axes(FerPlot.XQuantity.EBN0, Double.NaN)));
+        double shift = 10 * Math.log10(2);
+        XYDataset fer = panels.get(0).getDataset(0);
+        for (int i = 0; i < fer.getItemCount(0); i++) {
+            assertEquals(SNR_DB[i] - shift, fer.getXValue(0, i), 1e-12);
+        }
+        XYDataset outage = panels.get(0).getDataset(2);
+        assertEquals(SNR_DB[0] - shift, outage.getXValue(0, 0), 1e-12);
+        String label = panels.get(0).getDomainAxis().getLabel();
+        assertEquals(FerPlot.xAxisTitle(LINK, FerPlot.XQuantity.EBN0), label);
+        assertTrue(label.startsWith("Eb/N0 (dB)") && label.contains("R = 2 information bits"), label);
+        assertEquals(FerPlot.XQuantity.EBN0, FerPlot.XQuantity.fromCliName(" EbN0 "));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> FerPlot.XQuantity.fromCliName("esn0"));
+        assertEquals("unknown x axis 'esn0'; valid: snr, ebn0", e.getMessage());
+    }
+
+    /** A fixed floor puts both panels' y axes on the same lower end, whatever the values. */
+    @Test
+    void fixedFloor() {
+        List<XYPlot> panels = panels(chart(sweep(), new FerPlot.Axes(FerPlot.XQuantity.SNR, 1e-7)));
+        assertEquals(1e-7, panels.get(0).getRangeAxis().getLowerBound(), 1e-22);
+        assertEquals(1e-7, panels.get(1).getRangeAxis().getLowerBound(), 1e-22);
+        for (double bad : new double[] {0, 1, -1e-6, Double.POSITIVE_INFINITY}) {
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                    () -> new FerPlot.Axes(FerPlot.XQuantity.SNR, bad));
+            assertTrue(e.getMessage().startsWith("--plot-floor must lie strictly between 0 and 1"), e.getMessage());
         }
     }
 
@@ -122,11 +254,53 @@ class FerPlotTest {
                 SpaceTimeCodes.NONE, 1, 3, Fading.RAYLEIGH, 128, 0)));
     }
 
+    /**
+     * The lines under the title name everything that defines the run (fading model and parameters,
+     * correlation, Doppler, CSI, frame length, fading blocks, channel code, CRC, seed), and are
+     * wrapped only between list items: every line but the last ends with the item's comma, and the
+     * lines put together give the whole text back.
+     */
+    @Test
+    void runLinesNameEverythingAndWrapBetweenItems(@TempDir Path dir) throws Exception {
+        ChannelSpec channel = ChannelSpec.of(Fading.RICIAN).withKFactor(3).withRxCorr(0.5).withDoppler(0.002)
+                .withPilots(4);
+        LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2, channel, 512, 16,
+                Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+                        LlrMethod.MAXLOG));
+        String run = FerPlot.runLine(link, 9);
+        for (String part : List.of("rician K=3.0", "rx-corr 0.5", "doppler 0.002", "pilots 4", "512 bits/frame",
+                "16 slots per fading block", "conv-r12 + crc16", "seed 9")) {
+            assertTrue(run.contains(part), run + " lacks " + part);
+        }
+        List<String> lines = FerPlot.wrap(run, new Font(Font.SANS_SERIF, Font.PLAIN, 14));
+        assertTrue(lines.size() >= 2, "long enough to wrap: " + lines);
+        for (String line : lines.subList(0, lines.size() - 1)) {
+            assertTrue(line.endsWith(","), "'" + line + "' breaks inside an item");
+        }
+        assertEquals(run, String.join(" ", lines));
+        FerPlot.write(dir, link, 9, sweep(), 0.95, null, TARGET_FER, FerPlot.Axes.AUTOMATIC);
+        List<String> svgLines = svgTextElements(dir.resolve(FerPlot.SVG_FILE));
+        for (String line : lines) {
+            assertTrue(svgLines.contains(line), "SVG lacks the line '" + line + "'");
+        }
+    }
+
     @Test
     void badConfidence(@TempDir Path dir) {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> FerPlot.write(dir, LINK, sweep(), 95, bounds()));
+                () -> FerPlot.write(dir, LINK, SEED, sweep(), 95, bounds(), TARGET_FER, FerPlot.Axes.AUTOMATIC));
         assertEquals("confidence level must be in (0, 1), e.g. 0.95, got 95.0", e.getMessage());
+    }
+
+    private static List<String> seriesKeys(XYPlot plot) {
+        List<String> keys = new java.util.ArrayList<>();
+        for (int d = 0; d < plot.getDatasetCount(); d++) {
+            XYDataset data = plot.getDataset(d);
+            for (int i = 0; data != null && i < data.getSeriesCount(); i++) {
+                keys.add(data.getSeriesKey(i).toString());
+            }
+        }
+        return keys;
     }
 
     private static int countColour(BufferedImage image, int rgb) {
@@ -149,5 +323,21 @@ class FerPlotTest {
         }
         assertEquals("svg", doc.getDocumentElement().getTagName());
         return doc.getDocumentElement().getTextContent();
+    }
+
+    /** The text of each {@code <text>} element of the SVG, one entry per drawn line. */
+    private static List<String> svgTextElements(Path svg) throws Exception {
+        DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
+        f.setFeature("http://apache.org/xml/features/nonvalidating/load-external-dtd", false);
+        Document doc;
+        try (InputStream in = Files.newInputStream(svg)) {
+            doc = f.newDocumentBuilder().parse(in);
+        }
+        NodeList nodes = doc.getElementsByTagName("text");
+        List<String> texts = new java.util.ArrayList<>();
+        for (int i = 0; i < nodes.getLength(); i++) {
+            texts.add(nodes.item(i).getTextContent());
+        }
+        return texts;
     }
 }
