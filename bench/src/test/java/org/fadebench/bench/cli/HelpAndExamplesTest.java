@@ -1,0 +1,210 @@
+package org.fadebench.bench.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+import java.util.stream.StreamSupport;
+import org.fadebench.bench.analysis.DiversityFit;
+import org.fadebench.bench.report.FerPlot;
+import org.fadebench.bench.scenario.ScenarioKey;
+import org.fadebench.bench.scenario.ScenarioSchema;
+import org.fadebench.channel.Fading;
+import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.Crc;
+import org.fadebench.coding.fec.Interleaving;
+import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.SpaceTimeCode;
+import org.fadebench.coding.stbc.SpaceTimeCodes;
+import org.fadebench.modem.LlrMethod;
+import org.fadebench.modem.Modulation;
+import org.fadebench.modem.MutualInformation;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+import picocli.CommandLine.Model.ArgSpec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** The help texts, the example files and the README agree with what the tool does. */
+class HelpAndExamplesTest {
+
+    /** The surefire working directory is the bench module. */
+    private static final Path SCENARIOS = Path.of("scenarios");
+    private static final Path README = Path.of("..", "README.md");
+
+    @Test
+    void runHelpListsEveryFadingModel() {
+        String help = collapse(CliTest.run("run", "--help").out());
+        assertTrue(help.contains("Fading model: " + Fading.choices() + " "), help);
+    }
+
+    /** Every file a run leaves in its folder is named in the top-level help. */
+    @Test
+    void topLevelHelpListsEveryOutput(@TempDir Path tmp) throws IOException {
+        Path dir = tmp.resolve("out");
+        assertEquals(0, CliTest.run("run", "--snr", "10", "--max-frames", "200", "--quiet", "--out", dir.toString())
+                .code());
+        String help = collapse(CliTest.run("--help").out());
+        List<String> names = new ArrayList<>(List.of("checkpoint.json", "bounds.csv"));
+        try (Stream<Path> files = Files.list(dir)) {
+            files.forEach(f -> names.add(f.getFileName().toString()));
+        }
+        assertEquals(7, names.size(), names.toString());
+        for (String name : names) {
+            assertTrue(help.contains(name), "top-level help lacks " + name + ": " + help);
+        }
+    }
+
+    /**
+     * Help is wrapped only at spaces: every option's, parameter's and command's description appears
+     * in the printed help whole once the line breaks and their indentation are read as single spaces
+     * (a break after "results." or "conv-" would leave "results. csv" or "conv- r12").
+     */
+    @Test
+    void helpWrapsOnlyAtSpaces() {
+        CommandLine root = new CommandLine(new FadebenchCli());
+        List<CommandLine> commands = new ArrayList<>(List.of(root));
+        commands.addAll(root.getSubcommands().values());
+        int checked = 0;
+        for (CommandLine c : commands) {
+            CommandSpec spec = c.getCommandSpec();
+            if (spec.name().equals("help")) {
+                continue;
+            }
+            List<String> args = new ArrayList<>(List.of(spec.qualifiedName(" ").split(" ")));
+            args.remove(0);
+            args.add("--help");
+            String help = collapse(CliTest.run(args.toArray(new String[0])).out());
+            List<String> texts = new ArrayList<>(List.of(spec.usageMessage().description()));
+            for (ArgSpec a : spec.args()) {
+                texts.add(String.join(" ", a.description()));
+            }
+            for (String text : texts) {
+                String expected = collapse(String.format(text));
+                assertTrue(help.contains(expected), spec.qualifiedName() + " help breaks '" + expected + "': " + help);
+                checked++;
+            }
+        }
+        assertTrue(checked > 60, "checked " + checked + " texts");
+        assertEquals(List.of("results.csv,", "conv-r12", "conv-small"),
+                HelpLayout.wrap("results.csv, conv-r12 conv-small", 12));
+    }
+
+    @Test
+    void archiveHelpSaysTheNameIsTakenAsGiven() {
+        String help = collapse(CliTest.run("run", "--help").out());
+        assertTrue(help.contains("--archive=FILE Also bundle the outputs into FILE, named as given;"), help);
+    }
+
+    /** {@code --version} prints the version the POM gives the project, filled in by the build. */
+    @Test
+    void versionIsTheProjectVersion() throws IOException {
+        String pom = Files.readString(Path.of("pom.xml"), StandardCharsets.UTF_8);
+        Matcher parent = Pattern.compile("<parent>.*?<version>([^<]+)</version>", Pattern.DOTALL).matcher(pom);
+        assertTrue(parent.find());
+        CliTest.Outcome o = CliTest.run("--version");
+        assertEquals(0, o.code());
+        assertEquals("fadebench " + parent.group(1), o.out().trim());
+    }
+
+    /** The example code file is on disk beside the scenarios and identical to the copy in the jar. */
+    @Test
+    void exampleCodeFileOnDiskIsTheOneInTheJar() throws IOException {
+        String onDisk = Files.readString(SCENARIOS.resolve("example-code.yaml"), StandardCharsets.UTF_8);
+        try (InputStream in = SpaceTimeCode.class.getResourceAsStream("/org/fadebench/coding/stbc/example-code.yaml")) {
+            assertEquals(new String(in.readAllBytes(), StandardCharsets.UTF_8), onDisk);
+        }
+        CliTest.Outcome o = CliTest.run("codes", "--code-file", SCENARIOS.resolve("example-code.yaml").toString());
+        assertEquals(0, o.code(), o.err());
+        assertTrue(o.out().contains("sm2"), o.out());
+    }
+
+    /**
+     * The example scenario names every key of the schema, and the comment beside each key with a
+     * fixed set of values lists today's values.
+     */
+    @Test
+    void exampleScenarioListsTodaysChoices() throws IOException {
+        List<String> lines = Files.readAllLines(SCENARIOS.resolve("hilltop-gateway.yaml"), StandardCharsets.UTF_8);
+        for (ScenarioKey key : ScenarioSchema.keys()) {
+            assertTrue(line(lines, key.name()).isPresent(), "example scenario lacks " + key.path());
+        }
+        Map<String, List<String>> choices = Map.of(
+                "code", names(StreamSupport.stream(SpaceTimeCodes.all().spliterator(), false).map(SpaceTimeCode::name)),
+                "fading", names(Stream.of(Fading.values()).map(Fading::cliName)),
+                "modulation", names(Stream.of(Modulation.values()).map(Modulation::cliName)),
+                "decoder", names(Stream.of(Decoder.values()).map(Decoder::cliName)),
+                "fec", names(Stream.of(ChannelCode.values()).map(ChannelCode::cliName)),
+                "crc", names(Stream.of(Crc.values()).map(Crc::cliName)),
+                "interleaver", names(Stream.of(Interleaving.values()).map(Interleaving::cliName)),
+                "llr", names(Stream.of(LlrMethod.values()).map(LlrMethod::cliName)),
+                "mi", names(Stream.of(MutualInformation.Kind.values()).map(MutualInformation.Kind::cliName)),
+                "plot_x", names(Stream.of(FerPlot.XQuantity.values()).map(FerPlot.XQuantity::cliName)));
+        choices.forEach((key, values) -> {
+            String comment = line(lines, key).orElseThrow().replaceFirst("^[^#]*#", "");
+            for (String v : values) {
+                assertTrue(Pattern.compile("(^|[\\s,:])" + Pattern.quote(v) + "([\\s,;)]|$)").matcher(comment).find(),
+                        key + " comment lacks " + v + ": " + comment);
+            }
+        });
+    }
+
+    /** The README's table of scenario keys is one table holding every key (no paragraph inside it). */
+    @Test
+    void readmeScenarioKeysAreOneTable() throws IOException {
+        List<String> lines = Files.readAllLines(README, StandardCharsets.UTF_8);
+        int start = lines.indexOf("| key | option | key | option |");
+        assertTrue(start >= 0, "README lacks the scenario key table");
+        StringBuilder table = new StringBuilder();
+        for (int i = start; i < lines.size() && lines.get(i).startsWith("|"); i++) {
+            table.append(lines.get(i)).append('\n');
+        }
+        for (ScenarioKey key : ScenarioSchema.keys()) {
+            assertTrue(table.toString().contains("`" + key.path() + "`"), "the table lacks " + key.path());
+            if (key.option() != null) {
+                assertTrue(table.toString().contains("`" + key.option() + "`"), "the table lacks " + key.option());
+            }
+        }
+    }
+
+    /** The demo's closing words come from the two fits, not from a fixed claim. */
+    @Test
+    void demoClosingWordsFollowTheFits() {
+        DiversityFit two = new DiversityFit(2.0, 0.1, 1.8, 2.2, List.of(18.0, 21.0, 24.0));
+        DiversityFit four = new DiversityFit(3.5, 0.13, 3.2, 3.7, List.of(15.0, 18.0, 21.0));
+        DiversityFit close = new DiversityFit(2.3, 0.3, 1.7, 2.9, List.of(15.0, 18.0, 21.0));
+        assertEquals("Fitted diversity order: 2.0 (95 % interval 1.8 to 2.2) with one receive antenna, 3.5 (95 % "
+                + "interval 3.2 to 3.7) with two: with two receive antennas the FER falls 1.8 times as fast with SNR.",
+                DemoCommand.closing(Optional.of(two), Optional.of(four)));
+        assertTrue(DemoCommand.closing(Optional.of(two), Optional.of(close))
+                .endsWith("; at this run's length the fits do not tell the two apart."));
+        assertEquals("Too few points with errors to fit a diversity order for sensor-2rx; compare the FER columns "
+                + "above.", DemoCommand.closing(Optional.of(two), Optional.empty()));
+    }
+
+    /** The key's line in the example, commented out or not. */
+    private static Optional<String> line(List<String> lines, String key) {
+        Pattern p = Pattern.compile("^\\s*(#\\s*)?" + Pattern.quote(key) + ":");
+        return lines.stream().filter(l -> p.matcher(l).find()).findFirst();
+    }
+
+    private static List<String> names(Stream<String> s) {
+        return s.toList();
+    }
+
+    /** Line breaks and runs of spaces as single spaces. */
+    private static String collapse(String s) {
+        return s.replaceAll("\\s+", " ").trim();
+    }
+}
