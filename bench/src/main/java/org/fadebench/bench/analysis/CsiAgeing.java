@@ -19,7 +19,7 @@ import org.fadebench.bench.link.LinkSettings;
  * receiver that knew nothing (Ĥ = 0) would make: from there on the CSI is meaningless.
  *
  * <p>Criterion (ours, from the above): warn when ρ at the block's last slot, τ = L − 1 for a block
- * of L slots, is below 1/2. The longest block that passes has L − 1 ≤ x½/(2π·f_D), with x½ ≈ 1.5207
+ * of L slots, is below 1/2. The longest block that passes has L − 1 ≤ x½/(2π·f_D), with x½ ≈ 1.5211
  * the first root of J0(x) = 1/2. J0 is Commons Math's {@link BesselJ}.
  */
 public final class CsiAgeing {
@@ -57,8 +57,8 @@ public final class CsiAgeing {
         int longest = 1 + (int) Math.floor(HALF_CORRELATION_ARGUMENT / (2.0 * Math.PI * fd));
         int coherence = longest / codeSlots * codeSlots;
         String change = coherence >= codeSlots
-                ? "use --coherence " + coherence + " or less (fading blocks over which the channel stays close to"
-                        + " its CSI), or a lower --doppler"
+                ? "use --coherence " + coherence + " or less so that the CSI keeps some meaning to each block's"
+                        + " end (shorter blocks lower the error floor further), or a lower --doppler"
                 : "even one code block of " + codeSlots + " slots is too long at this Doppler: use a code with fewer"
                         + " slots or a lower --doppler";
         return Optional.of(String.format(Locale.ROOT, "--doppler %s changes the channel so much within each fading"

@@ -193,6 +193,81 @@ class HelpAndExamplesTest {
                 + "above.", DemoCommand.closing(Optional.of(two), Optional.empty()));
     }
 
+    /**
+     * Doppler over the default block (the whole frame): a one-line warning on stderr and in
+     * results.json, naming what to change; block fading has none.
+     */
+    @Test
+    void dopplerOverALongBlockIsWarnedAbout(@TempDir Path tmp) throws IOException {
+        Path dir = tmp.resolve("doppler");
+        CliTest.Outcome o = CliTest.run("run", "--code", "alamouti", "--doppler", "0.01", "--snr", "10",
+                "--max-frames", "200", "--out", dir.toString());
+        assertEquals(0, o.code(), o.err());
+        List<String> warnings = o.err().lines().filter(l -> l.contains("warning")).toList();
+        assertEquals(1, warnings.size(), o.err());
+        assertTrue(warnings.get(0).startsWith("fadebench run: warning: --doppler 0.01 changes the channel so much"),
+                warnings.get(0));
+        assertTrue(warnings.get(0).contains("use --coherence 24 or less"), warnings.get(0));
+        com.fasterxml.jackson.databind.JsonNode json = new com.fasterxml.jackson.databind.ObjectMapper()
+                .readTree(dir.resolve("results.json").toFile());
+        assertEquals(1, json.get("warnings").size());
+        assertEquals(warnings.get(0).substring("fadebench run: warning: ".length()), json.get("warnings").get(0).asText());
+
+        Path plain = tmp.resolve("plain");
+        CliTest.Outcome p = CliTest.run("run", "--code", "alamouti", "--snr", "10", "--max-frames", "200", "--out",
+                plain.toString());
+        assertEquals("", p.err());
+        assertEquals(0, new com.fasterxml.jackson.databind.ObjectMapper().readTree(plain.resolve("results.json")
+                .toFile()).get("warnings").size());
+    }
+
+    /**
+     * Pilots are reported as the README says: not charged to the SNR, reported as overhead. Alamouti
+     * QPSK, 1024-bit frames: 512 symbols in 512 slots, one fading block, 2 pilot slots: overhead
+     * 2/514 = 0.389 %, net R = 2·512/514 = 1.9922 bits per channel use; the same line on the terminal
+     * and in the CSV header, the numbers in results.json.
+     */
+    @Test
+    void pilotOverheadIsReported(@TempDir Path tmp) throws IOException {
+        Path dir = tmp.resolve("pilots");
+        CliTest.Outcome o = CliTest.run("run", "--code", "alamouti", "--pilots", "2", "--snr", "10", "--max-frames",
+                "200", "--out", dir.toString());
+        assertEquals(0, o.code(), o.err());
+        String line = "pilots: 2 slots per fading block, not counted in the SNR or in R; overhead 0.39 % of the slots,"
+                + " so 1.9922 net information bits per channel use";
+        assertTrue(o.out().contains("\n" + line + "\n"), o.out());
+        assertTrue(Files.readAllLines(dir.resolve("results.csv")).contains("# " + line));
+        com.fasterxml.jackson.databind.JsonNode json = new com.fasterxml.jackson.databind.ObjectMapper()
+                .readTree(dir.resolve("results.json").toFile());
+        assertEquals(2.0 / 514, json.get("pilot_overhead").asDouble(), 1e-15);
+        assertEquals(2.0 * 512 / 514, json.get("net_bits_per_channel_use").asDouble(), 1e-12);
+        assertEquals(2.0, json.get("bits_per_channel_use").asDouble(), 1e-15, "R itself leaves the pilots out");
+    }
+
+    /** --plot-x and --plot-floor from the command line and from a scenario; bad values are refused up front. */
+    @Test
+    void plotOptions(@TempDir Path tmp) throws IOException {
+        Path dir = tmp.resolve("ebn0");
+        CliTest.Outcome o = CliTest.run("run", "--snr", "10", "--max-frames", "200", "--plot-x", "ebn0",
+                "--plot-floor", "1e-7", "--out", dir.toString());
+        assertEquals(0, o.code(), o.err());
+        assertTrue(Files.readString(dir.resolve(FerPlot.SVG_FILE)).contains("Eb/N0 (dB)"));
+        Path scenario = Files.writeString(tmp.resolve("s.yaml"), "output:\n  plot_x: ebn0\n  plot_floor: 1.0e-7\n");
+        Path fromFile = tmp.resolve("file");
+        assertEquals(0, CliTest.run("run", scenario.toString(), "--snr", "10", "--max-frames", "200", "--out",
+                fromFile.toString()).code());
+        assertTrue(Files.readString(fromFile.resolve(FerPlot.SVG_FILE)).contains("Eb/N0 (dB)"));
+
+        CliTest.Outcome badX = CliTest.run("run", "--plot-x", "time", "--out", tmp.resolve("never").toString());
+        assertEquals(2, badX.code());
+        assertEquals("fadebench run: --plot-x: unknown x axis 'time'; valid: snr, ebn0", badX.err().trim());
+        CliTest.Outcome badFloor = CliTest.run("run", "--plot-floor", "2", "--out", tmp.resolve("never").toString());
+        assertEquals(2, badFloor.code());
+        assertEquals("fadebench run: --plot-floor must lie strictly between 0 and 1 (e.g. 1e-6), got 2.0",
+                badFloor.err().trim());
+        assertTrue(Files.notExists(tmp.resolve("never")));
+    }
+
     /** The key's line in the example, commented out or not. */
     private static Optional<String> line(List<String> lines, String key) {
         Pattern p = Pattern.compile("^\\s*(#\\s*)?" + Pattern.quote(key) + ":");
