@@ -3,6 +3,8 @@ package org.fadebench.bench.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
@@ -208,8 +210,7 @@ class HelpAndExamplesTest {
         assertTrue(warnings.get(0).startsWith("fadebench run: warning: --doppler 0.01 changes the channel so much"),
                 warnings.get(0));
         assertTrue(warnings.get(0).contains("use --coherence 24 or less"), warnings.get(0));
-        com.fasterxml.jackson.databind.JsonNode json = new com.fasterxml.jackson.databind.ObjectMapper()
-                .readTree(dir.resolve("results.json").toFile());
+        JsonNode json = resultsJson(dir);
         assertEquals(1, json.get("warnings").size());
         assertEquals(warnings.get(0).substring("fadebench run: warning: ".length()), json.get("warnings").get(0).asText());
 
@@ -217,8 +218,7 @@ class HelpAndExamplesTest {
         CliTest.Outcome p = CliTest.run("run", "--code", "alamouti", "--snr", "10", "--max-frames", "200", "--out",
                 plain.toString());
         assertEquals("", p.err());
-        assertEquals(0, new com.fasterxml.jackson.databind.ObjectMapper().readTree(plain.resolve("results.json")
-                .toFile()).get("warnings").size());
+        assertEquals(0, resultsJson(plain).get("warnings").size());
     }
 
     /**
@@ -237,8 +237,7 @@ class HelpAndExamplesTest {
                 + " so 1.9922 net information bits per channel use";
         assertTrue(o.out().contains("\n" + line + "\n"), o.out());
         assertTrue(Files.readAllLines(dir.resolve("results.csv")).contains("# " + line));
-        com.fasterxml.jackson.databind.JsonNode json = new com.fasterxml.jackson.databind.ObjectMapper()
-                .readTree(dir.resolve("results.json").toFile());
+        JsonNode json = resultsJson(dir);
         assertEquals(2.0 / 514, json.get("pilot_overhead").asDouble(), 1e-15);
         assertEquals(2.0 * 512 / 514, json.get("net_bits_per_channel_use").asDouble(), 1e-12);
         assertEquals(2.0, json.get("bits_per_channel_use").asDouble(), 1e-15, "R itself leaves the pilots out");
@@ -266,6 +265,10 @@ class HelpAndExamplesTest {
         assertEquals("fadebench run: --plot-floor must lie strictly between 0 and 1 (e.g. 1e-6), got 2.0",
                 badFloor.err().trim());
         assertTrue(Files.notExists(tmp.resolve("never")));
+    }
+
+    private static JsonNode resultsJson(Path dir) throws IOException {
+        return new ObjectMapper().readTree(dir.resolve("results.json").toFile());
     }
 
     /** The key's line in the example, commented out or not. */

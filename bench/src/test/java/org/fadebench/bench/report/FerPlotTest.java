@@ -313,8 +313,8 @@ class FerPlotTest {
         return n;
     }
 
-    /** Parses the SVG as XML (well-formedness; the DTD is not fetched) and returns its text content. */
-    private static String svgText(Path svg) throws Exception {
+    /** Parses the SVG as XML (well-formedness; the DTD is not fetched). */
+    private static Document svg(Path svg) throws Exception {
         DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
         f.setFeature("http://apache.org/xml/features/nonvalidating/load-external-dtd", false);
         Document doc;
@@ -322,18 +322,17 @@ class FerPlotTest {
             doc = f.newDocumentBuilder().parse(in);
         }
         assertEquals("svg", doc.getDocumentElement().getTagName());
-        return doc.getDocumentElement().getTextContent();
+        return doc;
+    }
+
+    /** The SVG's text content. */
+    private static String svgText(Path svg) throws Exception {
+        return svg(svg).getDocumentElement().getTextContent();
     }
 
     /** The text of each {@code <text>} element of the SVG, one entry per drawn line. */
     private static List<String> svgTextElements(Path svg) throws Exception {
-        DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
-        f.setFeature("http://apache.org/xml/features/nonvalidating/load-external-dtd", false);
-        Document doc;
-        try (InputStream in = Files.newInputStream(svg)) {
-            doc = f.newDocumentBuilder().parse(in);
-        }
-        NodeList nodes = doc.getElementsByTagName("text");
+        NodeList nodes = svg(svg).getElementsByTagName("text");
         List<String> texts = new java.util.ArrayList<>();
         for (int i = 0; i < nodes.getLength(); i++) {
             texts.add(nodes.item(i).getTextContent());
