@@ -20,8 +20,8 @@ import java.util.stream.Stream;
 import java.util.stream.StreamSupport;
 import org.fadebench.bench.analysis.DiversityFit;
 import org.fadebench.bench.report.FerPlot;
-import org.fadebench.bench.scenario.ScenarioKey;
-import org.fadebench.bench.scenario.ScenarioSchema;
+import org.fadebench.bench.settings.RunSettings;
+import org.fadebench.bench.settings.Setting;
 import org.fadebench.channel.Fading;
 import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
@@ -48,7 +48,7 @@ class HelpAndExamplesTest {
     @Test
     void runHelpListsEveryFadingModel() {
         String help = collapse(CliTest.run("run", "--help").out());
-        assertTrue(help.contains("Fading model: " + Fading.choices() + " "), help);
+        assertTrue(help.contains("Fading model: " + Fading.choices() + ". "), help);
     }
 
     /** Every file a run leaves in its folder is named in the top-level help. */
@@ -106,7 +106,8 @@ class HelpAndExamplesTest {
     @Test
     void archiveHelpSaysTheNameIsTakenAsGiven() {
         String help = collapse(CliTest.run("run", "--help").out());
-        assertTrue(help.contains("--archive=FILE Also bundle the outputs into FILE, named as given;"), help);
+        assertTrue(help.contains("--archive=FILE Also bundle the outputs into FILE (.tar.xz, .txz, .tar.gz or .tgz;"
+                + " the name is taken as given)."), help);
     }
 
     /** {@code --version} prints the version the POM gives the project, filled in by the build. */
@@ -139,7 +140,7 @@ class HelpAndExamplesTest {
     @Test
     void exampleScenarioListsTodaysChoices() throws IOException {
         List<String> lines = Files.readAllLines(SCENARIOS.resolve("hilltop-gateway.yaml"), StandardCharsets.UTF_8);
-        for (ScenarioKey key : ScenarioSchema.keys()) {
+        for (Setting key : RunSettings.all()) {
             assertTrue(line(lines, key.name()).isPresent(), "example scenario lacks " + key.path());
         }
         Map<String, List<String>> choices = Map.of(
@@ -172,7 +173,7 @@ class HelpAndExamplesTest {
         for (int i = start; i < lines.size() && lines.get(i).startsWith("|"); i++) {
             table.append(lines.get(i)).append('\n');
         }
-        for (ScenarioKey key : ScenarioSchema.keys()) {
+        for (Setting key : RunSettings.all()) {
             assertTrue(table.toString().contains("`" + key.path() + "`"), "the table lacks " + key.path());
             if (key.option() != null) {
                 assertTrue(table.toString().contains("`" + key.option() + "`"), "the table lacks " + key.option());
