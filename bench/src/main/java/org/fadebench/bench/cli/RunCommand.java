@@ -1,6 +1,9 @@
 package org.fadebench.bench.cli;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.function.Supplier;
@@ -15,8 +18,6 @@ import org.fadebench.modem.LlrMethod;
 import org.fadebench.bench.report.Archive;
 import org.fadebench.bench.scenario.Scenario;
 import org.fadebench.bench.scenario.ScenarioException;
-import org.fadebench.bench.scenario.ScenarioKey;
-import org.fadebench.bench.scenario.ScenarioSchema;
 import org.fadebench.bench.scenario.ScenarioLoader;
 import org.fadebench.bench.sweep.SnrGrid;
 import org.fadebench.bench.sweep.StopRules;
@@ -170,6 +171,9 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--resume", description = "Continue an interrupted run from the checkpoint in --out.")
     boolean resume;
 
+    @Option(names = "--overwrite", description = "Replace the results of another run (or its checkpoint) in --out.")
+    boolean overwrite;
+
     @Option(names = "--quiet", description = "Print nothing but errors; no progress bar.")
     boolean quiet;
 
@@ -311,39 +315,36 @@ final class RunCommand implements Callable<Integer> {
             }
             archivePath = Path.of(archive);
         }
-        String effective = effectiveScenario(scenario);
-        return new RunPlan(link, snr.trim(), snrDb, rules, seed, nThreads, confidence, SweepJob.checkOutDir(out),
-                archivePath, resume, quiet, scenario, bounds, targetFer, traceOut, traceOutBlocks,
-                effective);
+        Map<String, Object> derived = new HashMap<>(Map.of("--decoder", dec.cliName(), "--tx", nTx,
+                "--frame-bits", bits, "--interleaver", coding.interleaving().cliName(), "--threads", nThreads));
+        if (linkOptions.codeFile == null) {
+            derived.put("--code", stbc.name());
+        }
+        if (bounds != null) {
+            derived.put("--rate", bounds.spectralEfficiency());
+        }
+        String effective = ScenarioText.of(spec, scenario, derived);
+        RunPlan plan = new RunPlan(link, snr.trim(), snrDb, rules, seed, nThreads, confidence,
+                SweepJob.checkOutDir(out), archivePath, resume, quiet, scenario, bounds, targetFer, traceOut,
+                traceOutBlocks, effective);
+        RunOutputs.checkDistinct(inputs(), RunOutputs.outputs(plan), effective);
+        RunOutputs.checkFolderReuse(plan.outDir(), overwrite, resume, effective);
+        return plan;
     }
 
-    /**
-     * The run's settings as a scenario file: every key of the schema whose option has a value
-     * (command line, scenario or default), so that running the file repeats the run.
-     */
-    private String effectiveScenario(Scenario source) {
-        StringBuilder y = new StringBuilder("# fadebench scenario: the settings of this run, written by fadebench");
-        y.append(source != null ? " (from " + source.source() + " and the command line)\n" : "\n");
-        String section = null;
-        for (ScenarioKey key : ScenarioSchema.keys()) {
-            if (key.option() == null) {
-                continue;
-            }
-            Object value = spec.findOption(key.option()).getValue();
-            if (value == null || key.section().equals("output")) {
-                continue;
-            }
-            if (!key.section().equals(section)) {
-                section = key.section();
-                y.append(section).append(":\n");
-            }
-            String text = String.valueOf(value);
-            boolean quote = key.kind() == ScenarioKey.Kind.TEXT || key.kind() == ScenarioKey.Kind.SNR;
-            y.append("  ").append(key.name()).append(": ")
-                    .append(quote ? "\"" + text.replace("\\", "\\\\").replace("\"", "\\\"") + "\"" : text)
-                    .append('\n');
+    /** The files the run reads. */
+    private List<RunOutputs.Named> inputs() {
+        List<RunOutputs.Named> in = new ArrayList<>();
+        if (scenarioFile != null && preloaded == null) {
+            in.add(new RunOutputs.Named("the scenario file " + scenarioFile, scenarioFile));
         }
-        return y.toString();
+        if (linkOptions.codeFile != null) {
+            in.add(new RunOutputs.Named("--code-file " + linkOptions.codeFile, linkOptions.codeFile));
+        }
+        if (trace != null) {
+            in.add(new RunOutputs.Named("--trace " + trace, trace));
+        }
+        return in;
     }
 
     /**

@@ -9,6 +9,8 @@ public record ScenarioKey(String section, String name, String option, Kind kind,
     /** The kinds of value a key takes. */
     public enum Kind {
         TEXT("text"),
+        /** A file or folder name; scenario.yaml stores it resolved (absolute). */
+        PATH("a file or folder name"),
         WHOLE("a whole number"),
         NUMBER("a number"),
         /** A dB value, a START:STEP:STOP text, or a list of numbers. */

@@ -17,7 +17,7 @@ public final class ScenarioSchema {
 
     private static final List<ScenarioKey> KEYS = List.of(
             new ScenarioKey("link", "code", "--code", Kind.TEXT, "space-time block code"),
-            new ScenarioKey("link", "code_file", "--code-file", Kind.TEXT, "a space-time code of your own"),
+            new ScenarioKey("link", "code_file", "--code-file", Kind.PATH, "a space-time code of your own"),
             new ScenarioKey("link", "decoder", "--decoder", Kind.TEXT, "mf, zf, mmse"),
             new ScenarioKey("link", "tx", "--tx", Kind.WHOLE, "transmit antennas"),
             new ScenarioKey("link", "rx", "--rx", Kind.WHOLE, "receive antennas"),
@@ -32,7 +32,7 @@ public final class ScenarioSchema {
             new ScenarioKey("link", "doppler", "--doppler", Kind.NUMBER, "normalised Doppler"),
             new ScenarioKey("link", "csi_error", "--csi-error", Kind.NUMBER, "CSI error variance"),
             new ScenarioKey("link", "pilots", "--pilots", Kind.WHOLE, "pilot slots per fading block"),
-            new ScenarioKey("link", "trace", "--trace", Kind.TEXT, "recorded channel trace"),
+            new ScenarioKey("link", "trace", "--trace", Kind.PATH, "recorded channel trace"),
             new ScenarioKey("link", "fec", "--fec", Kind.TEXT, "channel code"),
             new ScenarioKey("link", "crc", "--crc", Kind.TEXT, "CRC per frame"),
             new ScenarioKey("link", "interleaver", "--interleaver", Kind.TEXT, "random, block, none"),
@@ -52,10 +52,11 @@ public final class ScenarioSchema {
             new ScenarioKey("analysis", "rate", "--rate", Kind.NUMBER, "spectral efficiency of the bounds"),
             new ScenarioKey("analysis", "mi", "--mi", Kind.TEXT, "cm or bicm"),
             new ScenarioKey("analysis", "outage_draws", "--outage-draws", Kind.WHOLE, "draws of the MIMO bound"),
-            new ScenarioKey("output", "folder", "--out", Kind.TEXT, "output folder"),
-            new ScenarioKey("output", "archive", "--archive", Kind.TEXT, ".tar.xz or .tar.gz bundle"),
+            new ScenarioKey("output", "folder", "--out", Kind.PATH, "output folder"),
+            new ScenarioKey("output", "archive", "--archive", Kind.PATH, ".tar.xz or .tar.gz bundle"),
             new ScenarioKey("output", "quiet", "--quiet", Kind.FLAG, "no table or progress bar"),
-            new ScenarioKey("output", "trace_out", "--trace-out", Kind.TEXT, "record the channels drawn"),
+            new ScenarioKey("output", "overwrite", "--overwrite", Kind.FLAG, "replace another run's results in the folder"),
+            new ScenarioKey("output", "trace_out", "--trace-out", Kind.PATH, "record the channels drawn"),
             new ScenarioKey("output", "trace_out_blocks", "--trace-out-blocks", Kind.WHOLE, "most blocks recorded"));
 
     private ScenarioSchema() {
