@@ -414,7 +414,8 @@ final class RunCommand implements Callable<Integer> {
 
     private static ChannelTrace readTrace(Path file) {
         try {
-            return ChannelTrace.read(file);
+            // resolved, so that the results name the trace the same way from any folder
+            return ChannelTrace.read(RunOutputs.resolved(file));
         } catch (java.io.UncheckedIOException e) {
             throw new IllegalArgumentException("--trace " + file + ": " + (e.getCause() instanceof java.nio.file.NoSuchFileException
                     ? "no such file" : "cannot be read (" + e.getCause().getMessage() + ")"));
