@@ -15,6 +15,9 @@ import java.util.Arrays;
 import java.util.List;
 import org.fadebench.bench.report.Checkpoint;
 import org.fadebench.bench.report.FerPlot;
+import org.fadebench.bench.run.RunPlan;
+import org.fadebench.bench.settings.RunSettings;
+import org.fadebench.bench.settings.Setting;
 
 /**
  * The files a run reads and writes, and the checks made on them before anything is simulated: no
@@ -56,6 +59,32 @@ final class RunOutputs {
         } catch (IOException e) {
             return abs;
         }
+    }
+
+    /**
+     * The checks made before a run: its outputs are distinct from its inputs and each other, and its
+     * folder holds no other run's results (unless {@code --overwrite}).
+     *
+     * @param scenarioFile the scenario file read, or null
+     */
+    static void checkBeforeRun(RunPlan plan, Path scenarioFile, boolean resume) {
+        String text = plan.scenarioText();
+        checkDistinct(inputs(plan, scenarioFile), outputs(plan), text);
+        checkFolderReuse(plan.outDir(), plan.values().flag(RunSettings.OVERWRITE), resume, text);
+    }
+
+    /** The files the run reads. */
+    static List<Named> inputs(RunPlan plan, Path scenarioFile) {
+        List<Named> in = new ArrayList<>();
+        if (scenarioFile != null) {
+            in.add(new Named("the scenario file " + scenarioFile, scenarioFile));
+        }
+        for (Setting s : List.of(RunSettings.CODE_FILE, RunSettings.TRACE)) {
+            if (plan.values().isSet(s)) {
+                in.add(new Named(s.option() + " " + plan.values().text(s), Path.of(plan.values().text(s))));
+            }
+        }
+        return in;
     }
 
     /** The run folder's files, the archive and the trace written, as outputs. */
