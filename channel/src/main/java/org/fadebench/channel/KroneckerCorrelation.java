@@ -3,8 +3,8 @@ package org.fadebench.channel;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_ZDRM;
-import org.ejml.dense.row.mult.MatrixMatrixMult_ZDRM;
 import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
+import org.ejml.dense.row.mult.MatrixMatrixMult_ZDRM;
 import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
 
 /**
