@@ -35,8 +35,8 @@ final class BoundsCommand implements Callable<Integer> {
     @CommandLine.Mixin
     LinkOptions linkOptions = new LinkOptions();
 
-    @Option(names = "--snr", paramLabel = "DB", defaultValue = "0:2:30",
-            description = "SNR points in dB: START:STEP:STOP, one value, or a list a,b,c (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--snr", paramLabel = "DB", defaultValue = "0..30/2",
+            description = "SNR points in dB: FROM..TO/STEP (TO included when on the grid), one value, or a list a,b,c (default: ${DEFAULT-VALUE}).")
     String snr;
 
     @CommandLine.Mixin

@@ -123,8 +123,8 @@ final class RunCommand implements Callable<Integer> {
             description = "Symbol periods per fading block, a multiple of the code's slots (default: the whole frame).")
     int coherence;
 
-    @Option(names = "--snr", paramLabel = "DB", defaultValue = "0:2:20",
-            description = "SNR points in dB: START:STEP:STOP, one value, or a list a,b,c (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--snr", paramLabel = "DB", defaultValue = "0..20/2",
+            description = "SNR points in dB: FROM..TO/STEP (TO included when on the grid), one value, or a list a,b,c (default: ${DEFAULT-VALUE}).")
     String snr;
 
     @Option(names = "--min-errors", paramLabel = "N", defaultValue = "100",

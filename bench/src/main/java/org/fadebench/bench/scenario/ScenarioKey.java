@@ -11,8 +11,8 @@ public record ScenarioKey(String section, String name, String option, Kind kind,
         TEXT("text"),
         WHOLE("a whole number"),
         NUMBER("a number"),
-        /** A dB value, a START:STEP:STOP text, or a list of numbers. */
-        SNR("a number, START:STEP:STOP, or a list of numbers"),
+        /** A dB value, a FROM..TO/STEP text, or a list of numbers. */
+        SNR("a number, FROM..TO/STEP, or a list of numbers"),
         FLAG("true or false"),
         /** A square complex matrix: a list of rows, each entry a number or a pair [re, im]. */
         MATRIX("a list of rows of numbers or [re, im] pairs");

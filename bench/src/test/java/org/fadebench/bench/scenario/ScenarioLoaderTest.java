@@ -51,7 +51,7 @@ class ScenarioLoaderTest {
         "'sweeps:\\n  seed: 1' | t.yaml line 1: unknown section 'sweeps' (did you mean 'sweep'?); valid sections: link, sweep, analysis, output",
         "'link:\\n  rx: two' | t.yaml line 2, key link.rx: expected a whole number, got 'two'",
         "'sweep:\\n  confidence: high' | t.yaml line 2, key sweep.confidence: expected a number, got 'high'",
-        "'sweep:\\n  snr_db: [0, x]' | t.yaml line 2, key sweep.snr_db: expected a number, START:STEP:STOP, or a list of numbers, got 'x'",
+        "'sweep:\\n  snr_db: [0, x]' | t.yaml line 2, key sweep.snr_db: expected a number, FROM..TO/STEP, or a list of numbers, got 'x'",
         "'output:\\n  quiet: maybe' | t.yaml line 2, key output.quiet: expected true or false, got 'maybe'",
         "'link:\\n  tx: [1, 2]' | t.yaml line 2, key link.tx: expected a whole number, got a list",
         "'link: 3' | t.yaml line 1: section 'link' must be a mapping of keys code, code_file, decoder",
