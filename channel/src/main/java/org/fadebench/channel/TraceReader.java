@@ -43,6 +43,12 @@ final class TraceReader {
 
     static ChannelTrace read(Path file, TraceLimits limits) {
         String name = file.toString();
+        if (Files.isDirectory(file)) {
+            throw bad(name, "is a folder, not a trace file");
+        }
+        if (Files.exists(file) && !Files.isRegularFile(file)) {
+            throw bad(name, "not a regular file (a pipe or a device?); give a trace file");
+        }
         InputStream raw;
         try {
             raw = Files.newInputStream(file);
