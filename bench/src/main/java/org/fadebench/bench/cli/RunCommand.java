@@ -5,7 +5,9 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.function.Supplier;
 import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.link.ChannelRecorder;
 import org.fadebench.bench.link.FrameCoding;
+import org.fadebench.bench.link.LinkChain;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
@@ -295,6 +297,7 @@ final class RunCommand implements Callable<Integer> {
         }
         StopRules rules = parse(null, () -> new StopRules(minErrors, maxFrames, maxSeconds, ferFloor));
         int nThreads = SweepJob.threads(threads);
+        requireHeap(link, nThreads);
         if (!(confidence > 0 && confidence < 1)) {
             throw new InvalidInputException("--confidence must lie strictly between 0 and 1 (e.g. 0.95), got "
                     + confidence);
@@ -315,6 +318,31 @@ final class RunCommand implements Callable<Integer> {
         return new RunPlan(link, snr.trim(), snrDb, rules, seed, nThreads, confidence, SweepJob.checkOutDir(out),
                 archivePath, resume, quiet, scenario, bounds, targetFer, traceOut, traceOutBlocks,
                 effective);
+    }
+
+    /**
+     * Refuses a run whose buffers (one chain per worker thread, and the --trace-out recorder) would
+     * not fit in three quarters of the heap still free, before anything is allocated.
+     */
+    private void requireHeap(LinkSettings link, int nThreads) {
+        long chain = LinkChain.bufferBytes(link);
+        long recorder = traceOut == null ? 0
+                : ChannelRecorder.bufferBytes(link.receiveAntennas(), link.transmitAntennas(), traceOutBlocks);
+        long needed = recorder == Long.MAX_VALUE ? recorder : chain * nThreads + recorder;
+        Runtime rt = Runtime.getRuntime();
+        long free = rt.maxMemory() - (rt.totalMemory() - rt.freeMemory());
+        if (needed > free / 4 * 3) {
+            throw new InvalidInputException(String.format(java.util.Locale.ROOT,
+                    "not enough memory: this run needs about %s (%s per worker thread x %d%s) but the Java heap has %s "
+                            + "free; use shorter --frame-bits, fewer --rx, fewer --threads%s, or a larger heap "
+                            + "(java -Xmx...)", mebibytes(needed), mebibytes(chain), nThreads,
+                    recorder > 0 ? ", plus " + mebibytes(recorder) + " for --trace-out" : "", mebibytes(free),
+                    recorder > 0 ? ", fewer --trace-out-blocks" : ""));
+        }
+    }
+
+    private static String mebibytes(long bytes) {
+        return bytes == Long.MAX_VALUE ? "more than 16 GiB in one array" : (bytes + (1 << 20) - 1 >> 20) + " MiB";
     }
 
     /**
