@@ -74,8 +74,8 @@ public final class RunSettings {
     public static final Setting COHERENCE = new Setting("link", "coherence", "--coherence", WHOLE, "SLOTS", "0",
             "Symbol periods per fading block, a multiple of the code's slots; 0 for the whole frame.");
     // sweep
-    public static final Setting SNR_DB = new Setting("sweep", "snr_db", "--snr", SNR, "DB", "0:2:20",
-            "SNR points in dB: START:STEP:STOP, one value, or a list a,b,c.");
+    public static final Setting SNR_DB = new Setting("sweep", "snr_db", "--snr", SNR, "DB", "0..20/2",
+            "SNR points in dB: FROM..TO/STEP (TO included when on the grid), one value, or a list a,b,c.");
     public static final Setting MIN_ERRORS = new Setting("sweep", "min_errors", "--min-errors", WHOLE, "N", "100",
             "Frame errors to collect per point; 0 runs exactly --max-frames.");
     public static final Setting MAX_FRAMES = new Setting("sweep", "max_frames", "--max-frames", WHOLE, "N", "1000000",
