@@ -57,8 +57,8 @@ class SweepEngineTest {
                 Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
                         LlrMethod.MAXLOG));
         assertEquals(128, coded.framesDecodedTogether());
-        assertEquals(128, SweepEngine.batchFrames(coded));
-        assertEquals(SweepEngine.BATCH_SYMBOLS / LINK.symbolsPerFrame(), SweepEngine.batchFrames(LINK));
+        assertEquals(128, SweepPlan.batchFrames(coded));
+        assertEquals(SweepPlan.BATCH_SYMBOLS / LINK.symbolsPerFrame(), SweepPlan.batchFrames(LINK));
         StopRules rules = new StopRules(20, 100_000);
         FrameCounters one = new SweepEngine(coded, rules, 5, 1, 0.95).run(new double[] {6}, p -> { }).results().get(0)
                 .counts();
