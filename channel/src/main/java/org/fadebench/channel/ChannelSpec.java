@@ -1,5 +1,7 @@
 package org.fadebench.channel;
 
+import java.io.Serializable;
+
 /**
  * Everything the command line says about the channel: the fading model and its parameters, spatial
  * correlation, Doppler, the receiver's CSI, or a recorded trace. Immutable: each {@code with…}
@@ -12,7 +14,7 @@ package org.fadebench.channel;
  * {@code --csi-error} {@link #withCsiError}, {@code --pilots} {@link #withPilots},
  * {@code --trace} {@link #withTrace}.
  */
-public final class ChannelSpec {
+public final class ChannelSpec implements Serializable {
 
     private final Fading fading;
     /** NaN, null or 0 below: not given. */

@@ -1,5 +1,6 @@
 package org.fadebench.bench.link;
 
+import java.io.Serializable;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
 import org.fadebench.coding.fec.FecScheme;
@@ -20,7 +21,7 @@ import org.fadebench.modem.Modulation;
  */
 public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas,
                            int receiveAntennas, ChannelSpec channel, int frameBits, int coherenceSlots,
-                           Decoder decoder, FrameCoding coding) {
+                           Decoder decoder, FrameCoding coding) implements Serializable {
 
     /** Frame length used when the user gives none, rounded up to whole code blocks. */
     public static final int DEFAULT_FRAME_BITS = 1024;

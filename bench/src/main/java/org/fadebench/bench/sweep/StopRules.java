@@ -1,5 +1,7 @@
 package org.fadebench.bench.sweep;
 
+import java.io.Serializable;
+
 /**
  * When to stop simulating one SNR point, and when to stop the sweep.
  *
@@ -9,7 +11,7 @@ package org.fadebench.bench.sweep;
  *                   result depend on the machine's speed: the one rule that is not reproducible)
  * @param ferFloor   the sweep stops after the first point whose FER is below this (0: never)
  */
-public record StopRules(long minErrors, long maxFrames, double maxSeconds, double ferFloor) {
+public record StopRules(long minErrors, long maxFrames, double maxSeconds, double ferFloor) implements Serializable {
 
     /** Default FER floor of the sweep. */
     public static final double DEFAULT_FER_FLOOR = 1e-6;

@@ -86,6 +86,16 @@ class SweepEngineTest {
         assertTrue(r.counts().frames() < 10_000_000);
     }
 
+    /** --max-frames 9223372036854775807 (the largest long) simulates until min-errors, as any other limit. */
+    @Test
+    void largestMaxFramesStillSimulates() {
+        SweepOutcome o = new SweepEngine(LINK, new StopRules(20, Long.MAX_VALUE), 99, 2, 0.95)
+                .run(new double[] {5}, p -> { });
+        assertEquals(1, o.complete().size());
+        assertTrue(o.complete().get(0).counts().frameErrors() >= 20);
+        assertTrue(o.complete().get(0).counts().frames() > 0);
+    }
+
     /** A point with no errors at max-frames ends the sweep. */
     @Test
     void sweepStopsAfterErrorFreePoint() {
