@@ -70,38 +70,43 @@ public final class ChannelSpec {
                 ModelOptions.NONE, null, null, 0);
     }
 
-    private ChannelSpec with(String key, Object value) {
+    /**
+     * This channel with the model setting {@code key} (e.g. {@code --k-factor}) given as
+     * {@code value}: for a model's own settings; the model checks the value when it is built. The
+     * {@code with…} methods below are this for the built-in settings, with the value checked at once.
+     */
+    public ChannelSpec withSetting(String key, Object value) {
         return new ChannelSpec(registry, name, given, options.with(key, value), trace, csiError, pilots);
     }
 
     /** Rician line-of-sight factor K (linear), finite and ≥ 0; needs {@code --fading rician}. */
     public ChannelSpec withKFactor(double k) {
-        return with(ModelOptions.K_FACTOR, RicianChannel.checkKFactor(k));
+        return withSetting(ModelOptions.K_FACTOR, RicianChannel.checkKFactor(k));
     }
 
     /** Nakagami m, finite and ≥ 0.5; needs {@code --fading nakagami}. */
     public ChannelSpec withNakagamiM(double m) {
-        return with(ModelOptions.NAKAGAMI_M, NakagamiChannel.checkM(m));
+        return withSetting(ModelOptions.NAKAGAMI_M, NakagamiChannel.checkM(m));
     }
 
     /** Exponential correlation coefficient r in (−1, 1) between neighbouring transmit antennas. */
     public ChannelSpec withTxCorr(double r) {
-        return with(ModelOptions.TX_CORR, SpatialCorrelation.coefficient(ModelOptions.TX_CORR, r));
+        return withSetting(ModelOptions.TX_CORR, SpatialCorrelation.coefficient(ModelOptions.TX_CORR, r));
     }
 
     /** Exponential correlation coefficient r in (−1, 1) between neighbouring receive antennas. */
     public ChannelSpec withRxCorr(double r) {
-        return with(ModelOptions.RX_CORR, SpatialCorrelation.coefficient(ModelOptions.RX_CORR, r));
+        return withSetting(ModelOptions.RX_CORR, SpatialCorrelation.coefficient(ModelOptions.RX_CORR, r));
     }
 
     /** Full correlation matrices (for library use; the CLI has the exponential profiles). */
     public ChannelSpec withCorrelation(KroneckerCorrelation correlation) {
-        return with(ModelOptions.CORRELATION_MATRICES, java.util.Objects.requireNonNull(correlation));
+        return withSetting(ModelOptions.CORRELATION_MATRICES, java.util.Objects.requireNonNull(correlation));
     }
 
     /** Normalised Doppler f_D·T_s in [0, 0.5]; above 0 the channel changes every slot. */
     public ChannelSpec withDoppler(double normalisedDoppler) {
-        return with(ModelOptions.DOPPLER, DopplerChannel.checkDoppler(normalisedDoppler));
+        return withSetting(ModelOptions.DOPPLER, DopplerChannel.checkDoppler(normalisedDoppler));
     }
 
     /** CSI error variance σ² per entry (Ĥ = H + CN(0, σ²)), finite and ≥ 0. */
