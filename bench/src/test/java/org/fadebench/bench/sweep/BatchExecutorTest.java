@@ -17,6 +17,7 @@ import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.channel.ChannelSpec;
+import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.Fading;
 import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
@@ -126,6 +127,37 @@ class BatchExecutorTest {
                 Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
                         LlrMethod.MAXLOG));
         assertSameOutcome(link, new StopRules(20, 3000, 0, 0), new double[] {2, 6});
+    }
+
+    /**
+     * A plan survives serialisation whatever its link holds (each channel model, a trace, CSI
+     * settings, a channel code): the copy computes the same batch, bit for bit.
+     */
+    @Test
+    void everyKindOfPlanSurvivesSerialisation() {
+        ChannelTrace trace = ChannelTrace.of("ones", 1, 2, new double[] {1, 0, 0, 1, 0.5, 0.5, -1, 0});
+        ChannelSpec[] channels = {
+            ChannelSpec.of(Fading.RAYLEIGH).withRxCorr(0.4).withDoppler(0.01),
+            ChannelSpec.of(Fading.NAKAGAMI).withNakagamiM(2).withCsiError(0.1),
+            ChannelSpec.of(Fading.NONE),
+            ChannelSpec.of(Fading.RAYLEIGH).withTrace(trace),
+        };
+        for (ChannelSpec channel : channels) {
+            LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, channel, 256, 0,
+                    Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC24, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+                            LlrMethod.MAXLOG));
+            SweepPlan plan = new SweepPlan(link, new double[] {4, 8}, new StopRules(0, 500), 3, 50);
+            SweepPlan copy = (SweepPlan) roundTrip(plan);
+            assertEquals(plan.toString(), copy.toString());
+            for (BatchId id : new BatchId[] {new BatchId(0, 0), new BatchId(1, 1)}) {
+                BatchResult a = new BatchWorker(plan).compute(id);
+                BatchResult b = new BatchWorker(copy).compute(id);
+                assertEquals(a.counts().bitErrors(), b.counts().bitErrors(), link.describe());
+                assertEquals(a.counts().frameErrors(), b.counts().frameErrors(), link.describe());
+                assertEquals(a.counts().bitErrorsSquared(), b.counts().bitErrorsSquared(), 0.0, link.describe());
+                assertArrayEquals(a.channels(), b.channels(), link.describe());
+            }
+        }
     }
 
     /** An executor that stops taking batches before the sweep is over is an error, not a short result. */
