@@ -20,10 +20,6 @@ public final class LocalThreadExecutor implements BatchExecutor {
         this.threads = threads;
     }
 
-    public int threads() {
-        return threads;
-    }
-
     @Override
     public void execute(SweepPlan plan, Feed feed) {
         List<BatchWorker> workers = new ArrayList<>(threads);

@@ -76,11 +76,6 @@ public final class SweepEngine {
         this.recordedBlocks = blocks;
     }
 
-    /** The plan that {@link #run} follows for these SNR points. */
-    public SweepPlan plan(double[] snrDb) {
-        return new SweepPlan(link, snrDb, rules, seed, recordedBlocks);
-    }
-
     /** Asks a running sweep to stop after the batches in flight; safe from any thread. */
     public void requestStop() {
         stopRequested = true;
@@ -100,7 +95,7 @@ public final class SweepEngine {
      * settings) when it is not null.
      */
     public SweepOutcome run(double[] snrDb, List<PointState> resume, Listener listener) {
-        SweepPlan plan = plan(snrDb);
+        SweepPlan plan = new SweepPlan(link, snrDb, rules, seed, recordedBlocks);
         Session s = new Session(new SweepLedger(plan, confidence, resume));
         session = s;
         if (stopRequested) {
@@ -209,7 +204,7 @@ public final class SweepEngine {
                         progress = ledger.progress();
                         if (ledger.merges() != lastMerges) {
                             lastMerges = ledger.merges();
-                            states = ledger.states();
+                            states = progress.states();
                         }
                     }
                 }

@@ -102,7 +102,7 @@ public final class SweepLedger {
     /**
      * Takes a computed batch at time {@code nanos}: merges it and any batches it unblocks in
      * order, or discards it when its point is finished or cut, or the sweep was interrupted. A
-     * batch handed back twice counts once.
+     * batch handed back twice is merged once (its frames count as simulated each time).
      *
      * @throws IllegalArgumentException for a batch that was never handed out
      */
