@@ -178,7 +178,7 @@ public final class SweepEngine {
          */
         void report(Listener listener) {
             boolean interruptedThread = false;
-            long lastMerges = -1;
+            long lastMerges = 0;
             long nextTick = System.nanoTime() + progressMillis * 1_000_000;
             boolean running = true;
             while (running) {
