@@ -15,6 +15,16 @@ public final class ChannelRecorder {
     private final double[] matrices;
     private final double[] one;
 
+    /**
+     * Bytes that keeping {@code capacity} recorded Nr x Mt matrices takes (the sweep keeps those of
+     * the first point's first fading blocks, see {@code SweepLedger}); {@link Long#MAX_VALUE} when
+     * it is too large for one array.
+     */
+    public static long bufferBytes(int nr, int mt, int capacity) {
+        long values = 2L * nr * mt * capacity;
+        return values > Integer.MAX_VALUE - 8 ? Long.MAX_VALUE : 8 * values;
+    }
+
     /** A recorder of {@code blocks} Nr x Mt matrices, from fading block number {@code first} on. */
     public ChannelRecorder(int nr, int mt, long first, int blocks) {
         this.first = first;

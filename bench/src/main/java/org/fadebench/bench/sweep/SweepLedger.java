@@ -142,9 +142,11 @@ public final class SweepLedger {
         if (blocks == 0 || plan.firstFrame(b.id().batch()) * plan.link().fadingBlocksPerFrame() != keptBlocks) {
             return;
         }
-        int old = channels.length;
-        channels = Arrays.copyOf(channels, old + b.channels().length);
-        System.arraycopy(b.channels(), 0, channels, old, b.channels().length);
+        int per = b.channels().length / blocks;
+        if (channels.length == 0) {
+            channels = new double[per * plan.recordedBlocks()];
+        }
+        System.arraycopy(b.channels(), 0, channels, per * keptBlocks, b.channels().length);
         keptBlocks += blocks;
     }
 
@@ -206,8 +208,9 @@ public final class SweepLedger {
                 }
             }
         }
+        int per = 2 * plan.link().receiveAntennas() * plan.link().transmitAntennas();
         return new SweepOutcome(all, states(), interrupted && !finished(), stopReason, framesSimulated, sessionNanos,
-                channels.clone());
+                Arrays.copyOf(channels, per * keptBlocks));
     }
 
     private int lastPoint() {

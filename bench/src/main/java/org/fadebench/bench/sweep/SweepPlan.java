@@ -76,8 +76,13 @@ public record SweepPlan(LinkSettings link, double[] snrDb, StopRules rules, long
 
     /** Batches that hold {@code maxFrames}: its quotient by the batch size, rounded up, for any long. */
     public long maxBatches() {
-        long whole = rules.maxFrames() / batchFrames();
-        return rules.maxFrames() % batchFrames() == 0 ? whole : whole + 1;
+        return batches(rules.maxFrames(), batchFrames());
+    }
+
+    /** {@code frames / batchFrames} rounded up, without overflow for any positive long. */
+    static long batches(long frames, int batchFrames) {
+        long whole = frames / batchFrames;
+        return frames % batchFrames == 0 ? whole : whole + 1;
     }
 
     /** Number of the batch's first frame within its point (numbers the fading blocks). */
