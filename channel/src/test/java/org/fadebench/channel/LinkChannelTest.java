@@ -227,7 +227,7 @@ class LinkChannelTest {
         assertMessage("--doppler must be a normalised Doppler f_D·T_s in [0, 0.5], got 0.7", () -> s.withDoppler(0.7));
         assertMessage("--csi-error must be a finite error variance >= 0, got -0.5", () -> s.withCsiError(-0.5));
         assertMessage("--pilots must be 1 to 65536 (and at least Mt), got 0", () -> s.withPilots(0));
-        assertMessage("--fading must be one of rayleigh, rician, nakagami, none", () -> ChannelSpec.of(null));
+        assertMessage("--fading must be one of rayleigh, rician, nakagami, none", () -> ChannelSpec.of((Fading) null));
     }
 
     @Test
@@ -269,7 +269,7 @@ class LinkChannelTest {
         assertTrue(ChannelSpec.of(Fading.NONE).newModel(2, 2) instanceof NoFading);
         ChannelTrace trace = ChannelTrace.of("t.npy", 1, 1, new double[] {1, 0, 0, 1});
         assertTrue(ChannelSpec.of(Fading.RAYLEIGH).withTrace(trace).newModel(1, 1) instanceof TraceFading);
-        assertEquals("rician fading K=3.0, rx-corr 0.5, doppler 0.01, pilots 4", ChannelSpec.of(Fading.RICIAN).withKFactor(3)
+        assertEquals("rician K=3.0, rx-corr 0.5, doppler 0.01, pilots 4", ChannelSpec.of(Fading.RICIAN).withKFactor(3)
                 .withRxCorr(0.5).withDoppler(0.01).withPilots(4).toString());
         assertEquals("trace t.npy (2 matrices), csi-error 0.1", ChannelSpec.of(Fading.RAYLEIGH).withTrace(trace)
                 .withCsiError(0.1).describe());
@@ -277,19 +277,19 @@ class LinkChannelTest {
         assertEquals(4.0 / 20.0, pilots.pilotOverhead(16, 1), 1e-15);
         assertEquals(8.0 / 38.0, pilots.pilotOverhead(30, 2), 1e-15, "two blocks of 15 and 15 slots, 4 pilots each");
         assertEquals(0.0, ChannelSpec.of(Fading.RAYLEIGH).pilotOverhead(16, 1));
-        assertEquals("rayleigh fading, tx-corr 0.2, perfect CSI", ChannelSpec.of(Fading.RAYLEIGH).withTxCorr(0.2).describe());
+        assertEquals("rayleigh, tx-corr 0.2, perfect CSI", ChannelSpec.of(Fading.RAYLEIGH).withTxCorr(0.2).describe());
         assertEquals(0.2 * 2 / 4, pilots.newLinkChannel(3, 2, 8).csiErrorVariance(0.2), 1e-15);
     }
 
     @Test
     void fadingNames() {
-        assertEquals("rayleigh, rician, nakagami, none", Fading.choices());
-        assertEquals(Fading.NAKAGAMI, Fading.fromCliName(" Nakagami "));
+        assertEquals("rayleigh, rician, nakagami, none", ChannelModels.STANDARD.choices());
+        for (Fading f : Fading.values()) {
+            assertTrue(ChannelModels.STANDARD.has(f.cliName()), f.cliName());
+        }
+        assertEquals("nakagami m=2.0, perfect CSI", ChannelSpec.of(" Nakagami ").withNakagamiM(2).describe());
         assertEquals("unknown fading model 'foggy'; valid: rayleigh, rician, nakagami, none",
-                assertThrows(IllegalArgumentException.class, () -> Fading.fromCliName("foggy")).getMessage());
-        assertTrue(Fading.RAYLEIGH.model() instanceof RayleighFading);
-        assertEquals("rician fading has parameters: build it with ChannelSpec",
-                assertThrows(IllegalStateException.class, Fading.RICIAN::model).getMessage());
+                assertThrows(IllegalArgumentException.class, () -> ChannelSpec.of("foggy")).getMessage());
     }
 
     private static void assertCheck(String expected, ChannelSpec spec) {

@@ -44,7 +44,7 @@ public final class CsiAgeing {
      * change; empty for block fading or a block short enough.
      */
     public static Optional<String> warning(LinkSettings link) {
-        double fd = link.channel().doppler();
+        double fd = link.channel().model().normalisedDoppler();
         int block = link.effectiveCoherenceSlots();
         if (fd <= 0.0 || block < 2) {
             return Optional.empty();

@@ -22,7 +22,7 @@ import org.fadebench.bench.analysis.DiversityFit;
 import org.fadebench.bench.report.FerPlot;
 import org.fadebench.bench.settings.RunSettings;
 import org.fadebench.bench.settings.Setting;
-import org.fadebench.channel.Fading;
+import org.fadebench.channel.ChannelModels;
 import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.Interleaving;
@@ -48,7 +48,7 @@ class HelpAndExamplesTest {
     @Test
     void runHelpListsEveryFadingModel() {
         String help = collapse(CliTest.run("run", "--help").out());
-        assertTrue(help.contains("Fading model: " + Fading.choices() + ". "), help);
+        assertTrue(help.contains("Fading model: " + ChannelModels.STANDARD.choices() + ". "), help);
     }
 
     /** Every file a run leaves in its folder is named in the top-level help. */
@@ -145,7 +145,7 @@ class HelpAndExamplesTest {
         }
         Map<String, List<String>> choices = Map.of(
                 "code", names(StreamSupport.stream(SpaceTimeCodes.all().spliterator(), false).map(SpaceTimeCode::name)),
-                "fading", names(Stream.of(Fading.values()).map(Fading::cliName)),
+                "fading", List.of(ChannelModels.STANDARD.choices().split(", ")),
                 "modulation", names(Stream.of(Modulation.values()).map(Modulation::cliName)),
                 "decoder", names(Stream.of(Decoder.values()).map(Decoder::cliName)),
                 "fec", names(Stream.of(ChannelCode.values()).map(ChannelCode::cliName)),

@@ -268,7 +268,7 @@ class FerPlotTest {
                 Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
                         LlrMethod.MAXLOG));
         String run = FerPlot.runLine(link, 9);
-        for (String part : List.of("rician fading K=3.0", "rx-corr 0.5", "doppler 0.002", "pilots 4", "512 bits/frame",
+        for (String part : List.of("rician K=3.0", "rx-corr 0.5", "doppler 0.002", "pilots 4", "512 bits/frame",
                 "16 slots per fading block", "conv-r12 + crc16", "seed 9")) {
             assertTrue(run.contains(part), run + " lacks " + part);
         }
