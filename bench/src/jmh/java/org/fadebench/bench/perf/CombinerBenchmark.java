@@ -95,7 +95,7 @@ public class CombinerBenchmark {
     @Benchmark
     @OperationsPerInvocation(SYMBOLS)
     public double[][] alamoutiPlanarEncodeChannelCombine() {
-        AlamoutiKernel.encode(symbolPlanes, 0, SYMBOLS / 2, gridPlanes);
+        alamoutiPlanar.encode(symbolPlanes, 0, SYMBOLS / 2, gridPlanes);
         MimoChannel.applyTwoTransmittersPlanar(h22, 2, gridPlanes, 0, SYMBOLS / 2, 0.05, draws, rxPlanes);
         alamoutiPlanar.setChannel(h22);
         alamoutiPlanar.combine(rxPlanes, 0, SYMBOLS / 2, estimatePlanes);

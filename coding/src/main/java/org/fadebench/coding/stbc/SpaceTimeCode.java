@@ -1,6 +1,7 @@
 package org.fadebench.coding.stbc;
 
 import java.util.Objects;
+import java.util.Optional;
 
 /**
  * A linear space-time block code in dispersion-matrix form: K complex symbols s_k = a_k + j b_k are
@@ -165,6 +166,15 @@ public final class SpaceTimeCode {
             return newCombiner(nr);
         }
         return decoder == Decoder.ZF ? LinearEqualiser.zeroForcing(this, nr) : LinearEqualiser.mmse(this, nr, n0);
+    }
+
+    /**
+     * The kernel that runs this code on planar arrays for {@code nr} receive antennas (see
+     * {@link PlanarKernel}), or empty when the code has none (every code but Alamouti's today).
+     */
+    public Optional<PlanarKernel> newPlanarKernel(int nr) {
+        checkReceiveAntennas(nr);
+        return kernel == Kernel.ALAMOUTI ? Optional.of(new AlamoutiKernel(nr)) : Optional.empty();
     }
 
     static void checkReceiveAntennas(int nr) {
