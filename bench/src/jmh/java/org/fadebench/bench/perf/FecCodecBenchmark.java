@@ -7,6 +7,7 @@ import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecCodec;
 import org.fadebench.coding.fec.FecScheme;
+import org.fadebench.coding.fec.conv.PuncturedCode;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -35,7 +36,7 @@ public class FecCodecBenchmark {
 
     private static final int PAYLOAD_BITS = 1000;
 
-    private static final int FRAMES = FecScheme.MAX_LANES;
+    private static final int FRAMES = ChannelCode.MAX_LANES;
 
     private FecCodec codec;
     private double[][] llr;
@@ -43,7 +44,7 @@ public class FecCodecBenchmark {
 
     @Setup
     public void setUp() {
-        FecScheme scheme = new FecScheme(Crc.CRC24, ChannelCode.CONV_R34);
+        FecScheme scheme = new FecScheme(Crc.CRC24, PuncturedCode.CONV_R34);
         int n = scheme.codedBits(PAYLOAD_BITS);
         codec = scheme.newCodec(PAYLOAD_BITS, BitInterleaver.random(n, 1), FRAMES);
         Random random = new Random(1);

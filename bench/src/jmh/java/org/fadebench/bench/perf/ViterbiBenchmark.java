@@ -2,8 +2,8 @@ package org.fadebench.bench.perf;
 
 import java.util.Random;
 import java.util.concurrent.TimeUnit;
-import org.fadebench.coding.fec.ConvolutionalCode;
-import org.fadebench.coding.fec.ViterbiDecoder;
+import org.fadebench.coding.fec.conv.ConvolutionalCode;
+import org.fadebench.coding.fec.conv.ViterbiDecoder;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;

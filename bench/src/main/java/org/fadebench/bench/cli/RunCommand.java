@@ -8,6 +8,7 @@ import org.fadebench.bench.analysis.BoundSettings;
 import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
@@ -53,8 +54,8 @@ final class RunCommand implements Callable<Integer> {
     String decoder;
 
     @Option(names = "--fec", paramLabel = "NAME", defaultValue = "none",
-            description = "Channel code: none, conv-r12, conv-r23, conv-r34 (64-state (133,171) code, punctured), "
-                    + "conv-small (4-state (5,7)) (default: ${DEFAULT-VALUE}).")
+            completionCandidates = ChannelCodeNames.class,
+            description = "Channel code: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     String fec;
 
     @Option(names = "--crc", paramLabel = "NAME", defaultValue = "none",
@@ -425,8 +426,8 @@ final class RunCommand implements Callable<Integer> {
     /** CRC, channel code, interleaver and LLRs from their options. */
     private FrameCoding frameCoding() {
         Crc c = parse("--crc", () -> Crc.fromCliName(crc));
-        ChannelCode code = parse("--fec", () -> ChannelCode.fromCliName(fec));
-        boolean coded = c != Crc.NONE || code != ChannelCode.NONE;
+        ChannelCode code = parse("--fec", () -> ChannelCodes.standard().find(fec));
+        boolean coded = c != Crc.NONE || code != ChannelCodes.NONE;
         Interleaving il = interleaver != null ? parse("--interleaver", () -> Interleaving.fromCliName(interleaver))
                 : coded ? Interleaving.RANDOM : Interleaving.NONE;
         LlrMethod method = parse("--llr", () -> LlrMethod.fromCliName(llr));
@@ -439,6 +440,14 @@ final class RunCommand implements Callable<Integer> {
             return parser.get();
         } catch (IllegalArgumentException e) {
             throw new InvalidInputException(option == null ? e.getMessage() : option + ": " + e.getMessage());
+        }
+    }
+
+    /** The names {@code --fec} takes, for its help: the channel-code registry's. */
+    static final class ChannelCodeNames implements Iterable<String> {
+        @Override
+        public java.util.Iterator<String> iterator() {
+            return ChannelCodes.standard().all().stream().map(ChannelCode::cliName).iterator();
         }
     }
 }

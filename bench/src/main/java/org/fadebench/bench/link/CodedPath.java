@@ -42,7 +42,7 @@ final class CodedPath implements FramePath {
         this.frameBits = settings.frameBits();
         this.symbols = settings.symbolsPerFrame();
         this.bitsPerSymbol = settings.modulation().bitsPerSymbol();
-        this.lanes = settings.framesDecodedTogether();
+        this.lanes = settings.lanes();
         this.withCrc = coding.scheme().crc() != Crc.NONE;
         this.codec = coding.scheme().newCodec(frameBits, coding.interleaver(frameBits), lanes);
         this.codedLength = codec.codedBits();

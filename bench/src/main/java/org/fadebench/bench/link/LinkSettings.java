@@ -120,11 +120,11 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
     }
 
     /**
-     * How many frames the receiver decodes together: 1 without a convolutional code (see
-     * {@link FecScheme#decodeLanes}).
+     * Lanes: how many frames the receiver decodes together (see {@link FecScheme#lanes}); 1 for an
+     * uncoded link.
      */
-    public int framesDecodedTogether() {
-        return coding.scheme().decodeLanes(frameBits);
+    public int lanes() {
+        return coding.scheme().lanes(frameBits);
     }
 
     /** Channel uses (slots) per frame. */

@@ -69,12 +69,12 @@ public final class SweepEngine {
 
     /**
      * About {@link #BATCH_SYMBOLS} symbols of whole frames, rounded up to a whole number of the
-     * groups the receiver decodes together, so that no group is cut short.
+     * link's {@link LinkSettings#lanes() lanes}, so that no group decoded together is cut short.
      */
     static int batchFrames(LinkSettings link) {
         int frames = Math.max(1, BATCH_SYMBOLS / link.symbolsPerFrame());
-        int group = link.framesDecodedTogether();
-        return (frames + group - 1) / group * group;
+        int lanes = link.lanes();
+        return (frames + lanes - 1) / lanes * lanes;
     }
 
     /** Frames per batch (depends only on the link). */

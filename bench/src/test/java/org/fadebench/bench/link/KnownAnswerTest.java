@@ -20,10 +20,10 @@ import org.fadebench.bench.sweep.SweepEngine;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.Fading;
-import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
+import org.fadebench.coding.fec.conv.PuncturedCode;
 import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.SpaceTimeCodeFile;
@@ -102,7 +102,7 @@ class KnownAnswerTest {
     /** Alamouti 2x1 QPSK with conv-r12 + crc24, random interleaver, max-log LLRs: the lane decoder. */
     @Test
     void codedAlamoutiLaneDecoder() {
-        FrameCoding coding = new FrameCoding(new FecScheme(Crc.CRC24, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+        FrameCoding coding = new FrameCoding(new FecScheme(Crc.CRC24, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                 LlrMethod.MAXLOG);
         LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, RAYLEIGH, 200, 0,
                 Decoder.MF, coding);

@@ -11,10 +11,10 @@ import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.Draws;
 import org.fadebench.channel.Fading;
-import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
+import org.fadebench.coding.fec.conv.PuncturedCode;
 import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
@@ -97,7 +97,7 @@ class PlanarPathTest {
         assertFalse(new LinkChain(alamouti(Modulation.QPSK, 2, rayleigh.withDoppler(0.01), 256, 0, Decoder.MF))
                 .planar());
         assertFalse(new LinkChain(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2, rayleigh, 256, 0,
-                Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+                Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                 LlrMethod.MAXLOG))).planar());
         assertFalse(new LinkChain(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.G4, 4, 1, Fading.RAYLEIGH, 256, 0))
                 .planar());

@@ -1,4 +1,4 @@
-package org.fadebench.coding.fec;
+package org.fadebench.coding.fec.conv;
 
 /**
  * Periodic puncturing of a terminated convolutional code. The pattern has one row per code output

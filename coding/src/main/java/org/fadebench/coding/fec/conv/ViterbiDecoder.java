@@ -1,6 +1,7 @@
-package org.fadebench.coding.fec;
+package org.fadebench.coding.fec.conv;
 
 import java.util.Arrays;
+import org.fadebench.coding.fec.Lanes;
 
 /**
  * Soft-input Viterbi decoder for a zero-tail terminated {@link ConvolutionalCode}: maximum
@@ -99,6 +100,14 @@ public final class ViterbiDecoder {
         this.decided = new byte[lanes][infoBits];
     }
 
+    /**
+     * Bytes of the rows one lane holds for frames of {@code infoBits}: a 4-byte soft input per
+     * mother-code bit and a 4-byte decision word per 32 states, per trellis step.
+     */
+    public static long bytesPerLane(ConvolutionalCode code, int infoBits) {
+        return 4L * code.steps(infoBits) * (code.outputs() + (code.states() + 31) / 32);
+    }
+
     /** The code this decoder decodes. */
     public ConvolutionalCode code() {
         return code;
@@ -128,7 +137,7 @@ public final class ViterbiDecoder {
      * @throws IllegalArgumentException if the lane is out of range or an LLR is not finite
      */
     public void load(int lane, double[] llr, int off) {
-        checkLane(lane, lanes);
+        Lanes.checkLane(lane, lanes);
         final int n = soft.length;
         double peak = 0;
         for (int i = 0; i < n; i++) {
@@ -150,9 +159,7 @@ public final class ViterbiDecoder {
      * @throws IllegalArgumentException if {@code frames} is not from 1 to {@link #lanes()}
      */
     public void decode(int frames) {
-        if (frames < 1 || frames > lanes) {
-            throw new IllegalArgumentException("batch of " + frames + " frames; this decoder takes 1 to " + lanes);
-        }
+        Lanes.checkFrames(frames, lanes);
         start(frames);
         for (int t = 0; t < steps; t++) {
             branchMetrics(t, frames);
@@ -167,7 +174,7 @@ public final class ViterbiDecoder {
      * byte, to {@code out[outOff ..]}.
      */
     public void decided(int lane, byte[] out, int outOff) {
-        checkLane(lane, decodedLanes);
+        Lanes.checkLane(lane, decodedLanes);
         System.arraycopy(decided[lane], 0, out, outOff, infoBits);
     }
 
@@ -176,12 +183,6 @@ public final class ViterbiDecoder {
         load(0, llr, off);
         decode(1);
         decided(0, out, outOff);
-    }
-
-    private static void checkLane(int lane, int count) {
-        if (lane < 0 || lane >= count) {
-            throw new IllegalArgumentException("lane " + lane + "; valid lanes are 0 to " + (count - 1));
-        }
     }
 
     private void start(int n) {
