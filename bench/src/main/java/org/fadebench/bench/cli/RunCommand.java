@@ -25,7 +25,7 @@ import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.Fading;
 import org.fadebench.channel.KroneckerCorrelation;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.modem.Modulation;
 import picocli.CommandLine;
@@ -194,7 +194,7 @@ final class RunCommand implements Callable<Integer> {
         }
         if (!plan.link().code().isOrthogonal() && !plan.quiet()) {
             spec.commandLine().getErr().println("fadebench run: warning: code " + plan.link().code().name()
-                    + " is not orthogonal; " + plan.link().decoder().cliName()
+                    + " is not orthogonal; " + plan.link().equaliser().cliName()
                     + " linear decoding is not maximum-likelihood, so expect a loss against ML decoding");
         }
         return new SweepJob(plan, spec.commandLine().getOut()).run();
@@ -271,8 +271,8 @@ final class RunCommand implements Callable<Integer> {
     RunPlan plan(Scenario scenario) {
         Modulation mod = linkOptions.modulation();
         SpaceTimeCode stbc = linkOptions.code();
-        Decoder dec = decoder != null ? parse("--decoder", () -> Decoder.fromCliName(decoder))
-                : stbc.isOrthogonal() ? Decoder.MF : Decoder.MMSE;
+        Equaliser dec = decoder != null ? parse("--decoder", () -> Equaliser.fromCliName(decoder))
+                : stbc.isOrthogonal() ? Equaliser.MF : Equaliser.MMSE;
         ChannelSpec channel = withCorrelationMatrices(channelSpec(), scenario, linkOptions.rx,
                 linkOptions.transmitAntennas(stbc));
         double[] snrDb = parse(null, () -> SnrGrid.parse(snr));

@@ -28,7 +28,7 @@ record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rule
     Map<String, Object> settings() {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("code", link.code().name());
-        m.put("decoder", link.decoder().cliName());
+        m.put("decoder", link.equaliser().cliName());
         m.put("tx", link.transmitAntennas());
         m.put("rx", link.receiveAntennas());
         m.put("mod", link.modulation().cliName());
@@ -62,7 +62,7 @@ record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rule
 
     /** Every setting that changes the numbers, for the checkpoint's fingerprint. */
     String numbersFingerprintText(int batchFrames) {
-        return String.join("|", "v3", link.describe(), link.coding().toString(), link.channel().describe(), SpaceTimeCodeFile.format(link.code()), link.decoder().cliName(),
+        return String.join("|", "v3", link.describe(), link.coding().toString(), link.channel().describe(), SpaceTimeCodeFile.format(link.code()), link.equaliser().cliName(),
                 link.modulation().cliName(),
                 link.fading().cliName(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),
                 Long.toString(rules.minErrors()), Long.toString(rules.maxFrames()), Double.toString(rules.maxSeconds()),

@@ -3,19 +3,19 @@ package org.fadebench.bench.link;
 import org.fadebench.channel.Draws;
 import org.fadebench.channel.LinkChannel;
 import org.fadebench.coding.stbc.Combiner;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.StbcEncoder;
 
 /**
- * {@link Transmission} on interleaved complex arrays, for every code, channel and decoder: the
+ * {@link Transmission} on interleaved complex arrays, for every code, channel and equaliser: the
  * code's encoder and combiner (its specialised kernel where it has one), one fading block's grid
  * and received signal at a time.
  */
 final class InterleavedTransmission extends Transmission {
 
     private final SpaceTimeCode code;
-    private final Decoder decoder;
+    private final Equaliser equaliser;
     private final int nr;
     private final int symbolsPerBlock;
     private final StbcEncoder encoder;
@@ -33,12 +33,12 @@ final class InterleavedTransmission extends Transmission {
     InterleavedTransmission(LinkSettings settings, LinkChannel channel) {
         super(settings, channel);
         this.code = settings.code();
-        this.decoder = settings.decoder();
+        this.equaliser = settings.equaliser();
         this.nr = settings.receiveAntennas();
         this.symbolsPerBlock = code.symbolsPerBlock();
         this.encoder = code.newEncoder();
         this.combinerN0 = 1.0;
-        this.combiner = code.newCombiner(nr, decoder, combinerN0);
+        this.combiner = code.newCombiner(nr, equaliser, combinerN0);
         int fadeSlots = settings.effectiveCoherenceSlots() / code.slotsPerBlock() * code.slotsPerBlock();
         this.grid = new double[2 * fadeSlots * settings.transmitAntennas()];
         this.received = new double[2 * fadeSlots * nr];
@@ -50,9 +50,9 @@ final class InterleavedTransmission extends Transmission {
 
     @Override
     void prepare(double n0) {
-        if (n0 != combinerN0 && decoder == Decoder.MMSE) {
+        if (n0 != combinerN0 && equaliser == Equaliser.MMSE) {
             // MMSE weights depend on the noise level: a new combiner when the SNR point changes
-            combiner = code.newCombiner(nr, Decoder.MMSE, n0);
+            combiner = code.newCombiner(nr, Equaliser.MMSE, n0);
             combinerN0 = n0;
         }
     }

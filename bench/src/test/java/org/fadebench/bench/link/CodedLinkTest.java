@@ -17,7 +17,7 @@ import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
 import org.fadebench.coding.fec.conv.PuncturedCode;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
@@ -30,7 +30,7 @@ class CodedLinkTest {
                                              LlrMethod llr) {
         FrameCoding coding = new FrameCoding(new FecScheme(crc, code), Interleaving.RANDOM, 0, llr);
         return new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, rx, Fading.RAYLEIGH, frameBits, coherence,
-                Decoder.MF, coding);
+                Equaliser.MF, coding);
     }
 
     private static List<PointResult> run(LinkSettings l, double[] snr, long minErrors, long maxFrames) {
@@ -59,7 +59,7 @@ class CodedLinkTest {
             FrameCoding coding = new FrameCoding(new FecScheme(Crc.CRC24, code), Interleaving.RANDOM, 0,
                     LlrMethod.EXACT);
             LinkSettings l = new LinkSettings(Modulation.QAM16, SpaceTimeCodes.NONE, 1, 1, Fading.NONE, 500, 0,
-                    Decoder.MF, coding);
+                    Equaliser.MF, coding);
             FrameCounters c = run(l, new double[] {30}, 0, 300).get(0).counts();
             assertEquals(0, c.frameErrors(), code.cliName());
             assertEquals(0, c.crcFailures(), code.cliName());
@@ -120,13 +120,13 @@ class CodedLinkTest {
     @Test
     void badCodingInput() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new LinkSettings(
-                Modulation.QPSK, SpaceTimeCodes.NONE, 1, 1, Fading.RAYLEIGH, 100, 0, Decoder.MF,
+                Modulation.QPSK, SpaceTimeCodes.NONE, 1, 1, Fading.RAYLEIGH, 100, 0, Equaliser.MF,
                 new FrameCoding(new FecScheme(Crc.NONE, PuncturedCode.CONV_R12), Interleaving.BLOCK, 7,
                         LlrMethod.MAXLOG)));
         assertTrue(e.getMessage().startsWith("--interleaver-rows 7 does not divide the 212 coded bits per frame; "
                 + "valid: a divisor such as 2, 4"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> new LinkSettings(Modulation.QPSK, SpaceTimeCodes.NONE,
-                1, 1, Fading.RAYLEIGH, 100, 0, Decoder.MF,
+                1, 1, Fading.RAYLEIGH, 100, 0, Equaliser.MF,
                 new FrameCoding(FecScheme.NONE, Interleaving.RANDOM, 0, LlrMethod.MAXLOG)));
         assertTrue(e.getMessage().contains("needs a coded frame"), e.getMessage());
     }

@@ -16,7 +16,7 @@ import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
 import org.fadebench.coding.fec.LaneCoder;
 import org.fadebench.coding.fec.Lanes;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.ErrorRates;
 import org.fadebench.modem.LlrMethod;
@@ -121,7 +121,7 @@ class RepetitionCodeLinkTest {
         ChannelCode rep3 = codes.find("rep3");
         FrameCoding coding = new FrameCoding(new FecScheme(Crc.CRC16, rep3), Interleaving.RANDOM, 0, LlrMethod.EXACT);
         LinkSettings link = new LinkSettings(Modulation.BPSK, SpaceTimeCodes.NONE, 1, 1, Fading.NONE, PAYLOAD_BITS, 0,
-                Decoder.MF, coding);
+                Equaliser.MF, coding);
         assertEquals(3 * (PAYLOAD_BITS + 16), link.codedBitsPerFrame());
         assertEquals(ChannelCode.MAX_LANES, link.lanes());
         double[] snrDb = {-3, 0};

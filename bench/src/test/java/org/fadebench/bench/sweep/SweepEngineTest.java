@@ -12,7 +12,7 @@ import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
 import org.fadebench.coding.fec.conv.PuncturedCode;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
@@ -54,7 +54,7 @@ class SweepEngineTest {
     @Test
     void codedBatchesAreWholeDecodeGroups() {
         LinkSettings coded = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, Fading.RAYLEIGH, 1024, 0,
-                Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
+                Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                         LlrMethod.MAXLOG));
         assertEquals(128, coded.lanes());
         assertEquals(128, SweepEngine.batchFrames(coded));

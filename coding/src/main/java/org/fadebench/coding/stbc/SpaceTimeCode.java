@@ -148,24 +148,24 @@ public final class SpaceTimeCode {
     }
 
     /**
-     * The combiner for {@code nr} receive antennas and the given decoder. For an orthogonal code
+     * The combiner for {@code nr} receive antennas and the given equaliser. For an orthogonal code
      * ZF and MMSE give exactly the matched filter's estimates and gains, so the matched filter
-     * (the fast kernel where there is one) serves every decoder.
+     * (the fast kernel where there is one) serves every equaliser.
      *
      * @param n0 noise density (complex noise variance per receive entry); read by MMSE only, which
      *           needs it finite and not negative, and a new combiner per value
      * @throws IllegalArgumentException for nr < 1, a bad n0 for MMSE, or ZF on a code it cannot
      *                                  separate with nr antennas
      */
-    public Combiner newCombiner(int nr, Decoder decoder, double n0) {
+    public Combiner newCombiner(int nr, Equaliser equaliser, double n0) {
         checkReceiveAntennas(nr);
-        if (decoder == Decoder.MMSE) {
+        if (equaliser == Equaliser.MMSE) {
             LinearEqualiser.checkNoise(n0);
         }
-        if (decoder == Decoder.MF || orthogonal) {
+        if (equaliser == Equaliser.MF || orthogonal) {
             return newCombiner(nr);
         }
-        return decoder == Decoder.ZF ? LinearEqualiser.zeroForcing(this, nr) : LinearEqualiser.mmse(this, nr, n0);
+        return equaliser == Equaliser.ZF ? LinearEqualiser.zeroForcing(this, nr) : LinearEqualiser.mmse(this, nr, n0);
     }
 
     /**

@@ -4,10 +4,11 @@ import java.util.Arrays;
 import java.util.stream.Collectors;
 
 /**
- * The linear decoders a link can use in front of per-symbol slicing. For an orthogonal code all
+ * The linear equalisers a link can use in front of per-symbol slicing or demapping (the option
+ * {@code --decoder}; not to be confused with a channel code's decoder). For an orthogonal code all
  * three give the same estimates and gains; they differ only for non-orthogonal codes.
  */
-public enum Decoder {
+public enum Equaliser {
     /** Matched filter: z = Fᵀy divided by diag(FᵀF) ({@link MatchedFilterCombiner}). */
     MF("mf"),
     /** Zero forcing: (FᵀF)⁻¹Fᵀy ({@link LinearEqualiser#zeroForcing}). */
@@ -17,7 +18,7 @@ public enum Decoder {
 
     private final String cliName;
 
-    Decoder(String cliName) {
+    Equaliser(String cliName) {
         this.cliName = cliName;
     }
 
@@ -27,12 +28,12 @@ public enum Decoder {
     }
 
     /**
-     * Looks a decoder up by its command-line name, ignoring case.
+     * Looks an equaliser up by its command-line name ({@code --decoder}), ignoring case.
      *
      * @throws IllegalArgumentException naming the valid choices when the name is unknown
      */
-    public static Decoder fromCliName(String name) {
-        for (Decoder d : values()) {
+    public static Equaliser fromCliName(String name) {
+        for (Equaliser d : values()) {
             if (d.cliName.equalsIgnoreCase(name.trim())) {
                 return d;
             }
@@ -42,6 +43,6 @@ public enum Decoder {
 
     /** The valid command-line names, comma separated. */
     public static String choices() {
-        return Arrays.stream(values()).map(Decoder::cliName).collect(Collectors.joining(", "));
+        return Arrays.stream(values()).map(Equaliser::cliName).collect(Collectors.joining(", "));
     }
 }
