@@ -36,7 +36,7 @@ public final class ChannelTrace {
      * @throws IllegalArgumentException on a bad shape, an empty or ragged array, or a non-finite entry
      */
     public static ChannelTrace of(String source, int nr, int mt, double[] matrices) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         int per = 2 * nr * mt;
         if (matrices.length == 0 || matrices.length % per != 0) {
             throw new IllegalArgumentException(source + ": need a positive multiple of 2·Nr·Mt = " + per

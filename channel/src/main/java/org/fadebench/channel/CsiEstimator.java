@@ -42,7 +42,7 @@ public final class CsiEstimator {
     private final double[] received;
 
     private CsiEstimator(int nr, int mt, double errorVariance, int pilots) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         this.nr = nr;
         this.mt = mt;
         this.errorVariance = errorVariance;

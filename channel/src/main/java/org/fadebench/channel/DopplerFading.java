@@ -53,7 +53,7 @@ public final class DopplerFading {
      */
     public DopplerFading(int nr, int mt, double normalisedDoppler, double kFactor,
                          KroneckerCorrelation correlation) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         if (!(normalisedDoppler >= 0.0 && normalisedDoppler <= 0.5)) {
             throw new IllegalArgumentException("normalised Doppler f_D·T_s must be in [0, 0.5], got "
                     + normalisedDoppler);

@@ -49,7 +49,7 @@ public final class KroneckerCorrelation {
 
     /** No correlation: H = H_w. */
     public static KroneckerCorrelation identity(int nr, int mt) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         return new KroneckerCorrelation(nr, mt, null, null);
     }
 
@@ -58,7 +58,7 @@ public final class KroneckerCorrelation {
      * in (−1, 1); a coefficient of 0 means no correlation on that side.
      */
     public static KroneckerCorrelation exponential(int nr, int mt, double rxCoefficient, double txCoefficient) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         double[] rx = rxCoefficient == 0.0 ? null : exponentialMatrix(nr, rxCoefficient, 0.0);
         double[] tx = txCoefficient == 0.0 ? null : exponentialMatrix(mt, txCoefficient, 0.0);
         return of(nr, mt, rx, tx);
@@ -73,7 +73,7 @@ public final class KroneckerCorrelation {
      *     positive semidefinite
      */
     public static KroneckerCorrelation of(int nr, int mt, double[] rx, double[] tx) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         return new KroneckerCorrelation(nr, mt,
                 rx == null ? null : squareRoot("rx correlation matrix", rx, nr),
                 tx == null ? null : squareRoot("tx correlation matrix", tx, mt));

@@ -23,7 +23,6 @@ import org.fadebench.bench.sweep.SnrGrid;
 import org.fadebench.bench.sweep.StopRules;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
-import org.fadebench.channel.Fading;
 import org.fadebench.channel.KroneckerCorrelation;
 import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCode;
@@ -381,9 +380,9 @@ final class RunCommand implements Callable<Integer> {
 
     /** The channel from its options; only the options given are passed on. */
     private ChannelSpec channelSpec() {
-        Fading fad = parse("--fading", () -> Fading.fromCliName(fading));
+        ChannelSpec named = parse("--fading", () -> ChannelSpec.of(fading));
         return parse(null, () -> {
-            ChannelSpec c = ChannelSpec.of(fad);
+            ChannelSpec c = named;
             if (kFactor != null) {
                 c = c.withKFactor(kFactor);
             }

@@ -32,7 +32,7 @@ record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rule
         m.put("tx", link.transmitAntennas());
         m.put("rx", link.receiveAntennas());
         m.put("mod", link.modulation().cliName());
-        m.put("fading", link.fading().cliName());
+        m.put("fading", link.fading());
         m.put("channel", link.channel().describe());
         m.put("fec", link.coding().scheme().code().cliName());
         m.put("crc", link.coding().scheme().crc().cliName());
@@ -64,7 +64,7 @@ record RunPlan(LinkSettings link, String snrSpec, double[] snrDb, StopRules rule
     String numbersFingerprintText(int batchFrames) {
         return String.join("|", "v3", link.describe(), link.coding().toString(), link.channel().describe(), SpaceTimeCodeFile.format(link.code()), link.equaliser().cliName(),
                 link.modulation().cliName(),
-                link.fading().cliName(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),
+                link.fading(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),
                 Long.toString(rules.minErrors()), Long.toString(rules.maxFrames()), Double.toString(rules.maxSeconds()),
                 Double.toString(rules.ferFloor()), Long.toString(seed), Integer.toString(batchFrames));
     }

@@ -47,9 +47,9 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
                 equaliser, FrameCoding.NONE);
     }
 
-    /** The fading model's name (a trace reports the model it replaces, see {@link ChannelSpec}). */
-    public Fading fading() {
-        return channel.fading();
+    /** The fading model's name (a trace reports the model it replaces, see {@link ChannelSpec#modelName}). */
+    public String fading() {
+        return channel.modelName();
     }
 
     public LinkSettings {
