@@ -111,10 +111,8 @@ public final class ChannelSpec {
 
     /** CSI error variance σ² per entry (Ĥ = H + CN(0, σ²)), finite and ≥ 0. */
     public ChannelSpec withCsiError(double variance) {
-        if (!(variance >= 0.0 && variance < Double.POSITIVE_INFINITY)) {
-            throw new IllegalArgumentException("--csi-error must be a finite error variance >= 0, got " + variance);
-        }
-        return new ChannelSpec(registry, name, given, options, trace, variance, pilots);
+        return new ChannelSpec(registry, name, given, options, trace, CsiEstimator.checkErrorVariance(variance),
+                pilots);
     }
 
     /** Least-squares CSI from this many pilot slots per fading block, 1 to {@value CsiEstimator#MAX_PILOTS} (and ≥ Mt). */

@@ -25,8 +25,8 @@ public record DopplerChannel(ScatteredChannel scattered, double normalisedDopple
 
     /** {@code scattered} with the {@link ModelOptions#DOPPLER} of {@code options}, if one was given. */
     static ChannelModel over(ScatteredChannel scattered, ModelOptions options) {
-        Object fd = options.get(ModelOptions.DOPPLER);
-        return fd == null ? scattered : new DopplerChannel(scattered, (Double) fd);
+        Double fd = options.number(ModelOptions.DOPPLER);
+        return fd == null ? scattered : new DopplerChannel(scattered, fd);
     }
 
     @Override

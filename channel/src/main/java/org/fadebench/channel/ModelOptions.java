@@ -59,12 +59,24 @@ public final class ModelOptions {
         if (!has(key)) {
             throw new IllegalArgumentException("--fading " + model + " needs " + key + " (" + what + ")");
         }
-        return (Double) given.get(key);
+        return number(key);
+    }
+
+    /** The number given for {@code key}, or null when it was not given. */
+    public Double number(String key) {
+        Object v = given.get(key);
+        if (v != null && !(v instanceof Number)) {
+            throw new IllegalArgumentException(key + " must be a number, got " + v);
+        }
+        return v == null ? null : ((Number) v).doubleValue();
     }
 
     /** The spatial correlation given by {@link #TX_CORR}, {@link #RX_CORR} or {@link #CORRELATION_MATRICES}. */
     public SpatialCorrelation correlation() {
-        return new SpatialCorrelation((Double) get(RX_CORR), (Double) get(TX_CORR),
-                (KroneckerCorrelation) get(CORRELATION_MATRICES));
+        Object matrices = get(CORRELATION_MATRICES);
+        if (matrices != null && !(matrices instanceof KroneckerCorrelation)) {
+            throw new IllegalArgumentException(CORRELATION_MATRICES + " must be a KroneckerCorrelation, got " + matrices);
+        }
+        return new SpatialCorrelation(number(RX_CORR), number(TX_CORR), (KroneckerCorrelation) matrices);
     }
 }
