@@ -4,8 +4,8 @@ import java.util.Objects;
 
 /**
  * What a link does to its payload before modulation: append a CRC, then encode with a channel code
- * (termination and puncturing included). Answers the sizes the link needs; {@link #newCodec} gives the
- * per-thread worker that does it.
+ * (termination and puncturing included). Answers the sizes the link needs; {@link #newCodec} gives
+ * the per-thread worker that does it.
  *
  * @param crc  the check appended to each payload
  * @param code the channel code applied to payload and check

@@ -30,6 +30,9 @@ public interface LaneCoder {
      */
     void decode(int frames);
 
-    /** Copies the decided information bits of a lane of the last {@link #decode}, one per byte, to {@code info[off ..]}. */
+    /**
+     * Copies the decided information bits of a lane of the last {@link #decode}, one per byte, to
+     * {@code info[off ..]}.
+     */
     void decided(int lane, byte[] info, int off);
 }
