@@ -19,6 +19,7 @@ public record TraceChannel(ChannelTrace trace) implements ChannelModel {
     public void check(int nr, int mt) {
         try {
             trace.requireShape(nr, mt);
+            trace.requireLinkRange();
         } catch (IllegalArgumentException e) {
             throw new IllegalArgumentException("--trace " + e.getMessage(), e);
         }

@@ -48,7 +48,7 @@ final class BoundsCommand implements Callable<Integer> {
             OUTAGE_DRAWS, FOLDER);
 
     /** Where {@code bounds} differs from {@code run}'s defaults. */
-    static final Map<Setting, String> DEFAULTS = Map.of(SNR_DB, "0:2:30", FOLDER, "fadebench-bounds");
+    static final Map<Setting, String> DEFAULTS = Map.of(SNR_DB, "0..30/2", FOLDER, "fadebench-bounds");
 
     @CommandLine.Spec
     CommandSpec spec;

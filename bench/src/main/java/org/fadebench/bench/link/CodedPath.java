@@ -53,6 +53,14 @@ final class CodedPath implements FramePath {
         this.llr = new double[symbols * bitsPerSymbol];
     }
 
+    /** Bytes the constructor allocates: payloads of every lane, bits and LLRs sent, and the codec's buffers. */
+    static long bufferBytes(LinkSettings settings) {
+        int lanes = settings.lanes();
+        long sentBits = (long) settings.symbolsPerFrame() * settings.modulation().bitsPerSymbol();
+        return (lanes + 1L) * settings.frameBits() + 9 * sentBits
+                + FecCodec.bufferBytes(settings.coding().scheme(), settings.frameBits(), lanes);
+    }
+
     @Override
     public void runFrames(Draws draws, double n0, long first, int count, FrameCounters counters) {
         for (int done = 0; done < count; done += lanes) {

@@ -28,6 +28,11 @@ final class GeneralPath implements FramePath {
         this.sent = new int[symbols];
     }
 
+    /** Bytes of the labels the constructor allocates. */
+    static long bufferBytes(LinkSettings settings) {
+        return 4L * settings.symbolsPerFrame();
+    }
+
     @Override
     public void runFrames(Draws draws, double n0, long first, int count, FrameCounters counters) {
         for (int f = 0; f < count; f++) {

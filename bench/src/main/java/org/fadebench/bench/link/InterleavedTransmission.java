@@ -48,6 +48,13 @@ final class InterleavedTransmission extends Transmission {
         this.gain = new double[n];
     }
 
+    /** Bytes of the buffers the constructor allocates: symbols, estimates, gains, one fading block's grid and signal. */
+    static long bufferBytes(LinkSettings settings) {
+        long fadeSlots = settings.effectiveCoherenceSlots();
+        return 8 * 5L * settings.symbolsPerFrame()
+                + 8 * 2 * fadeSlots * (settings.transmitAntennas() + settings.receiveAntennas());
+    }
+
     @Override
     void prepare(double n0) {
         if (n0 != combinerN0 && equaliser == Equaliser.MMSE) {

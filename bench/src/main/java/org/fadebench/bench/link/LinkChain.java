@@ -1,6 +1,5 @@
 package org.fadebench.bench.link;
 
-import java.util.Optional;
 import org.fadebench.channel.Draws;
 import org.fadebench.channel.LinkChannel;
 import org.fadebench.coding.stbc.PlanarKernel;
@@ -39,11 +38,9 @@ public final class LinkChain implements FramePath {
         this.settings = settings;
         LinkChannel channel = settings.channel().newLinkChannel(settings.receiveAntennas(),
                 settings.transmitAntennas(), settings.effectiveCoherenceSlots());
-        Optional<PlanarKernel> kernel = planar && !settings.coding().coded() && !channel.varies()
-                ? settings.code().newPlanarKernel(settings.receiveAntennas())
-                : Optional.empty();
-        if (kernel.isPresent()) {
-            PlanarTransmission planes = new PlanarTransmission(settings, channel, kernel.get());
+        if (planar && planarApplies(settings)) {
+            PlanarKernel kernel = settings.code().newPlanarKernel(settings.receiveAntennas()).orElseThrow();
+            PlanarTransmission planes = new PlanarTransmission(settings, channel, kernel);
             this.transmission = planes;
             this.path = new PlanarPath(settings, planes);
         } else {
@@ -52,6 +49,28 @@ public final class LinkChain implements FramePath {
             this.path = settings.coding().coded() ? new CodedPath(settings, interleaved)
                     : new GeneralPath(settings, interleaved);
         }
+    }
+
+    /**
+     * Whether a chain of {@code settings} takes the planar path: uncoded, a space-time code with a
+     * {@link PlanarKernel}, a channel constant within each fading block.
+     */
+    private static boolean planarApplies(LinkSettings settings) {
+        return !settings.coding().coded() && settings.code().hasPlanarKernel() && !settings.channel().varies();
+    }
+
+    /**
+     * Bytes one chain's buffers take: what its transmission and frame path allocate, the channel's
+     * matrices and the codec's buffers (array headers aside), so that a run can check the memory it
+     * needs, chains times threads, before it starts.
+     */
+    public static long bufferBytes(LinkSettings settings) {
+        long bytes = Transmission.channelBytes(settings);
+        if (planarApplies(settings)) {
+            return bytes + PlanarTransmission.bufferBytes(settings) + PlanarPath.bufferBytes(settings);
+        }
+        bytes += InterleavedTransmission.bufferBytes(settings);
+        return bytes + (settings.coding().coded() ? CodedPath.bufferBytes(settings) : GeneralPath.bufferBytes(settings));
     }
 
     public LinkSettings settings() {

@@ -31,6 +31,11 @@ final class PlanarPath implements FramePath {
         this.sent = new int[settings.code().symbolsPerBlock()][blocks];
     }
 
+    /** Bytes of the label planes the constructor allocates. */
+    static long bufferBytes(LinkSettings settings) {
+        return 4L * settings.code().symbolsPerBlock() * settings.blocksPerFrame();
+    }
+
     @Override
     public void runFrames(Draws draws, double n0, long first, int count, FrameCounters counters) {
         double[][] tx = transmission.symbols;

@@ -33,6 +33,14 @@ final class PlanarTransmission extends Transmission {
         this.received = new double[2 * slots * settings.receiveAntennas()][blocks];
     }
 
+    /** Bytes of the planes the constructor allocates. */
+    static long bufferBytes(LinkSettings settings) {
+        SpaceTimeCode code = settings.code();
+        long planes = 4L * code.symbolsPerBlock()
+                + 2L * code.slotsPerBlock() * (settings.transmitAntennas() + settings.receiveAntennas());
+        return 8 * planes * settings.blocksPerFrame();
+    }
+
     @Override
     void sendBlocks(Draws draws, double n0, int first, int blocks) {
         kernel.encode(symbols, first, blocks, grid);

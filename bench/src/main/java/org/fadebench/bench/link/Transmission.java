@@ -31,6 +31,13 @@ abstract class Transmission {
         this.fadesPerFrame = settings.fadingBlocksPerFrame();
     }
 
+    /** Bytes of the channel's matrices and the estimate: H (one per slot when it varies within a block) and Ĥ. */
+    static long channelBytes(LinkSettings settings) {
+        long nr = settings.receiveAntennas();
+        long mt = settings.transmitAntennas();
+        return 8 * 2 * nr * mt * (settings.channel().varies() ? settings.effectiveCoherenceSlots() + 2L : 3);
+    }
+
     /** Records the channels of the following frames into {@code recorder} (null to stop). */
     final void recordChannels(ChannelRecorder recorder) {
         this.recorder = recorder;

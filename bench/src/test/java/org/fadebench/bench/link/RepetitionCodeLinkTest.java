@@ -67,6 +67,11 @@ class RepetitionCodeLinkTest {
         }
 
         @Override
+        public long coderBytes(int infoBits, int lanes) {
+            return 8L * lanes * infoBits;
+        }
+
+        @Override
         public LaneCoder newCoder(int infoBits, int lanes) {
             return new LaneCoder() {
                 private final double[][] sums = new double[lanes][infoBits];
@@ -130,7 +135,7 @@ class RepetitionCodeLinkTest {
         for (PointResult r : results) {
             FrameCounters c = r.counts();
             assertEquals(FRAMES, c.frames());
-            double p = ErrorRates.bpskBerAwgn(3 * Math.pow(10, r.snrDb() / 10));
+            double p = ErrorRates.bpskBitErrorRate(3 * Math.pow(10, r.snrDb() / 10));
             assertWithin(p, c.bitErrors(), c.bits(), "BER at " + r.snrDb() + " dB");
             assertWithin(1 - Math.pow(1 - p, PAYLOAD_BITS), c.frameErrors(), c.frames(), "FER at " + r.snrDb());
             // the CRC covers payload and check: 80 decided bits

@@ -1,5 +1,7 @@
 package org.fadebench.coding.fec;
 
+import org.fadebench.modem.NamedChoice;
+
 /**
  * A channel code: what a link applies to each frame's information bits (payload and CRC) before
  * the interleaver and modulation, and undoes from the received LLRs. An open family: the codes
@@ -11,7 +13,7 @@ package org.fadebench.coding.fec;
  * once, each frame's result the same as if it were decoded alone (a lane decoder that vectorises
  * over frames gains from many; one that does not asks for one).
  */
-public interface ChannelCode {
+public interface ChannelCode extends NamedChoice {
 
     /** The most lanes any code is given: a multiple of 16, which vectorises well. */
     int MAX_LANES = 128;
@@ -20,6 +22,7 @@ public interface ChannelCode {
     long LANE_BUDGET_BYTES = 32L << 20;
 
     /** Name on the command line, e.g. {@code conv-r34}: lower case, unique in a {@link ChannelCodes} registry. */
+    @Override
     String cliName();
 
     /** Nominal code rate, without termination (1 for no code). */
@@ -30,6 +33,12 @@ public interface ChannelCode {
 
     /** Bytes one lane of this code's decoder holds for frames of {@code infoBits}. */
     long bytesPerLane(int infoBits);
+
+    /**
+     * Bytes of the buffers a {@link #newCoder coder} for frames of {@code infoBits} in {@code lanes}
+     * lanes allocates, for a memory check before a run.
+     */
+    long coderBytes(int infoBits, int lanes);
 
     /**
      * How many frames of {@code infoBits} a coder should decode together: by default as many lanes

@@ -3,6 +3,7 @@ package org.fadebench.coding.fec;
 import java.util.ArrayList;
 import java.util.List;
 import org.fadebench.coding.fec.conv.PuncturedCode;
+import org.fadebench.modem.NamedChoice;
 
 /**
  * A registry of channel codes by command-line name. {@link #standard()} holds the codes the
@@ -56,11 +57,11 @@ public final class ChannelCodes {
      * @throws IllegalArgumentException "unknown channel code 'x'; valid: ..." when there is none
      */
     public ChannelCode find(String name) {
-        return CliNames.find(codes.toArray(new ChannelCode[0]), ChannelCode::cliName, name, "channel code");
+        return NamedChoice.find(codes.toArray(new ChannelCode[0]), name, "channel code");
     }
 
     /** The valid names, comma separated. */
     public String choices() {
-        return CliNames.list(codes.toArray(new ChannelCode[0]), ChannelCode::cliName);
+        return NamedChoice.list(codes.toArray(new ChannelCode[0]));
     }
 }

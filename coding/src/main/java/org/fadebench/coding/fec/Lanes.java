@@ -1,9 +1,14 @@
 package org.fadebench.coding.fec;
 
-/** The argument checks every {@link LaneCoder} makes, with one wording. */
+/** The argument checks every {@link LaneCoder} makes, with one wording, and the size of its rows. */
 public final class Lanes {
 
     private Lanes() {
+    }
+
+    /** A Java array of {@code payload} bytes with its 16-byte header, rounded up to 8 bytes. */
+    public static long rowBytes(long payload) {
+        return 16 + (payload + 7) / 8 * 8;
     }
 
     /**

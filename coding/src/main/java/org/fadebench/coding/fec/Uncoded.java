@@ -28,6 +28,11 @@ final class Uncoded implements ChannelCode {
     }
 
     @Override
+    public long coderBytes(int infoBits, int lanes) {
+        return lanes * Lanes.rowBytes(infoBits);
+    }
+
+    @Override
     public int lanes(int infoBits) {
         return 1;
     }

@@ -1,14 +1,13 @@
 package org.fadebench.coding.stbc;
 
-import java.util.Arrays;
-import java.util.stream.Collectors;
+import org.fadebench.modem.NamedChoice;
 
 /**
  * The linear equalisers a link can use in front of per-symbol slicing or demapping (the option
  * {@code --decoder}; not to be confused with a channel code's decoder). For an orthogonal code all
  * three give the same estimates and gains; they differ only for non-orthogonal codes.
  */
-public enum Equaliser {
+public enum Equaliser implements NamedChoice {
     /** Matched filter: z = Fᵀy divided by diag(FᵀF) ({@link MatchedFilterCombiner}). */
     MF("mf"),
     /** Zero forcing: (FᵀF)⁻¹Fᵀy ({@link LinearEqualiser#zeroForcing}). */
@@ -23,6 +22,7 @@ public enum Equaliser {
     }
 
     /** Name on the command line, e.g. {@code zf}. */
+    @Override
     public String cliName() {
         return cliName;
     }
@@ -33,16 +33,11 @@ public enum Equaliser {
      * @throws IllegalArgumentException naming the valid choices when the name is unknown
      */
     public static Equaliser fromCliName(String name) {
-        for (Equaliser d : values()) {
-            if (d.cliName.equalsIgnoreCase(name.trim())) {
-                return d;
-            }
-        }
-        throw new IllegalArgumentException("unknown decoder '" + name + "'; valid: " + choices());
+        return NamedChoice.find(values(), name, "decoder");
     }
 
     /** The valid command-line names, comma separated. */
     public static String choices() {
-        return Arrays.stream(values()).map(Equaliser::cliName).collect(Collectors.joining(", "));
+        return NamedChoice.list(values());
     }
 }

@@ -61,6 +61,13 @@ public final class PuncturedCode implements ChannelCode {
         return ViterbiDecoder.bytesPerLane(puncturer.code(), infoBits);
     }
 
+    /** The mother code's bits and LLRs, and the Viterbi decoder's rows. */
+    @Override
+    public long coderBytes(int infoBits, int lanes) {
+        ConvolutionalCode code = puncturer.code();
+        return 9L * code.codedBits(infoBits) + ViterbiDecoder.bufferBytes(code, infoBits, lanes);
+    }
+
     @Override
     public LaneCoder newCoder(int infoBits, int lanes) {
         return new Coder(puncturer, infoBits, lanes);
