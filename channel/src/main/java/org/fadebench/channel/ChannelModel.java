@@ -1,12 +1,14 @@
 package org.fadebench.channel;
 
+import java.io.Serializable;
+
 /**
  * A fading model with its parameters: a small immutable value that checked its parameters when it
  * was made (messages start with the setting at fault, e.g. {@code --k-factor must be …}) and makes
  * the per-thread objects that draw channels. The receiver's CSI is not part of it (see
  * {@link ChannelSpec}). Models are found by name in {@link ChannelModels}.
  */
-public interface ChannelModel {
+public interface ChannelModel extends Serializable {
 
     /** The name it is selected by, e.g. {@code rician}. */
     String name();

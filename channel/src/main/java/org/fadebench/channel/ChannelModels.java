@@ -7,6 +7,7 @@ import static org.fadebench.channel.ModelOptions.NAKAGAMI_M;
 import static org.fadebench.channel.ModelOptions.RX_CORR;
 import static org.fadebench.channel.ModelOptions.TX_CORR;
 
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -19,15 +20,15 @@ import java.util.Set;
  * factory that builds the model from them. Immutable; {@link #with} makes an extended registry.
  * The only place that knows which settings go with which model.
  */
-public final class ChannelModels {
+public final class ChannelModels implements Serializable {
 
     /** Builds a model from the settings given; the model checks them and says which is missing. */
     @FunctionalInterface
-    public interface Factory {
+    public interface Factory extends Serializable {
         ChannelModel create(ModelOptions options);
     }
 
-    private record Entry(Set<String> settings, Factory factory) {
+    private record Entry(Set<String> settings, Factory factory) implements Serializable {
     }
 
     private static final Set<String> SCATTERED = Set.of(TX_CORR, RX_CORR, CORRELATION_MATRICES, DOPPLER);

@@ -1,5 +1,7 @@
 package org.fadebench.channel;
 
+import java.io.Serializable;
+
 /**
  * Everything the command line says about the channel: the fading model by name with the settings
  * given for it, or a recorded trace, and the receiver's CSI. Immutable: each {@code with…} returns a
@@ -13,7 +15,7 @@ package org.fadebench.channel;
  * {@code --csi-error} {@link #withCsiError}, {@code --pilots} {@link #withPilots},
  * {@code --trace} {@link #withTrace}.
  */
-public final class ChannelSpec {
+public final class ChannelSpec implements Serializable {
 
     private final ChannelModels registry;
     /** The name the model is looked up by, or the name of {@link #given}. */

@@ -1,5 +1,6 @@
 package org.fadebench.channel;
 
+import java.io.Serializable;
 import java.nio.file.Path;
 
 /**
@@ -13,7 +14,7 @@ import java.nio.file.Path;
  * <p>Determinism: the matrix for a fading block is chosen by the caller's block index alone,
  * {@code index mod N} ({@link #matrix}), never by the order in which threads ask.
  */
-public final class ChannelTrace {
+public final class ChannelTrace implements Serializable {
 
     /**
      * Largest magnitude of a real or imaginary part of an entry that a link accepts. A trace's power

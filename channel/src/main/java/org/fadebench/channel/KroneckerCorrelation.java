@@ -1,5 +1,6 @@
 package org.fadebench.channel;
 
+import java.io.Serializable;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_ZDRM;
@@ -29,7 +30,7 @@ import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
  *
  * <p>An instance holds work matrices: use one per thread.
  */
-public final class KroneckerCorrelation {
+public final class KroneckerCorrelation implements Serializable {
 
     /** Tolerance for the Hermitian, unit-diagonal and eigenvalue checks (entries are at most 1). */
     private static final double TOLERANCE = 1e-9;

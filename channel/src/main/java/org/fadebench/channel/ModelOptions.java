@@ -1,5 +1,6 @@
 package org.fadebench.channel;
 
+import java.io.Serializable;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
@@ -10,7 +11,7 @@ import java.util.Set;
  * given: what a {@link ChannelModels} factory builds its model from. Immutable. Each value was
  * checked on its own when it was given; the model checks the combination.
  */
-public final class ModelOptions {
+public final class ModelOptions implements Serializable {
 
     public static final String K_FACTOR = "--k-factor";
     public static final String NAKAGAMI_M = "--nakagami-m";

@@ -1,5 +1,7 @@
 package org.fadebench.channel;
 
+import java.io.Serializable;
+
 /**
  * Spatial correlation of the scattered part of a channel: exponential profiles between neighbouring
  * antennas ({@code --rx-corr}, {@code --tx-corr}), full matrices, or none (all null). A coefficient
@@ -10,7 +12,8 @@ package org.fadebench.channel;
  * @param tx       the same between transmit antennas, or null
  * @param matrices full correlation matrices (for Nr x Mt, checked by {@link #check}), or null
  */
-public record SpatialCorrelation(Double rx, Double tx, KroneckerCorrelation matrices) {
+public record SpatialCorrelation(Double rx, Double tx, KroneckerCorrelation matrices)
+        implements Serializable {
 
     /** No correlation. */
     public static final SpatialCorrelation NONE = new SpatialCorrelation(null, null, null);

@@ -1,5 +1,6 @@
 package org.fadebench.bench.link;
 
+import java.io.Serializable;
 import org.fadebench.bench.settings.InvalidSettingException;
 import org.fadebench.bench.settings.RunSettings;
 import org.fadebench.channel.ChannelSpec;
@@ -23,7 +24,7 @@ import org.fadebench.modem.Modulation;
  */
 public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas,
                            int receiveAntennas, ChannelSpec channel, int frameBits, int coherenceSlots,
-                           Equaliser equaliser, FrameCoding coding) {
+                           Equaliser equaliser, FrameCoding coding) implements Serializable {
 
     /** Frame length used when the user gives none, rounded up to whole code blocks. */
     public static final int DEFAULT_FRAME_BITS = 1024;

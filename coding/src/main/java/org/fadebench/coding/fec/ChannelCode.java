@@ -1,19 +1,20 @@
 package org.fadebench.coding.fec;
 
+import java.io.Serializable;
 import org.fadebench.modem.NamedChoice;
 
 /**
  * A channel code: what a link applies to each frame's information bits (payload and CRC) before
  * the interleaver and modulation, and undoes from the received LLRs. An open family: the codes
  * selectable by name are listed in {@link ChannelCodes}; each family (none, convolutional, …)
- * lives in its own class or package. A code is an immutable description; {@link #newCoder} makes
- * the per-thread worker that owns the buffers.
+ * lives in its own class or package. A code is an immutable, serialisable description (a run plan
+ * holds it); {@link #newCoder} makes the per-thread worker that owns the buffers.
  *
  * <p>Decoders take frames in lanes: up to {@link #lanes} frames of the same length decoded at
  * once, each frame's result the same as if it were decoded alone (a lane decoder that vectorises
  * over frames gains from many; one that does not asks for one).
  */
-public interface ChannelCode extends NamedChoice {
+public interface ChannelCode extends NamedChoice, Serializable {
 
     /** The most lanes any code is given: a multiple of 16, which vectorises well. */
     int MAX_LANES = 128;

@@ -7,6 +7,8 @@ package org.fadebench.coding.fec;
  */
 final class Uncoded implements ChannelCode {
 
+    private static final long serialVersionUID = 1L;
+
     @Override
     public String cliName() {
         return "none";
@@ -45,6 +47,11 @@ final class Uncoded implements ChannelCode {
     @Override
     public String toString() {
         return cliName();
+    }
+
+    /** One instance: links compare their code with {@link ChannelCodes#NONE}. */
+    private Object readResolve() {
+        return ChannelCodes.NONE;
     }
 
     /** Each lane keeps the hard decisions of its frame. */

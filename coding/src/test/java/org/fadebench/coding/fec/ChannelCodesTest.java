@@ -4,6 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
+import java.io.ByteArrayInputStream;
+import java.io.ByteArrayOutputStream;
+import java.io.ObjectInputStream;
+import java.io.ObjectOutputStream;
 import org.fadebench.coding.fec.conv.PuncturedCode;
 import org.junit.jupiter.api.Test;
 
@@ -29,6 +33,26 @@ class ChannelCodesTest {
                 assertThrows(IllegalArgumentException.class,
                         () -> more.with(new PuncturedCode("conv-r12", PuncturedCode.CONV_R23.puncturer())))
                         .getMessage());
+    }
+
+    /** A code travels in a serialised run plan; "none" comes back as the one instance links compare with. */
+    @Test
+    void codesSurviveSerialisation() throws Exception {
+        assertSame(ChannelCodes.NONE, roundTrip(ChannelCodes.NONE));
+        PuncturedCode back = (PuncturedCode) roundTrip(PuncturedCode.CONV_R34);
+        assertEquals("conv-r34", back.cliName());
+        assertEquals(PuncturedCode.CONV_R34.puncturer().toString(), back.puncturer().toString());
+        assertEquals(PuncturedCode.CONV_R34.codedBits(97), back.codedBits(97));
+    }
+
+    private static Object roundTrip(Object o) throws Exception {
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        try (ObjectOutputStream out = new ObjectOutputStream(bytes)) {
+            out.writeObject(o);
+        }
+        try (ObjectInputStream in = new ObjectInputStream(new ByteArrayInputStream(bytes.toByteArray()))) {
+            return in.readObject();
+        }
     }
 
     /** No code: the bits as they are, rate 1, one lane (hard decisions gain nothing from lanes). */

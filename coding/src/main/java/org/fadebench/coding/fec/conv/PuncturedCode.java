@@ -14,6 +14,8 @@ import org.fadebench.coding.fec.LaneCoder;
  */
 public final class PuncturedCode implements ChannelCode {
 
+    private static final long serialVersionUID = 1L;
+
     /** The 64-state (133, 171) code, rate 1/2. */
     public static final PuncturedCode CONV_R12 = new PuncturedCode("conv-r12",
             Puncturer.none(ConvolutionalCode.K7_133_171));

@@ -1,12 +1,16 @@
 package org.fadebench.coding.fec.conv;
 
+import java.io.Serializable;
+
 /**
  * Periodic puncturing of a terminated convolutional code. The pattern has one row per code output
  * and one column per trellis step of the period; 1 keeps the output bit, 0 removes it. The pattern
  * repeats over the whole coded stream, tail included, starting with column 0 at the first step.
  * Depuncturing puts a zero LLR (no information) where a bit was removed.
  */
-public final class Puncturer {
+public final class Puncturer implements Serializable {
+
+    private static final long serialVersionUID = 1L;
 
     private final ConvolutionalCode code;
     private final int period;
