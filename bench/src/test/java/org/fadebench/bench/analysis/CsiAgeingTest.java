@@ -7,7 +7,7 @@ import java.util.Optional;
 import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.channel.ChannelSpec;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.Modulation;
 import org.junit.jupiter.api.Test;
@@ -44,7 +44,7 @@ class CsiAgeingTest {
         if (doppler > 0) {
             channel = channel.withDoppler(doppler);
         }
-        return new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, channel, 1024, coherence, Decoder.MF,
+        return new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, channel, 1024, coherence, Equaliser.MF,
                 FrameCoding.NONE);
     }
 

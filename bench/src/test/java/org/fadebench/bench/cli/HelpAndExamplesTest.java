@@ -24,9 +24,10 @@ import org.fadebench.bench.settings.RunSettings;
 import org.fadebench.bench.settings.Setting;
 import org.fadebench.channel.ChannelModels;
 import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.Interleaving;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
@@ -147,8 +148,8 @@ class HelpAndExamplesTest {
                 "code", names(StreamSupport.stream(SpaceTimeCodes.all().spliterator(), false).map(SpaceTimeCode::name)),
                 "fading", List.of(ChannelModels.STANDARD.choices().split(", ")),
                 "modulation", names(Stream.of(Modulation.values()).map(Modulation::cliName)),
-                "decoder", names(Stream.of(Decoder.values()).map(Decoder::cliName)),
-                "fec", names(Stream.of(ChannelCode.values()).map(ChannelCode::cliName)),
+                "decoder", names(Stream.of(Equaliser.values()).map(Equaliser::cliName)),
+                "fec", names(ChannelCodes.standard().all().stream().map(ChannelCode::cliName)),
                 "crc", names(Stream.of(Crc.values()).map(Crc::cliName)),
                 "interleaver", names(Stream.of(Interleaving.values()).map(Interleaving::cliName)),
                 "llr", names(Stream.of(LlrMethod.values()).map(LlrMethod::cliName)),

@@ -27,11 +27,11 @@ import org.fadebench.bench.sweep.BinomialInterval;
 import org.fadebench.bench.sweep.PointResult;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
-import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
@@ -265,7 +265,7 @@ class FerPlotTest {
         ChannelSpec channel = ChannelSpec.of(Fading.RICIAN).withKFactor(3).withRxCorr(0.5).withDoppler(0.002)
                 .withPilots(4);
         LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2, channel, 512, 16,
-                Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+                Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCodes.standard().find("conv-r12")), Interleaving.RANDOM, 0,
                         LlrMethod.MAXLOG));
         String run = FerPlot.runLine(link, 9);
         for (String part : List.of("rician K=3.0", "rx-corr 0.5", "doppler 0.002", "pilots 4", "512 bits/frame",
