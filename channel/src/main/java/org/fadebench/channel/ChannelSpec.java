@@ -264,6 +264,21 @@ public final class ChannelSpec {
         return new LinkChannel(nr, mt, maxSlotsPerBlock, newModel(nr, mt), null, null, csi);
     }
 
+    /** Nakagami m, or NaN when not given. */
+    public double nakagamiM() {
+        return nakagamiM;
+    }
+
+    /** True when the receiver decodes with a channel error of fixed variance ({@code --csi-error}). */
+    public boolean fixedCsiError() {
+        return given(csiError) && csiError > 0;
+    }
+
+    /** True when full correlation matrices (which may be singular) are given. */
+    public boolean correlationMatrices() {
+        return correlation != null;
+    }
+
     /**
      * Whether the channel is i.i.d. Rayleigh block fading (whatever the receiver's CSI): the channel
      * for which the outage bounds have closed forms.

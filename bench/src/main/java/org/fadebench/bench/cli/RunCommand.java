@@ -22,7 +22,6 @@ import org.fadebench.bench.sweep.SnrGrid;
 import org.fadebench.bench.sweep.StopRules;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
-import org.fadebench.channel.Fading;
 import org.fadebench.channel.KroneckerCorrelation;
 import org.fadebench.coding.stbc.Decoder;
 import org.fadebench.coding.stbc.SpaceTimeCode;
@@ -52,15 +51,6 @@ final class RunCommand implements Callable<Integer> {
             description = "Linear decoder: mf, zf, mmse (default: mf for orthogonal codes, mmse otherwise).")
     String decoder;
 
-    @Option(names = "--fec", paramLabel = "NAME", defaultValue = "none",
-            description = "Channel code: none, conv-r12, conv-r23, conv-r34 (64-state (133,171) code, punctured), "
-                    + "conv-small (4-state (5,7)) (default: ${DEFAULT-VALUE}).")
-    String fec;
-
-    @Option(names = "--crc", paramLabel = "NAME", defaultValue = "none",
-            description = "CRC appended to each frame: none, crc16, crc24, crc32 (default: ${DEFAULT-VALUE}).")
-    String crc;
-
     @Option(names = "--interleaver", paramLabel = "NAME",
             description = "Bit interleaver of a coded frame: random, block, none (default: random when coded).")
     String interleaver;
@@ -73,23 +63,8 @@ final class RunCommand implements Callable<Integer> {
             description = "Soft demapping of a coded frame: maxlog, exact (default: ${DEFAULT-VALUE}).")
     String llr;
 
-    @Option(names = "--fading", paramLabel = "NAME", defaultValue = "rayleigh",
-            description = "Fading model: rayleigh, none (default: ${DEFAULT-VALUE}).")
-    String fading;
-
-    @Option(names = "--k-factor", paramLabel = "K", description = "Rician K-factor, linear (with --fading rician).")
-    Double kFactor;
-
-    @Option(names = "--nakagami-m", paramLabel = "M", description = "Nakagami m >= 0.5 (with --fading nakagami).")
-    Double nakagamiM;
-
-    @Option(names = "--tx-corr", paramLabel = "R",
-            description = "Exponential correlation r^|i-j| between transmit antennas, |r| < 1.")
-    Double txCorr;
-
-    @Option(names = "--rx-corr", paramLabel = "R",
-            description = "Exponential correlation r^|i-j| between receive antennas, |r| < 1.")
-    Double rxCorr;
+    @CommandLine.Mixin
+    FadingOptions fadingOptions = new FadingOptions();
 
     @Option(names = "--doppler", paramLabel = "FD",
             description = "Normalised Doppler f_D T_s: the channel changes every slot (Clarke/Jakes spectrum).")
@@ -115,13 +90,8 @@ final class RunCommand implements Callable<Integer> {
             description = "Most fading blocks --trace-out writes (default: ${DEFAULT-VALUE}).")
     int traceOutBlocks;
 
-    @Option(names = "--frame-bits", paramLabel = "N",
-            description = "Information bits per frame, a whole number of code blocks (default: 1024 rounded up to whole blocks).")
-    Integer frameBits;
-
-    @Option(names = "--coherence", paramLabel = "SLOTS", defaultValue = "0",
-            description = "Symbol periods per fading block, a multiple of the code's slots (default: the whole frame).")
-    int coherence;
+    @CommandLine.Mixin
+    FrameOptions frameOptions = new FrameOptions();
 
     @Option(names = "--snr", paramLabel = "DB", defaultValue = "0:2:20",
             description = "SNR points in dB: START:STEP:STOP, one value, or a list a,b,c (default: ${DEFAULT-VALUE}).")
@@ -276,11 +246,10 @@ final class RunCommand implements Callable<Integer> {
                 linkOptions.transmitAntennas(stbc));
         double[] snrDb = parse(null, () -> SnrGrid.parse(snr));
         FrameCoding coding = frameCoding();
-        int bits = frameBits != null ? frameBits
-                : coding.coded() ? LinkSettings.DEFAULT_FRAME_BITS
-                : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
+        int bits = frameOptions.frameBits(coding.coded(), mod, stbc);
         int nTx = linkOptions.transmitAntennas(stbc);
-        LinkSettings link = parse(null, () -> new LinkSettings(mod, stbc, nTx, linkOptions.rx, channel, bits, coherence,
+        LinkSettings link = parse(null, () -> new LinkSettings(mod, stbc, nTx, linkOptions.rx, channel, bits,
+                frameOptions.coherence,
                 dec, coding));
         if (traceOut != null) {
             String name = traceOut.getFileName().toString().toLowerCase(java.util.Locale.ROOT)
@@ -380,21 +349,9 @@ final class RunCommand implements Callable<Integer> {
 
     /** The channel from its options; only the options given are passed on. */
     private ChannelSpec channelSpec() {
-        Fading fad = parse("--fading", () -> Fading.fromCliName(fading));
+        ChannelSpec fadingOnly = fadingOptions.channel();
         return parse(null, () -> {
-            ChannelSpec c = ChannelSpec.of(fad);
-            if (kFactor != null) {
-                c = c.withKFactor(kFactor);
-            }
-            if (nakagamiM != null) {
-                c = c.withNakagamiM(nakagamiM);
-            }
-            if (txCorr != null) {
-                c = c.withTxCorr(txCorr);
-            }
-            if (rxCorr != null) {
-                c = c.withRxCorr(rxCorr);
-            }
+            ChannelSpec c = fadingOnly;
             if (doppler != null) {
                 c = c.withDoppler(doppler);
             }
@@ -424,13 +381,10 @@ final class RunCommand implements Callable<Integer> {
 
     /** CRC, channel code, interleaver and LLRs from their options. */
     private FrameCoding frameCoding() {
-        Crc c = parse("--crc", () -> Crc.fromCliName(crc));
-        ChannelCode code = parse("--fec", () -> ChannelCode.fromCliName(fec));
-        boolean coded = c != Crc.NONE || code != ChannelCode.NONE;
-        Interleaving il = interleaver != null ? parse("--interleaver", () -> Interleaving.fromCliName(interleaver))
-                : coded ? Interleaving.RANDOM : Interleaving.NONE;
+        Interleaving il = interleaver == null ? null
+                : parse("--interleaver", () -> Interleaving.fromCliName(interleaver));
         LlrMethod method = parse("--llr", () -> LlrMethod.fromCliName(llr));
-        return parse(null, () -> new FrameCoding(new FecScheme(c, code), il, interleaverRows, method));
+        return frameOptions.coding(il, interleaverRows, method);
     }
 
     /** Runs a parser; its IllegalArgumentException becomes invalid input, prefixed with the option. */

@@ -20,6 +20,8 @@ import org.fadebench.bench.analysis.Bound;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundPoint;
 import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.analysis.Reach;
+import org.fadebench.channel.OutageEstimate;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
 import org.fadebench.coding.fec.ChannelCode;
@@ -59,7 +61,8 @@ import org.jfree.svg.SVGGraphics2D;
  * are friendly to colorblind people", 2008; from memory). Simulated curves are solid with markers
  * (FER blue circles, BER vermillion squares); bounds have no markers and each its own dash (MIMO
  * black long dashes, STBC bluish-green dash-dots, QAM reddish-purple short dashes), so the chart
- * also reads in grey. A Monte Carlo MIMO bound carries a light band over its 95 % interval.
+ * also reads in grey. Every Monte Carlo bound carries a light band over its 95 % interval
+ * and stops where that interval is wider than its value.
  *
  * <p>A point with no errors has an error rate of 0, which a log axis cannot show. It is drawn as
  * an open downward triangle at the upper end of its interval, the largest rate the run leaves
@@ -238,7 +241,10 @@ public final class FerPlot {
         plot.setRenderer(1, limitRenderer);
     }
 
-    /** Dataset 2: the three bounds as dashed lines; the Monte Carlo MIMO bound with a band over its interval. */
+    /**
+     * Dataset 2: the three bounds as dashed lines; a Monte Carlo bound with a band over its
+     * interval, and left out where its interval is wider than its value.
+     */
     private static void addBounds(XYPlot plot, LinkSettings link, BoundCurves bounds, double floor) {
         YIntervalSeriesCollection outage = new YIntervalSeriesCollection();
         DeviationRenderer renderer = new DeviationRenderer(true, false);
@@ -247,10 +253,10 @@ public final class FerPlot {
         for (Bound b : Bound.values()) {
             YIntervalSeries series = new YIntervalSeries(boundLabel(b, link, bounds.settings()));
             for (BoundPoint p : bounds.points()) {
-                double v = p.value(b);
+                OutageEstimate e = p.estimate(b);
+                double v = p.shown(b);
                 if (v > 0.0) {
-                    boolean band = b == Bound.MIMO && !p.mimoExact();
-                    series.add(p.snrDb(), v, band ? Math.max(p.mimoLow(), floor) : v, band ? p.mimoHigh() : v);
+                    series.add(p.snrDb(), v, Math.max(e.lower(), floor), e.upper());
                 }
             }
             addSeries(outage, renderer, series, boundColour(b), boundStroke(b), null);
@@ -280,20 +286,21 @@ public final class FerPlot {
     }
 
     static String boundLabel(Bound b, LinkSettings link, BoundSettings s) {
+        String blocks = s.fadingBlocks() > 1 ? ", " + s.fadingBlocks() + " fading blocks" : "";
+        String counted = s.exact(b) ? "" : " (Monte Carlo, band: 95 %)";
         switch (b) {
             case MIMO:
-                return String.format(Locale.ROOT, "Outage, %d×%d MIMO, Gaussian inputs%s", s.transmitAntennas(),
-                        s.receiveAntennas(), s.mimoExact() ? "" : " (Monte Carlo, band: 95 %)");
+                return String.format(Locale.ROOT, "Outage, %d×%d MIMO, Gaussian inputs%s%s", s.transmitAntennas(),
+                        s.receiveAntennas(), blocks, counted);
             case STBC:
-                return "Outage, " + codeName(link) + ", Gaussian symbols";
+                return "Outage, " + codeName(link) + ", Gaussian symbols" + blocks + counted;
             default:
                 String label = "Outage, " + codeName(link) + ", " + s.modulation() + " ("
-                        + s.information().cliName().toUpperCase(Locale.ROOT) + ")";
-                return s.spectralEfficiency() >= s.qamLimit()
-                        ? label + ": 1 at every SNR, as R ≥ r·log2 M = " + Numbers.db(s.qamLimit())
-                        : label;
+                        + s.information().cliName().toUpperCase(Locale.ROOT) + ")" + blocks + counted;
+                return s.fullRate() ? label + ": " + Reach.ofFullRate(s).words() : label;
         }
     }
+
 
     private static String codeName(LinkSettings link) {
         return link.code() == SpaceTimeCodes.NONE ? "no STBC" : capitalised(link.code().name());
