@@ -93,6 +93,17 @@ public final class OutageEstimate {
     }
 
     @Override
+    public boolean equals(Object o) {
+        return o instanceof OutageEstimate e && Double.compare(probability, e.probability) == 0
+                && outages == e.outages && draws == e.draws;
+    }
+
+    @Override
+    public int hashCode() {
+        return java.util.Objects.hash(probability, outages, draws);
+    }
+
+    @Override
     public String toString() {
         if (isExact()) {
             return "outage " + probability + " (exact)";
