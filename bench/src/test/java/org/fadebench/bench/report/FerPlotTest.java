@@ -20,6 +20,7 @@ import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.BinomialInterval;
 import org.fadebench.bench.sweep.PointResult;
+import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.Modulation;
@@ -112,6 +113,30 @@ class FerPlotTest {
                 + " less the margin");
         for (int i = 0; i < sim.getItemCount(1); i++) {
             assertTrue(sim.getStartYValue(1, i) >= floor, "BER interval from " + sim.getStartYValue(1, i));
+        }
+    }
+
+    /**
+     * Over Rician fading every bound is a count: each carries a band over its interval, and a
+     * point whose count cannot resolve it (0 outages at 20 dB in 2000 draws) is left out.
+     */
+    @Test
+    void everyCountedBoundHasABandAndStopsWhereUnresolved() {
+        BoundCurves curves = BoundCurves.compute(BoundSettings.of(LINK).withSpectralEfficiency(1.5)
+                .withMimoDraws(2000, 2L).withChannel(ChannelSpec.of(Fading.RICIAN).withKFactor(3)), SNR_DB);
+        JFreeChart chart = FerPlot.chart(LINK, sweep(), 0.95, curves);
+        YIntervalSeriesCollection outage = (YIntervalSeriesCollection) chart.getXYPlot().getDataset(2);
+        for (Bound b : Bound.values()) {
+            int series = b.ordinal();
+            assertTrue(outage.getSeriesKey(series).toString().contains("Monte Carlo, band"), outage.getSeriesKey(series)
+                    .toString());
+            long resolved = curves.points().stream().filter(p -> p.estimate(b).resolved()).count();
+            assertTrue(resolved < SNR_DB.length, b + ": the last points have no outage in 2000 draws");
+            assertEquals(resolved, outage.getItemCount(series), b.key());
+            for (int i = 0; i < outage.getItemCount(series); i++) {
+                assertTrue(outage.getStartYValue(series, i) < outage.getYValue(series, i)
+                        && outage.getYValue(series, i) < outage.getEndYValue(series, i), b + " band at " + i);
+            }
         }
     }
 
