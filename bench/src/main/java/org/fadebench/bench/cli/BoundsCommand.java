@@ -1,10 +1,14 @@
 package org.fadebench.bench.cli;
 
+import static org.fadebench.bench.settings.RunSettings.*;
+
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CancellationException;
 import org.fadebench.bench.analysis.Bound;
@@ -12,28 +16,30 @@ import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundPoint;
 import org.fadebench.bench.analysis.BoundSettings;
 import org.fadebench.bench.analysis.Reach;
-import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.report.AtomicFiles;
 import org.fadebench.bench.report.Numbers;
 import org.fadebench.bench.report.ResultsCsv;
+import org.fadebench.bench.run.RunPlan;
+import org.fadebench.bench.settings.InvalidSettingException;
+import org.fadebench.bench.settings.RunSettings;
+import org.fadebench.bench.settings.Setting;
+import org.fadebench.bench.settings.SettingValues;
 import org.fadebench.bench.sweep.SnrGrid;
-import org.fadebench.channel.ChannelSpec;
-import org.fadebench.coding.stbc.Decoder;
-import org.fadebench.modem.LlrMethod;
 import org.fadebench.coding.stbc.SpaceTimeCode;
-import org.fadebench.modem.Modulation;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Option;
+import picocli.CommandLine.Model.CommandSpec;
 
 /**
  * {@code fadebench bounds}: the three outage bounds of a link without simulating it: a table on the
- * terminal and {@code DIR/bounds.csv}. Takes the options of {@code run} that set the rate (channel
- * code, CRC, frame length), the fading blocks per frame (coherence) and the fading model, so the
- * bounds are those of the link {@code run} would simulate with the same options.
+ * terminal and {@code DIR/bounds.csv}. Its options are the settings of {@code run} that define the
+ * bounds ({@link #SETTINGS}): those that set the rate (channel code, CRC, frame length), the fading
+ * blocks per frame (coherence) and the fading model, so the same options give the bounds of the
+ * link {@code run} simulates.
  */
 @Command(name = "bounds", mixinStandardHelpOptions = true, sortOptions = false,
+        modelTransformer = BoundsCommand.Options.class,
         description = {"Print and write the outage bounds of a link without simulating it.",
             "SNR is the total transmitted energy per channel use over N0 at each receive antenna."})
 final class BoundsCommand implements Callable<Integer> {
@@ -41,46 +47,47 @@ final class BoundsCommand implements Callable<Integer> {
     static final String HEADER = "snr_db,p_out_mimo,p_out_stbc,p_out_qam,p_out_mimo_ci_low,p_out_mimo_ci_high,"
             + "p_out_stbc_ci_low,p_out_stbc_ci_high,p_out_qam_ci_low,p_out_qam_ci_high";
 
-    @CommandLine.Mixin
-    LinkOptions linkOptions = new LinkOptions();
+    /** The settings {@code bounds} takes. */
+    static final List<Setting> SETTINGS = List.of(CODE, CODE_FILE, TX, RX, MODULATION, FEC, CRC, FRAME_BITS,
+            COHERENCE, FADING, K_FACTOR, NAKAGAMI_M, TX_CORR, RX_CORR, SNR_DB, RATE, MI, OUTAGE_DRAWS, FOLDER);
 
-    @CommandLine.Mixin
-    FrameOptions frameOptions = new FrameOptions();
-
-    @CommandLine.Mixin
-    FadingOptions fadingOptions = new FadingOptions();
-
-    @Option(names = "--snr", paramLabel = "DB", defaultValue = "0:2:30",
-            description = "SNR points in dB: START:STEP:STOP, one value, or a list a,b,c (default: ${DEFAULT-VALUE}).")
-    String snr;
-
-    @CommandLine.Mixin
-    BoundOptions boundOptions = new BoundOptions();
-
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = "fadebench-bounds",
-            description = "Folder for bounds.csv (default: ${DEFAULT-VALUE}).")
-    String out;
+    /** Where {@code bounds} differs from {@code run}'s defaults. */
+    static final Map<Setting, String> DEFAULTS = Map.of(SNR_DB, "0:2:30", FOLDER, "fadebench-bounds");
 
     @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
+    CommandSpec spec;
+
+    /** Adds the settings as options. */
+    static final class Options implements CommandLine.IModelTransformer {
+        @Override
+        public CommandSpec transform(CommandSpec spec) {
+            return SettingOptions.addTo(spec, SETTINGS, DEFAULTS);
+        }
+    }
 
     @Override
     public Integer call() {
-        Modulation mod = linkOptions.modulation();
-        SpaceTimeCode code = linkOptions.code();
+        SettingValues v = SettingValues.defaults(RunSettings.all())
+                .overlaidBy(SettingOptions.given(spec.commandLine().getParseResult(), SETTINGS, DEFAULTS));
+        try {
+            return write(v);
+        } catch (InvalidSettingException e) {
+            throw new InvalidInputException(v.locate(e.setting(), e.problem()));
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException(e.getMessage());
+        }
+    }
+
+    private int write(SettingValues v) {
+        LinkSettings link = RunPlan.link(v);
+        SpaceTimeCode code = link.code();
         if (!code.isOrthogonal()) {
-            throw new InvalidInputException("--code " + code.name() + " is not orthogonal; the code bounds hold for "
+            throw new InvalidSettingException(CODE, code.name() + " is not orthogonal; the code bounds hold for "
                     + "orthogonal codes only (see 'fadebench codes')");
         }
-        double[] snrDb = RunCommand.parse(null, () -> SnrGrid.parse(snr));
-        FrameCoding coding = frameOptions.coding(null, 0, LlrMethod.MAXLOG);
-        int bits = frameOptions.frameBits(coding.coded(), mod, code);
-        ChannelSpec channel = fadingOptions.channel();
-        int tx = linkOptions.transmitAntennas(code);
-        LinkSettings link = RunCommand.parse(null, () -> new LinkSettings(mod, code, tx, linkOptions.rx, channel, bits,
-                frameOptions.coherence, Decoder.MF, coding));
-        BoundSettings settings = boundOptions.settings(link);
-        Path dir = SweepJob.checkOutDir(out);
+        double[] snrDb = SnrGrid.parse(v.text(SNR_DB));
+        BoundSettings settings = RunPlan.bounds(v, link);
+        Path dir = SweepJob.checkOutDir(v.text(FOLDER));
         PrintWriter w = spec.commandLine().getOut();
         BoundCurves curves;
         try (SignalStop signals = SignalStop.install(() -> { })) {
@@ -93,8 +100,8 @@ final class BoundsCommand implements Callable<Integer> {
         }
 
         String what = String.format(Locale.ROOT, "%s %dx%d, %s, %s, R = %s bits per channel use, QAM information %s",
-                code.name(), link.transmitAntennas(), link.receiveAntennas(), mod.cliName(), settings.channelWords(),
-                Numbers.db(settings.spectralEfficiency()), settings.information().cliName());
+                code.name(), link.transmitAntennas(), link.receiveAntennas(), link.modulation().cliName(),
+                settings.channelWords(), Numbers.db(settings.spectralEfficiency()), settings.information().cliName());
         w.println("outage bounds: " + what);
         w.println("SNR convention: " + ResultsCsv.SNR_CONVENTION);
         StringBuilder csv = new StringBuilder();

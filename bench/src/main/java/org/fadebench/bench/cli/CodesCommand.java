@@ -35,7 +35,11 @@ final class CodesCommand implements Callable<Integer> {
             codes.add(c);
         }
         if (codeFile != null) {
-            codes.add(RunCommand.parse("--code-file", () -> SpaceTimeCodeFile.read(codeFile)));
+            try {
+                codes.add(SpaceTimeCodeFile.read(codeFile));
+            } catch (IllegalArgumentException e) {
+                throw new InvalidInputException("--code-file: " + e.getMessage());
+            }
         }
         PrintWriter w = spec.commandLine().getOut();
         String fmt = "%-10s %3s %3s %3s %6s %-10s %-14s %s%n";

@@ -21,6 +21,7 @@ import org.fadebench.bench.report.Numbers;
 import org.fadebench.bench.report.ResultsCsv;
 import org.fadebench.bench.report.ResultsJson;
 import org.fadebench.bench.report.ResultsTable;
+import org.fadebench.bench.run.RunPlan;
 import org.fadebench.bench.sweep.PointResult;
 import org.fadebench.bench.sweep.PointState;
 import org.fadebench.bench.sweep.SweepEngine;
@@ -35,10 +36,12 @@ import org.fadebench.bench.sweep.SweepOutcome;
 final class SweepJob {
 
     private final RunPlan plan;
+    private final boolean resume;
     private final PrintWriter out;
 
-    SweepJob(RunPlan plan, PrintWriter out) {
+    SweepJob(RunPlan plan, boolean resume, PrintWriter out) {
         this.plan = plan;
+        this.resume = resume;
         this.out = out;
     }
 
@@ -51,15 +54,6 @@ final class SweepJob {
         return dir;
     }
 
-    /** The thread count: the option's value, or all cores when it is not given. */
-    static int threads(Integer option) {
-        int n = option != null ? option : Runtime.getRuntime().availableProcessors();
-        if (n <= 0 || n > 1024) {
-            throw new InvalidInputException("--threads must be between 1 and 1024, got " + n);
-        }
-        return n;
-    }
-
     /** Runs the sweep; returns the exit code. */
     int run() {
         var link = plan.link();
@@ -69,7 +63,7 @@ final class SweepJob {
                 : new ChannelRecorder(link.receiveAntennas(), link.transmitAntennas(), plan.traceOutBlocks());
         engine.recordChannels(recorder);
         String fingerprint = Checkpoint.fingerprint(plan.numbersFingerprintText(engine.batchFrames()));
-        List<PointState> resume = plan.resume() ? readCheckpoint(fingerprint) : null;
+        List<PointState> resumed = resume ? readCheckpoint(fingerprint) : null;
 
         boolean talk = !plan.quiet();
         if (talk) {
@@ -81,10 +75,10 @@ final class SweepJob {
                     plan.rules().maxFrames(),
                     plan.rules().maxSeconds() > 0 ? " or " + Numbers.db(plan.rules().maxSeconds()) + " s" : "",
                     plan.seed(), plan.threads(), plan.threads() == 1 ? "" : "s"));
-            if (resume != null) {
-                long done = resume.stream().filter(PointState::done).count();
+            if (resumed != null) {
+                long done = resumed.stream().filter(PointState::done).count();
                 out.println("resuming from " + plan.outDir().resolve(Checkpoint.FILE_NAME) + " (" + done + " of "
-                        + resume.size() + " points finished)");
+                        + resumed.size() + " points finished)");
             }
         }
         ResultsTable table = new ResultsTable(out);
@@ -97,7 +91,7 @@ final class SweepJob {
         try (SignalStop signals = SignalStop.install(engine::requestStop)) {
             SweepOutcome outcome;
             try {
-                outcome = engine.run(plan.snrDb(), resume, listener(table, progress, fingerprint, start));
+                outcome = engine.run(plan.snrDb(), resumed, listener(table, progress, fingerprint, start));
             } finally {
                 if (progress != null) {
                     progress.close();
@@ -242,7 +236,7 @@ final class SweepJob {
         return signals.exitCode();
     }
 
-    /** The outage bounds need an orthogonal code and a channel constant over each block (see BoundOptions). */
+    /** The outage bounds need an orthogonal code and a channel constant over each block (see RunPlan.bounds). */
     private boolean boundsApply() {
         return plan.bounds() != null;
     }

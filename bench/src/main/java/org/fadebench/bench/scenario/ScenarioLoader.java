@@ -6,11 +6,12 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.Optional;
+import org.fadebench.bench.settings.RunSettings;
+import org.fadebench.bench.settings.Setting;
+import org.fadebench.bench.settings.SettingValues;
 import org.yaml.snakeyaml.LoaderOptions;
 import org.yaml.snakeyaml.Yaml;
 import org.yaml.snakeyaml.constructor.SafeConstructor;
@@ -23,7 +24,7 @@ import org.yaml.snakeyaml.nodes.ScalarNode;
 import org.yaml.snakeyaml.nodes.SequenceNode;
 
 /**
- * Reads scenario files: YAML with the sections and keys of {@link ScenarioSchema}. The file is
+ * Reads scenario files: YAML with the sections and keys of {@link RunSettings}. The file is
  * composed into plain nodes by SnakeYAML's safe loader (no types are ever constructed from the
  * file), then walked here so every error can name the file, the line and the key, and suggest
  * the closest valid key.
@@ -70,12 +71,12 @@ public final class ScenarioLoader {
         } catch (YAMLException e) {
             throw new ScenarioException(name + ": not valid YAML: " + e.getMessage());
         }
-        Map<String, Scenario.Setting> settings = new LinkedHashMap<>();
+        SettingValues values = SettingValues.empty();
         if (root == null) {
-            return new Scenario(name, text, settings);
+            return new Scenario(name, text, values);
         }
         rejectTags(root, name);
-        MappingNode top = mapping(root, name, "the top level", "sections " + String.join(", ", ScenarioSchema.sections()));
+        MappingNode top = mapping(root, name, "the top level", "sections " + String.join(", ", RunSettings.sections()));
         java.util.Set<String> seenSections = new java.util.HashSet<>();
         for (NodeTuple t : top.getValue()) {
             String section = keyText(t.getKeyNode(), name);
@@ -83,13 +84,13 @@ public final class ScenarioLoader {
             if (!seenSections.add(section)) {
                 throw new ScenarioException(name + " line " + line + ": section '" + section + "' appears twice");
             }
-            if (!ScenarioSchema.sections().contains(section)) {
+            if (!RunSettings.sections().contains(section)) {
                 throw new ScenarioException(name + " line " + line + ": unknown section '" + section + "'"
-                        + suggest(section, ScenarioSchema.sections()) + "; valid sections: "
-                        + String.join(", ", ScenarioSchema.sections()));
+                        + suggest(section, RunSettings.sections()) + "; valid sections: "
+                        + String.join(", ", RunSettings.sections()));
             }
             MappingNode body = mapping(t.getValueNode(), name, "section '" + section + "'",
-                    "keys " + String.join(", ", ScenarioSchema.names(section)));
+                    "keys " + String.join(", ", RunSettings.names(section)));
             java.util.Set<String> seen = new java.util.HashSet<>();
             for (NodeTuple kv : body.getValue()) {
                 String key = keyText(kv.getKeyNode(), name);
@@ -98,24 +99,20 @@ public final class ScenarioLoader {
                     throw new ScenarioException(name + " line " + keyLine + ": key '" + section + "." + key
                             + "' appears twice");
                 }
-                Optional<ScenarioKey> k = ScenarioSchema.find(section, key);
+                Optional<Setting> k = RunSettings.find(section, key);
                 if (k.isEmpty()) {
                     throw new ScenarioException(name + " line " + keyLine + ": unknown key '" + section + "." + key + "'"
-                            + suggest(key, ScenarioSchema.names(section)) + "; valid keys in " + section + ": "
-                            + String.join(", ", ScenarioSchema.names(section)));
+                            + suggest(key, RunSettings.names(section)) + "; valid keys in " + section + ": "
+                            + String.join(", ", RunSettings.names(section)));
                 }
-                ScenarioKey known = k.get();
-                int valueLine = line(kv.getValueNode());
-                if (known.kind() == ScenarioKey.Kind.MATRIX) {
-                    double[] m = matrix(known, kv.getValueNode(), name);
-                    settings.put(known.path(), new Scenario.Setting(known, "matrix", valueLine, m));
-                } else {
-                    settings.put(known.option(), new Scenario.Setting(known, value(known, kv.getValueNode(), name),
-                            valueLine));
-                }
+                Setting known = k.get();
+                SettingValues.Origin origin = new SettingValues.Origin(name, line(kv.getValueNode()));
+                values = known.kind() == Setting.Kind.MATRIX
+                        ? values.withMatrix(known, matrix(known, kv.getValueNode(), name), origin)
+                        : values.with(known, value(known, kv.getValueNode(), name), origin);
             }
         }
-        return new Scenario(name, text, settings);
+        return new Scenario(name, text, values);
     }
 
     /** Only the standard YAML types are allowed: no tags that could name a class or anything else. */
@@ -142,7 +139,7 @@ public final class ScenarioLoader {
             java.util.Set.of("str", "int", "float", "bool", "null", "seq", "map");
 
     private static String suggest(String word, List<String> valid) {
-        return ScenarioSchema.closest(word, valid).map(s -> " (did you mean '" + s + "'?)").orElse("");
+        return RunSettings.closest(word, valid).map(s -> " (did you mean '" + s + "'?)").orElse("");
     }
 
     private static MappingNode mapping(Node node, String name, String what, String expected) {
@@ -165,9 +162,9 @@ public final class ScenarioLoader {
     }
 
     /** The value as the command line would spell it, checked against the key's kind. */
-    private static String value(ScenarioKey key, Node node, String name) {
+    private static String value(Setting key, Node node, String name) {
         String where = name + " line " + line(node) + ", key " + key.path() + ": ";
-        if (node instanceof SequenceNode seq && key.kind() == ScenarioKey.Kind.SNR) {
+        if (node instanceof SequenceNode seq && key.kind() == Setting.Kind.SNR) {
             List<String> parts = new ArrayList<>();
             for (Node item : seq.getValue()) {
                 if (!(item instanceof ScalarNode s)) {
@@ -202,6 +199,7 @@ public final class ScenarioLoader {
                 }
                 return f;
             case SNR:
+            case PATH:
             case TEXT:
             default:
                 if (v.isEmpty()) {
@@ -212,7 +210,7 @@ public final class ScenarioLoader {
     }
 
     /** A square matrix of numbers or [re, im] pairs, interleaved row-major. */
-    private static double[] matrix(ScenarioKey key, Node node, String name) {
+    private static double[] matrix(Setting key, Node node, String name) {
         String where = name + " line " + line(node) + ", key " + key.path() + ": ";
         if (!(node instanceof SequenceNode rows) || rows.getValue().isEmpty() || rows.getValue().size() > 64) {
             throw new ScenarioException(where + "expected " + key.kind().description() + " (1 to 64 rows)");
@@ -243,7 +241,7 @@ public final class ScenarioLoader {
         return m;
     }
 
-    private static String number(String v, String where, ScenarioKey key) {
+    private static String number(String v, String where, Setting key) {
         try {
             double d = Double.parseDouble(v.trim());
             if (!Double.isFinite(d)) {

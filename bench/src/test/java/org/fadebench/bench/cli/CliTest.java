@@ -95,7 +95,7 @@ class CliTest {
         "--min-errors -3 | --min-errors must be 0 or more, got -3",
         "--threads 0 | --threads must be between 1 and 1024, got 0",
         "--confidence 1.5 | --confidence must lie strictly between 0 and 1",
-        "--tx two | Invalid value for option '--tx': 'two' is not an int",
+        "--tx two | --tx expected a whole number, got 'two'",
         "--k-factor 3 | --k-factor applies only to --fading rician",
         "--fading rician | --fading rician needs --k-factor",
         "--doppler 0.7 | --doppler must be a normalised Doppler",

@@ -6,11 +6,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import org.fadebench.bench.settings.RunSettings;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 class ScenarioLoaderTest {
+
+    private static long count(Scenario s) {
+        return RunSettings.all().stream().filter(s.values()::isSet).count();
+    }
 
     @Test
     void readsEveryKindOfValue() {
@@ -23,17 +28,18 @@ class ScenarioLoaderTest {
                 "  fer_floor: 1e-5",
                 "output:",
                 "  quiet: true"));
-        assertEquals("alamouti", s.settings().get("--code").value());
-        assertEquals("2", s.settings().get("--rx").value());
-        assertEquals(3, s.settings().get("--rx").line());
-        assertEquals("0,2.5,5", s.settings().get("--snr").value());
-        assertEquals("true", s.settings().get("--quiet").value());
-        assertEquals(5, s.settings().size());
+        assertEquals("alamouti", s.values().text(RunSettings.CODE));
+        assertEquals("2", s.values().text(RunSettings.RX));
+        assertEquals(3, s.values().origin(RunSettings.RX).line());
+        assertEquals("t.yaml", s.values().origin(RunSettings.RX).source());
+        assertEquals("0,2.5,5", s.values().text(RunSettings.SNR_DB));
+        assertEquals("true", s.values().text(RunSettings.QUIET));
+        assertEquals(5, count(s));
     }
 
     @Test
     void emptyFileSetsNothing() {
-        assertTrue(ScenarioLoader.parse("e.yaml", "# nothing\n").settings().isEmpty());
+        assertEquals(0, count(ScenarioLoader.parse("e.yaml", "# nothing\n")));
     }
 
     /** The shipped example scenario loads and sets only known keys. */
@@ -42,7 +48,7 @@ class ScenarioLoaderTest {
         Path example = Path.of("scenarios", "hilltop-gateway.yaml");
         assertTrue(Files.exists(example), "bench/scenarios/hilltop-gateway.yaml is shipped");
         Scenario s = ScenarioLoader.load(example);
-        assertTrue(s.settings().size() >= 10, "the example shows most keys");
+        assertTrue(count(s) >= 10, "the example shows most keys");
     }
 
     @ParameterizedTest(name = "{0}")
@@ -76,8 +82,7 @@ class ScenarioLoaderTest {
 
     @Test
     void closestKey() {
-        assertEquals("max_frames", ScenarioSchema.closest("maxframes", ScenarioSchema.names("sweep")).orElseThrow());
-        assertTrue(ScenarioSchema.closest("zebra", ScenarioSchema.names("sweep")).isEmpty());
-        assertEquals(3, ScenarioSchema.editDistance("kitten", "sitting"));
+        assertEquals("max_frames", RunSettings.closest("maxframes", RunSettings.names("sweep")).orElseThrow());
+        assertTrue(RunSettings.closest("zebra", RunSettings.names("sweep")).isEmpty());
     }
 }

@@ -1,0 +1,339 @@
+package org.fadebench.bench.run;
+
+import static org.fadebench.bench.settings.RunSettings.*;
+
+import java.io.Serializable;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.function.Supplier;
+import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.link.FrameCoding;
+import org.fadebench.bench.link.LinkSettings;
+import org.fadebench.bench.report.Archive;
+import org.fadebench.bench.settings.InvalidSettingException;
+import org.fadebench.bench.settings.RunSettings;
+import org.fadebench.bench.settings.Setting;
+import org.fadebench.bench.settings.SettingValues;
+import org.fadebench.bench.settings.SettingsText;
+import org.fadebench.bench.sweep.SnrGrid;
+import org.fadebench.bench.sweep.StopRules;
+import org.fadebench.channel.ChannelSpec;
+import org.fadebench.channel.ChannelTrace;
+import org.fadebench.channel.Fading;
+import org.fadebench.channel.KroneckerCorrelation;
+import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.Crc;
+import org.fadebench.coding.fec.FecScheme;
+import org.fadebench.coding.fec.Interleaving;
+import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.SpaceTimeCode;
+import org.fadebench.coding.stbc.SpaceTimeCodeFile;
+import org.fadebench.coding.stbc.SpaceTimeCodes;
+import org.fadebench.modem.LlrMethod;
+import org.fadebench.modem.Modulation;
+import org.fadebench.modem.MutualInformation;
+
+/**
+ * A validated {@code run}: everything needed to simulate, report and resume, built from the
+ * run's {@link SettingValues} alone ({@link #from}), without any command-line library, so that
+ * any process that holds the values (a worker of a cluster, a test) can rebuild the same run. Its
+ * serialised form is those values.
+ *
+ * @param values   the settings it was built from (paths resolved)
+ * @param source   the scenario file it came from, or null
+ * @param archive  the archive to write, or null
+ * @param bounds   the outage bounds to compare with, or null when they do not apply to the code
+ * @param traceOut where to write the channels of the first point's fading blocks, or null
+ */
+public record RunPlan(SettingValues values, String source, LinkSettings link, double[] snrDb, StopRules rules,
+                      long seed, int threads, double confidence, Path outDir, Path archive, boolean quiet,
+                      BoundSettings bounds, double targetFer, Path traceOut, int traceOutBlocks)
+        implements Serializable {
+
+    /**
+     * Builds and checks the run described by {@code values} (unset settings take the table's
+     * defaults). Throws {@link InvalidSettingException} naming the setting at fault, or
+     * {@link IllegalArgumentException} for a problem of several settings together.
+     *
+     * @param source the scenario file the values came from, for results.json, or null
+     */
+    public static RunPlan from(SettingValues values, String source) {
+        SettingValues v = SettingValues.defaults(RunSettings.all()).overlaidBy(values);
+        LinkSettings link = link(v);
+        double[] snrDb = parse(SNR_DB, () -> SnrGrid.parse(v.text(SNR_DB)));
+        Path traceOut = v.isSet(TRACE_OUT) ? Path.of(v.text(TRACE_OUT)) : null;
+        int traceOutBlocks = v.integer(TRACE_OUT_BLOCKS);
+        if (traceOut != null) {
+            String name = traceOut.getFileName().toString().toLowerCase(Locale.ROOT)
+                    .replaceAll("\\.(gz|xz|bz2|zst)$", "");
+            if (!name.endsWith(".npy") && !name.endsWith(".csv")) {
+                throw new InvalidSettingException(TRACE_OUT, traceOut + ": unknown trace type; valid endings: .npy, "
+                        + ".csv, each optionally followed by .gz, .xz, .bz2 or .zst");
+            }
+            if (traceOutBlocks < 1 || traceOutBlocks > 10_000_000) {
+                throw new InvalidSettingException(TRACE_OUT_BLOCKS, "must be between 1 and 10000000, got "
+                        + traceOutBlocks);
+            }
+        }
+        StopRules rules = parse(null, () -> new StopRules(v.whole(MIN_ERRORS), v.whole(MAX_FRAMES),
+                v.number(MAX_SECONDS), v.number(FER_FLOOR)));
+        int threads = v.isSet(THREADS) ? v.integer(THREADS) : Runtime.getRuntime().availableProcessors();
+        if (threads <= 0 || threads > 1024) {
+            throw new InvalidSettingException(THREADS, "must be between 1 and 1024, got " + threads);
+        }
+        double confidence = v.number(CONFIDENCE);
+        if (!(confidence > 0 && confidence < 1)) {
+            throw new InvalidSettingException(CONFIDENCE, "must lie strictly between 0 and 1 (e.g. 0.95), got "
+                    + confidence);
+        }
+        double targetFer = v.number(TARGET_FER);
+        if (!(targetFer > 0 && targetFer < 1)) {
+            throw new InvalidSettingException(TARGET_FER, "must lie strictly between 0 and 1 (e.g. 0.01), got "
+                    + targetFer);
+        }
+        BoundSettings bounds = bounds(v, link);
+        Path archive = null;
+        if (v.isSet(ARCHIVE)) {
+            String problem = Archive.problem(v.text(ARCHIVE));
+            if (problem != null) {
+                throw new IllegalArgumentException(problem);
+            }
+            archive = Path.of(v.text(ARCHIVE));
+        }
+        Path outDir = Path.of(v.text(FOLDER));
+        if (Files.exists(outDir) && !Files.isDirectory(outDir)) {
+            throw new InvalidSettingException(FOLDER, v.text(FOLDER) + " exists and is not a folder");
+        }
+        return new RunPlan(resolvePaths(v), source, link, snrDb, rules, v.whole(SEED), threads, confidence, outDir, archive,
+                v.flag(QUIET), bounds, targetFer, traceOut, traceOutBlocks);
+    }
+
+    /**
+     * The link the values describe: code, antennas, modulation, channel, frame coding, frame length
+     * and coherence (also what {@code bounds} computes the bounds of). Unset settings must already
+     * hold the table's defaults.
+     */
+    public static LinkSettings link(SettingValues v) {
+        Modulation mod = parse(MODULATION, () -> Modulation.fromCliName(v.text(MODULATION)));
+        SpaceTimeCode stbc = code(v);
+        Decoder dec = v.isSet(DECODER) ? parse(DECODER, () -> Decoder.fromCliName(v.text(DECODER)))
+                : stbc.isOrthogonal() ? Decoder.MF : Decoder.MMSE;
+        int nr = v.integer(RX);
+        int nTx = v.isSet(TX) ? v.integer(TX) : stbc.transmitAntennas();
+        ChannelSpec channel = withCorrelationMatrices(channelSpec(v), v, nr, nTx);
+        FrameCoding coding = frameCoding(v);
+        int bits = v.isSet(FRAME_BITS) ? v.integer(FRAME_BITS)
+                : coding.coded() ? LinkSettings.DEFAULT_FRAME_BITS
+                : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
+        int coherence = v.integer(COHERENCE);
+        return parse(null, () -> new LinkSettings(mod, stbc, nTx, nr, channel, bits, coherence, dec, coding));
+    }
+
+    /**
+     * The bound settings for a link, or null where they do not apply: a code that is not
+     * orthogonal, a channel that changes within a block (Doppler) or replays a trace.
+     */
+    public static BoundSettings bounds(SettingValues v, LinkSettings link) {
+        Double rate = v.number(RATE);
+        if (rate != null && !(rate > 0)) {
+            throw new InvalidSettingException(RATE, "must be a positive number of bits per channel use, got " + rate);
+        }
+        int draws = v.integer(OUTAGE_DRAWS);
+        if (draws < 1 || draws > 100_000_000) {
+            throw new InvalidSettingException(OUTAGE_DRAWS, "must be between 1 and 100000000, got " + draws);
+        }
+        MutualInformation.Kind kind = parse(MI, () -> MutualInformation.Kind.fromCliName(v.text(MI)));
+        if (!link.code().isOrthogonal()) {
+            return null;
+        }
+        BoundSettings s = parse(null, () -> BoundSettings.of(link));
+        if (rate != null) {
+            s = s.withSpectralEfficiency(rate);
+        }
+        s = s.withInformation(kind).withMimoDraws(draws, BoundSettings.DEFAULT_MIMO_SEED);
+        ChannelSpec channel = link.channel();
+        if (channel.varies() || channel.trace() != null) {
+            return null;
+        }
+        return s.withChannel(channel);
+    }
+
+    /** The space-time code: from the catalogue, or from a file. */
+    public static SpaceTimeCode code(SettingValues v) {
+        if (v.isSet(CODE_FILE)) {
+            if (v.isSet(CODE) && v.origin(CODE) != SettingValues.Origin.DEFAULT) {
+                throw new InvalidSettingException(CODE_FILE, v.text(CODE_FILE)
+                        + ": give either --code or --code-file, not both");
+            }
+            return parse(CODE_FILE, () -> SpaceTimeCodeFile.read(Path.of(v.text(CODE_FILE))));
+        }
+        return parse(CODE, () -> SpaceTimeCodes.byName(v.text(CODE)));
+    }
+
+    /** The run's settings as a scenario file, so that running the file repeats the run. */
+    public String scenarioText() {
+        List<String> comment = new ArrayList<>();
+        comment.add("fadebench scenario: the settings of this run, written by fadebench"
+                + (source != null ? " (from " + source + " and the command line)" : ""));
+        comment.add("every setting is listed; those not set are comments; file and folder names are absolute");
+        return SettingsText.scenario(values, RunSettings.all(), comment);
+    }
+
+    /**
+     * The settings as results.json records them: every setting by its key, those derived from
+     * others (antennas, decoder, frame length, interleaver, threads, rate) at the value the run
+     * used; then the SNR points, the channel's description and the scenario file.
+     */
+    public Map<String, Object> settings() {
+        Map<String, Object> m = SettingsText.json(values, RunSettings.all());
+        m.put(TX.jsonKey(), link.transmitAntennas());
+        m.put(DECODER.jsonKey(), link.decoder().cliName());
+        m.put(FRAME_BITS.jsonKey(), link.frameBits());
+        m.put(INTERLEAVER.jsonKey(), link.coding().interleaving().cliName());
+        m.put(THREADS.jsonKey(), threads);
+        m.put(RATE.jsonKey(), bounds == null ? null : bounds.spectralEfficiency());
+        m.put("snr_points_db", snrDb);
+        m.put("channel", link.channel().describe());
+        m.put("scenario", source);
+        return m;
+    }
+
+    /** Every setting that changes the numbers, for the checkpoint's fingerprint. */
+    public String numbersFingerprintText(int batchFrames) {
+        return String.join("|", "v3", link.describe(), link.coding().toString(), link.channel().describe(),
+                SpaceTimeCodeFile.format(link.code()), link.decoder().cliName(), link.modulation().cliName(),
+                link.fading().cliName(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),
+                Long.toString(rules.minErrors()), Long.toString(rules.maxFrames()), Double.toString(rules.maxSeconds()),
+                Double.toString(rules.ferFloor()), Long.toString(seed), Integer.toString(batchFrames));
+    }
+
+    /** A plan travels as its settings and is rebuilt from them where it arrives. */
+    private Object writeReplace() {
+        return new Serialised(values, source);
+    }
+
+    private record Serialised(SettingValues values, String source) implements Serializable {
+        private Object readResolve() {
+            return from(values, source);
+        }
+    }
+
+    /** File and folder names made absolute, so a written scenario means the same from anywhere. */
+    private static SettingValues resolvePaths(SettingValues v) {
+        for (Setting s : RunSettings.all()) {
+            if (s.kind() == Setting.Kind.PATH && v.isSet(s)) {
+                String text = v.text(s);
+                if (text.isBlank()) {
+                    throw new InvalidSettingException(s, "needs a file or folder name, got nothing");
+                }
+                String resolved = parse(s, () -> Path.of(text).toAbsolutePath().normalize().toString());
+                v = v.with(s, resolved, v.origin(s));
+            }
+        }
+        return v;
+    }
+
+    /** Full correlation matrices ({@code link.rx_corr_matrix}, {@code link.tx_corr_matrix}). */
+    private static ChannelSpec withCorrelationMatrices(ChannelSpec channel, SettingValues v, int nr, int mt) {
+        double[] rx = v.matrix(RX_CORR_MATRIX);
+        double[] tx = v.matrix(TX_CORR_MATRIX);
+        if (rx == null && tx == null) {
+            return channel;
+        }
+        if (rx != null && rx.length != 2 * nr * nr) {
+            throw new InvalidSettingException(RX_CORR_MATRIX, "must be " + nr + " x " + nr + " for " + nr
+                    + " receive antennas");
+        }
+        if (tx != null && tx.length != 2 * mt * mt) {
+            throw new InvalidSettingException(TX_CORR_MATRIX, "must be " + mt + " x " + mt + " for " + mt
+                    + " transmit antennas");
+        }
+        return parse(rx != null ? RX_CORR_MATRIX : TX_CORR_MATRIX,
+                () -> channel.withCorrelation(KroneckerCorrelation.of(nr, mt, rx, tx)));
+    }
+
+    /** The channel from its settings; only the settings given are passed on. */
+    private static ChannelSpec channelSpec(SettingValues v) {
+        Fading fad = parse(FADING, () -> Fading.fromCliName(v.text(FADING)));
+        return parse(null, () -> {
+            ChannelSpec c = ChannelSpec.of(fad);
+            if (v.isSet(K_FACTOR)) {
+                c = c.withKFactor(v.number(K_FACTOR));
+            }
+            if (v.isSet(NAKAGAMI_M)) {
+                c = c.withNakagamiM(v.number(NAKAGAMI_M));
+            }
+            if (v.isSet(TX_CORR)) {
+                c = c.withTxCorr(v.number(TX_CORR));
+            }
+            if (v.isSet(RX_CORR)) {
+                c = c.withRxCorr(v.number(RX_CORR));
+            }
+            if (v.isSet(DOPPLER)) {
+                c = c.withDoppler(v.number(DOPPLER));
+            }
+            if (v.isSet(CSI_ERROR)) {
+                c = c.withCsiError(v.number(CSI_ERROR));
+            }
+            if (v.isSet(PILOTS)) {
+                c = c.withPilots(v.integer(PILOTS));
+            }
+            if (v.isSet(TRACE)) {
+                c = c.withTrace(readTrace(Path.of(v.text(TRACE))));
+            }
+            return c;
+        });
+    }
+
+    private static ChannelTrace readTrace(Path file) {
+        try {
+            return ChannelTrace.read(file);
+        } catch (java.io.UncheckedIOException e) {
+            throw new InvalidSettingException(TRACE, file + ": " + (e.getCause() instanceof java.nio.file.NoSuchFileException
+                    ? "no such file" : "cannot be read (" + e.getCause().getMessage() + ")"));
+        } catch (IllegalArgumentException e) {
+            throw new InvalidSettingException(TRACE, e.getMessage());
+        }
+    }
+
+    /** CRC, channel code, interleaver and LLRs from their settings. */
+    private static FrameCoding frameCoding(SettingValues v) {
+        Crc c = parse(CRC, () -> Crc.fromCliName(v.text(CRC)));
+        ChannelCode code = parse(FEC, () -> ChannelCode.fromCliName(v.text(FEC)));
+        boolean coded = c != Crc.NONE || code != ChannelCode.NONE;
+        Interleaving il = v.isSet(INTERLEAVER) ? parse(INTERLEAVER, () -> Interleaving.fromCliName(v.text(INTERLEAVER)))
+                : coded ? Interleaving.RANDOM : Interleaving.NONE;
+        LlrMethod method = parse(LLR, () -> LlrMethod.fromCliName(v.text(LLR)));
+        int rows = v.integer(INTERLEAVER_ROWS);
+        return parse(null, () -> new FrameCoding(new FecScheme(c, code), il, rows, method));
+    }
+
+    /**
+     * Runs a parser. Its {@link IllegalArgumentException} becomes an {@link InvalidSettingException}
+     * of {@code setting}, or, when {@code setting} is null, of the setting whose option the message
+     * starts with (the library's messages name the option at fault); others pass unchanged.
+     */
+    static <T> T parse(Setting setting, Supplier<T> parser) {
+        try {
+            return parser.get();
+        } catch (InvalidSettingException e) {
+            throw e;
+        } catch (IllegalArgumentException e) {
+            String msg = String.valueOf(e.getMessage());
+            if (setting != null) {
+                throw new InvalidSettingException(setting, ": " + msg);
+            }
+            String first = msg.split("[\\s:]", 2)[0];
+            Setting named = first.startsWith("--") ? RunSettings.forOption(first).orElse(null) : null;
+            if (named == null) {
+                throw e;
+            }
+            throw new InvalidSettingException(named, msg.substring(first.length()).stripLeading());
+        }
+    }
+}
