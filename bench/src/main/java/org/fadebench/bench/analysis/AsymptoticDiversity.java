@@ -71,18 +71,18 @@ public record AsymptoticDiversity(double order, String basis) {
         if (!far && !high) {
             return Optional.empty();
         }
-        return Optional.of(notYet(fit, high) + String.format(Locale.ROOT, " (asymptote %.2f: %s)",
-                order, basis));
+        return Optional.of(notYet(String.format(Locale.ROOT, "asymptote %.2f: %s", order, basis), high));
     }
 
     /** The warning where no asymptote is known: only the FER of the fit window is checked. */
     static Optional<String> warningWithoutAsymptote(DiversityFit fit, List<PointResult> points) {
-        return highFer(fit, points) ? Optional.of(notYet(fit, true)) : Optional.empty();
+        return highFer(fit, points) ? Optional.of(notYet(null, true)) : Optional.empty();
     }
 
-    private static String notYet(DiversityFit fit, boolean high) {
-        return "not yet on its asymptote" + (high ? ": fitted where FER is above " + HIGH_FER : "")
-                + "; simulate higher SNR (and more frames) before quoting it";
+    private static String notYet(String asymptote, boolean high) {
+        String why = high ? "fitted where FER is above " + HIGH_FER : null;
+        String detail = asymptote == null ? why : why == null ? asymptote : asymptote + "; " + why;
+        return "not yet on its asymptote (" + detail + "); simulate higher SNR (and more frames) before quoting it";
     }
 
     private static boolean highFer(DiversityFit fit, List<PointResult> points) {

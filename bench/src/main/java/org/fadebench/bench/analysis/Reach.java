@@ -10,7 +10,7 @@ public enum Reach {
     /** The curve crosses the target within the swept SNR range. */
     IN_RANGE("within the swept range"),
     /** A closed-form bound crosses the target outside the swept range; the SNR is still given. */
-    OUTSIDE_RANGE("outside the swept range (from the closed form)"),
+    OUTSIDE_RANGE("outside the swept range, from the closed form"),
     /** The simulated link did not fall to the target FER at any swept SNR. */
     LINK_NOT_REACHED("the link did not reach the target FER in the swept range"),
     /** A Monte Carlo bound is still above the target at the highest swept SNR (it is counted only there). */

@@ -78,7 +78,7 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
                 ? String.format(Locale.ROOT, "diversity order %.2f (95 %% interval %.2f to %.2f), fitted on %s dB",
                         f.order(), f.low(), f.high(), f.snrDbUsed())
                 : String.format(Locale.ROOT, "diversity order %.2f, fitted on %s dB", f.order(), f.snrDbUsed()))
-                + warning.map(w -> ": " + w).orElse(""))
+                + warning.map(w -> "; " + w).orElse(""))
                 .orElse("diversity order: not enough points with errors to fit"));
         String target = String.format(Locale.ROOT, "SNR at FER %s: %s", targetFer,
                 snrDbAtTarget.isPresent() ? String.format(Locale.ROOT, "%.2f dB", snrDbAtTarget.getAsDouble())
@@ -93,10 +93,12 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
             OptionalDouble g = gapDb(b);
             String at = ba.snrDbAtTarget().isPresent()
                     ? String.format(Locale.ROOT, "%.2f dB", ba.snrDbAtTarget().getAsDouble()) : "none";
-            String gap = g.isPresent() ? String.format(Locale.ROOT, "gap %.2f dB", g.getAsDouble()) : "no gap";
             String note = ba.reach() == Reach.IN_RANGE ? "" : " (" + ba.reach().words() + ")";
-            lines.add(String.format(Locale.ROOT, "  %s outage bound at FER %s: %s, %s%s", b.key(), targetFer, at, gap,
-                    note));
+            Reach missing = analysis.gapReach(b);
+            String gap = g.isPresent() ? String.format(Locale.ROOT, ", gap %.2f dB", g.getAsDouble())
+                    : missing == ba.reach() ? "" : "; no gap: " + missing.words();
+            lines.add(String.format(Locale.ROOT, "  %s outage bound at FER %s: %s%s%s", b.key(), targetFer, at, note,
+                    gap));
         }
         return lines;
     }

@@ -96,7 +96,8 @@ class BoundTruthTest {
         RunSummary summary = RunSummary.of(bpsk, high, siso, 0.01, RunSummary.NO_BOUNDS);
         String text = String.join("\n", summary.lines());
         assertTrue(text.contains("none: the link did not reach the target FER in the swept range"), text);
-        assertTrue(text.contains("stbc outage bound at FER 0.01: 19.98 dB, no gap (outside the swept range"), text);
+        assertTrue(text.contains("stbc outage bound at FER 0.01: 19.98 dB (outside the swept range, from the closed form); no gap: "
+                + "the link did not reach the target FER in the swept range"), text);
         assertTrue(text.contains("uncoded link at the constellation's full rate: the QAM-constrained bound is 1"), text);
 
         // a Monte Carlo bound (2x2) still above the target at the top of a low sweep
