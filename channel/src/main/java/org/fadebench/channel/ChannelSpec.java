@@ -172,6 +172,7 @@ public final class ChannelSpec {
             }
             try {
                 trace.requireShape(nr, mt);
+                trace.requireLinkRange();
             } catch (IllegalArgumentException e) {
                 throw new IllegalArgumentException("--trace " + e.getMessage(), e);
             }

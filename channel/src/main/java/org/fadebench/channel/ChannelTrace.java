@@ -15,6 +15,15 @@ import java.nio.file.Path;
  */
 public final class ChannelTrace {
 
+    /**
+     * Largest magnitude of a real or imaginary part of an entry that a link accepts. A trace's power
+     * is the user's to choose, but the link multiplies entries with each other, with symbols and with
+     * 1/N0 (up to 1e40 at 400 dB), and sums up to 64·64 such terms: below 1e50 none of that leaves the
+     * range of a double (about 1.8e308). Files may hold any finite number; {@link #requireLinkRange}
+     * refuses the rest when a link would use them.
+     */
+    public static final double MAX_ENTRY = 1e50;
+
     private final String source;
     private final int nr;
     private final int mt;
@@ -123,6 +132,22 @@ public final class ChannelTrace {
         if (nr != this.nr || mt != this.mt) {
             throw new IllegalArgumentException(source + ": holds " + this.nr + " x " + this.mt
                     + " matrices (Nr x Mt) but the link has " + nr + " x " + mt);
+        }
+    }
+
+    /**
+     * Throws unless every real and imaginary part is at most {@link #MAX_ENTRY} in magnitude.
+     *
+     * @throws IllegalArgumentException naming the file, the first entry beyond it and the limit
+     */
+    public void requireLinkRange() {
+        int per = 2 * nr * mt;
+        for (int i = 0; i < data.length; i++) {
+            if (!(Math.abs(data[i]) <= MAX_ENTRY)) {
+                throw new IllegalArgumentException(source + ": " + TraceReader.entry(i / per, i % per / 2, nr, mt)
+                        + " has a part of magnitude " + Math.abs(data[i]) + "; a link takes entries whose real and "
+                        + "imaginary parts are at most 1e50 in magnitude (larger ones would overflow its arithmetic)");
+            }
         }
     }
 

@@ -1,5 +1,8 @@
 package org.fadebench.channel;
 
+import org.ejml.data.ZMatrixRMaj;
+import org.ejml.dense.row.mult.MatrixMatrixMult_ZDRM;
+
 /**
  * The receiver's channel knowledge (CSI): from the true Nr x Mt matrix H of a fading block it makes
  * the estimate Ĥ that the combiner is given. Three kinds:
@@ -38,8 +41,11 @@ public final class CsiEstimator {
     private final int mt;
     private final double errorVariance;
     private final int pilots;
-    private final double[] pilotGrid;
-    private final double[] received;
+    /** P (N x Mt), null unless least squares. */
+    private final ZMatrixRMaj pilotGrid;
+    /** Y_p (N x Nr) and Pᴴ Y_p (Mt x Nr), null unless least squares. */
+    private final ZMatrixRMaj received;
+    private final ZMatrixRMaj correlated;
 
     private CsiEstimator(int nr, int mt, double errorVariance, int pilots) {
         OutageBounds.checkAntennas(mt, nr);
@@ -48,7 +54,8 @@ public final class CsiEstimator {
         this.errorVariance = errorVariance;
         this.pilots = pilots;
         this.pilotGrid = pilots == 0 ? null : pilotMatrix(pilots, mt);
-        this.received = pilots == 0 ? null : new double[2 * pilots * nr];
+        this.received = pilots == 0 ? null : new ZMatrixRMaj(pilots, nr);
+        this.correlated = pilots == 0 ? null : new ZMatrixRMaj(mt, nr);
     }
 
     /** Ĥ = H. */
@@ -74,15 +81,14 @@ public final class CsiEstimator {
     }
 
     /** The N x Mt pilot matrix P(n, t) = e^{−j2π·n·t/N}/√Mt, interleaved row-major. */
-    static double[] pilotMatrix(int pilots, int mt) {
-        double[] p = new double[2 * pilots * mt];
+    static ZMatrixRMaj pilotMatrix(int pilots, int mt) {
+        ZMatrixRMaj p = new ZMatrixRMaj(pilots, mt);
         double scale = 1.0 / Math.sqrt(mt);
         for (int n = 0; n < pilots; n++) {
             for (int t = 0; t < mt; t++) {
                 // reduce n·t mod N first so the angle stays exact for large N
                 double angle = -2.0 * Math.PI * ((long) n * t % pilots) / pilots;
-                p[2 * (n * mt + t)] = scale * Math.cos(angle);
-                p[2 * (n * mt + t) + 1] = scale * Math.sin(angle);
+                p.set(n, t, scale * Math.cos(angle), scale * Math.sin(angle));
             }
         }
         return p;
@@ -116,24 +122,18 @@ public final class CsiEstimator {
         }
     }
 
+    /**
+     * Ĥ = (Mt/N)·(Pᴴ Y_p)ᵀ. The product is EJML's {@code multTransA_small}: its sum runs in one fixed
+     * order for every size (see the contributor guide, "Complex matrix products").
+     */
     private void leastSquaresEstimate(double[] h, double n0, Draws draws, double[] hHat) {
-        MimoChannel.apply(h, nr, mt, pilotGrid, 0, pilots, n0, draws, received, 0);
+        MimoChannel.apply(h, nr, mt, pilotGrid.data, 0, pilots, n0, draws, received.data, 0);
+        MatrixMatrixMult_ZDRM.multTransA_small(pilotGrid, received, correlated);
         double scale = (double) mt / pilots;
         for (int r = 0; r < nr; r++) {
             for (int t = 0; t < mt; t++) {
-                double re = 0;
-                double im = 0;
-                for (int k = 0; k < pilots; k++) {
-                    double pr = pilotGrid[2 * (k * mt + t)];
-                    double pi = pilotGrid[2 * (k * mt + t) + 1];
-                    double yr = received[2 * (k * nr + r)];
-                    double yi = received[2 * (k * nr + r) + 1];
-                    // conj(p) · y
-                    re += pr * yr + pi * yi;
-                    im += pr * yi - pi * yr;
-                }
-                hHat[2 * (r * mt + t)] = scale * re;
-                hHat[2 * (r * mt + t) + 1] = scale * im;
+                hHat[2 * (r * mt + t)] = scale * correlated.getReal(t, r);
+                hHat[2 * (r * mt + t) + 1] = scale * correlated.getImag(t, r);
             }
         }
     }

@@ -39,7 +39,12 @@ public enum Fading {
         }
     }
 
-    /** @throws IllegalArgumentException naming the valid choices when the name is unknown */
+    /**
+     * The lookup of modem's {@code NamedChoice}, written out here because channel depends on no
+     * other fadebench module; same rules and message form.
+     *
+     * @throws IllegalArgumentException naming the valid choices when the name is unknown
+     */
     public static Fading fromCliName(String name) {
         for (Fading f : values()) {
             if (f.cliName.equalsIgnoreCase(name.trim())) {

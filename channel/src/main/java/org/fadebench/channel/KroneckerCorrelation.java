@@ -1,7 +1,10 @@
 package org.fadebench.channel;
 
 import org.ejml.data.DMatrixRMaj;
+import org.ejml.data.ZMatrixRMaj;
+import org.ejml.dense.row.CommonOps_ZDRM;
 import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
+import org.ejml.dense.row.mult.MatrixMatrixMult_ZDRM;
 import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
 
 /**
@@ -24,7 +27,7 @@ import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
  * R^{1/2}. This also covers singular matrices (e.g. fully correlated antennas), where a Cholesky
  * factor does not exist.
  *
- * <p>An instance holds a work array: use one per thread.
+ * <p>An instance holds work matrices: use one per thread.
  */
 public final class KroneckerCorrelation {
 
@@ -33,18 +36,23 @@ public final class KroneckerCorrelation {
 
     private final int nr;
     private final int mt;
-    /** R_rx^{1/2}, or null for no receive correlation. */
-    private final double[] rxRoot;
-    /** R_tx^{1/2}, or null for no transmit correlation. */
-    private final double[] txRoot;
-    private final double[] work;
+    /** R_rx^{1/2} (Nr x Nr), or null for no receive correlation. */
+    private final ZMatrixRMaj rxRoot;
+    /** (R_tx^{1/2})ᵀ (Mt x Mt, transposed without conjugation), or null for no transmit correlation. */
+    private final ZMatrixRMaj txRootTransposed;
+    /** Work matrices, Nr x Mt: H, R_rx^{1/2} · H, and the correlated H. */
+    private final ZMatrixRMaj channel;
+    private final ZMatrixRMaj left;
+    private final ZMatrixRMaj both;
 
-    private KroneckerCorrelation(int nr, int mt, double[] rxRoot, double[] txRoot) {
+    private KroneckerCorrelation(int nr, int mt, ZMatrixRMaj rxRoot, ZMatrixRMaj txRootTransposed) {
         this.nr = nr;
         this.mt = mt;
         this.rxRoot = rxRoot;
-        this.txRoot = txRoot;
-        this.work = new double[2 * nr * mt];
+        this.txRootTransposed = txRootTransposed;
+        this.channel = new ZMatrixRMaj(nr, mt);
+        this.left = new ZMatrixRMaj(nr, mt);
+        this.both = new ZMatrixRMaj(nr, mt);
     }
 
     /** No correlation: H = H_w. */
@@ -76,7 +84,7 @@ public final class KroneckerCorrelation {
         OutageBounds.checkAntennas(mt, nr);
         return new KroneckerCorrelation(nr, mt,
                 rx == null ? null : squareRoot("rx correlation matrix", rx, nr),
-                tx == null ? null : squareRoot("tx correlation matrix", tx, mt));
+                tx == null ? null : CommonOps_ZDRM.transpose(squareRoot("tx correlation matrix", tx, mt), null));
     }
 
     /**
@@ -107,9 +115,9 @@ public final class KroneckerCorrelation {
         return m;
     }
 
-    /** The same correlation with its own work array, for another thread. */
+    /** The same correlation with its own work matrices, for another thread. */
     public KroneckerCorrelation copy() {
-        return new KroneckerCorrelation(nr, mt, rxRoot, txRoot);
+        return new KroneckerCorrelation(nr, mt, rxRoot, txRootTransposed);
     }
 
     public int nr() {
@@ -122,25 +130,29 @@ public final class KroneckerCorrelation {
 
     /** True when neither side is correlated. */
     public boolean isIdentity() {
-        return rxRoot == null && txRoot == null;
+        return rxRoot == null && txRootTransposed == null;
     }
 
-    /** Replaces the Nr x Mt matrix at {@code h[off]} by R_rx^{1/2} · H · (R_tx^{1/2})ᵀ. */
+    /**
+     * Replaces the Nr x Mt matrix at {@code h[off]} by R_rx^{1/2} · H · (R_tx^{1/2})ᵀ. Allocates
+     * nothing. The products are EJML's {@code mult_small}: its sum runs in one fixed order for every
+     * size (see the contributor guide, "Complex matrix products").
+     */
     public void correlate(double[] h, int off) {
         if (isIdentity()) {
             return;
         }
-        int n = 2 * nr * mt;
+        System.arraycopy(h, off, channel.data, 0, channel.data.length);
+        ZMatrixRMaj m = channel;
         if (rxRoot != null) {
-            multiplyLeft(h, off);
-        } else {
-            System.arraycopy(h, off, work, 0, n);
+            MatrixMatrixMult_ZDRM.mult_small(rxRoot, m, left);
+            m = left;
         }
-        if (txRoot != null) {
-            multiplyRightTransposed(h, off);
-        } else {
-            System.arraycopy(work, 0, h, off, n);
+        if (txRootTransposed != null) {
+            MatrixMatrixMult_ZDRM.mult_small(m, txRootTransposed, both);
+            m = both;
         }
+        System.arraycopy(m.data, 0, h, off, m.data.length);
     }
 
     /** Throws unless this correlation is for an {@code nr} x {@code mt} channel. */
@@ -151,50 +163,8 @@ public final class KroneckerCorrelation {
         }
     }
 
-    /** work = R_rx^{1/2} · H. */
-    private void multiplyLeft(double[] h, int off) {
-        double[] a = rxRoot;
-        for (int r = 0; r < nr; r++) {
-            for (int t = 0; t < mt; t++) {
-                double re = 0;
-                double im = 0;
-                for (int i = 0; i < nr; i++) {
-                    double ar = a[2 * (r * nr + i)];
-                    double ai = a[2 * (r * nr + i) + 1];
-                    double hr = h[off + 2 * (i * mt + t)];
-                    double hi = h[off + 2 * (i * mt + t) + 1];
-                    re += ar * hr - ai * hi;
-                    im += ar * hi + ai * hr;
-                }
-                work[2 * (r * mt + t)] = re;
-                work[2 * (r * mt + t) + 1] = im;
-            }
-        }
-    }
-
-    /** H = work · (R_tx^{1/2})ᵀ. */
-    private void multiplyRightTransposed(double[] h, int off) {
-        double[] b = txRoot;
-        for (int r = 0; r < nr; r++) {
-            for (int t = 0; t < mt; t++) {
-                double re = 0;
-                double im = 0;
-                for (int j = 0; j < mt; j++) {
-                    double wr = work[2 * (r * mt + j)];
-                    double wi = work[2 * (r * mt + j) + 1];
-                    double br = b[2 * (t * mt + j)];
-                    double bi = b[2 * (t * mt + j) + 1];
-                    re += wr * br - wi * bi;
-                    im += wr * bi + wi * br;
-                }
-                h[off + 2 * (r * mt + t)] = re;
-                h[off + 2 * (r * mt + t) + 1] = im;
-            }
-        }
-    }
-
     /** Validates {@code m} (n x n) and returns its Hermitian positive semidefinite square root. */
-    private static double[] squareRoot(String what, double[] m, int n) {
+    private static ZMatrixRMaj squareRoot(String what, double[] m, int n) {
         if (m.length != 2 * n * n) {
             throw new IllegalArgumentException(what + " must be " + n + " x " + n + " (" + 2 * n * n
                     + " numbers, re and im interleaved), got " + m.length + " numbers");
@@ -249,11 +219,10 @@ public final class KroneckerCorrelation {
                 }
             }
         }
-        double[] out = new double[2 * n * n];
+        ZMatrixRMaj out = new ZMatrixRMaj(n, n);
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < n; j++) {
-                out[2 * (i * n + j)] = root.get(i, j);
-                out[2 * (i * n + j) + 1] = root.get(i + n, j);
+                out.set(i, j, root.get(i, j), root.get(i + n, j));
             }
         }
         return out;

@@ -43,6 +43,12 @@ final class TraceReader {
 
     static ChannelTrace read(Path file, TraceLimits limits) {
         String name = file.toString();
+        if (Files.isDirectory(file)) {
+            throw bad(name, "is a folder, not a trace file");
+        }
+        if (Files.exists(file) && !Files.isRegularFile(file)) {
+            throw bad(name, "not a regular file (a pipe or a device?); give a trace file");
+        }
         InputStream raw;
         try {
             raw = Files.newInputStream(file);
@@ -153,7 +159,9 @@ final class TraceReader {
             throw bad(name, "data of " + dataBytes + " bytes exceeds the limit of " + limits.maxBytes() + " bytes");
         }
 
-        double[] data = new double[(int) (2 * count * nr * mt)];
+        // the header's claim is not trusted with memory: the array grows as the data arrives
+        long values = 2 * count * nr * mt;
+        double[] data = new double[(int) Math.min(values, CHUNK)];
         int per = nr * mt;
         byte[] chunk = new byte[CHUNK];
         ByteBuffer buffer = ByteBuffer.wrap(chunk).order(order);
@@ -166,6 +174,10 @@ final class TraceReader {
                 throw bad(name, "truncated: data ends after " + (done + got) + " of " + dataBytes + " bytes");
             }
             buffer.clear();
+            long needed = 2L * (entry + want / itemSize);
+            if (needed > data.length) {
+                data = Arrays.copyOf(data, (int) Math.min(values, Math.max(needed, 2L * data.length)));
+            }
             for (int i = 0; i < want / itemSize; i++, entry++) {
                 double re = itemSize == 16 ? buffer.getDouble() : buffer.getFloat();
                 double im = itemSize == 16 ? buffer.getDouble() : buffer.getFloat();

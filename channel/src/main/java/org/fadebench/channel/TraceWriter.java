@@ -10,7 +10,9 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 import java.util.Locale;
+import java.util.concurrent.ThreadLocalRandom;
 import org.apache.commons.compress.compressors.CompressorException;
 import org.apache.commons.compress.compressors.CompressorStreamFactory;
 
@@ -46,7 +48,10 @@ final class TraceWriter {
         Path dir = file.toAbsolutePath().getParent();
         Path temporary = null;
         try {
-            temporary = Files.createTempFile(dir, "." + fileName + ".", ".tmp");
+            // created like any new file (not by createTempFile, which makes it owner-only): the
+            // trace gets the permissions the umask leaves
+            temporary = dir.resolve("." + fileName + "." + Long.toHexString(ThreadLocalRandom.current().nextLong())
+                    + ".tmp");
             try (OutputStream out = open(temporary, compression)) {
                 if (npy) {
                     writeNpy(trace, out);
@@ -70,7 +75,8 @@ final class TraceWriter {
     }
 
     private static OutputStream open(Path file, String compression) throws IOException {
-        OutputStream out = new BufferedOutputStream(Files.newOutputStream(file), 1 << 16);
+        OutputStream out = new BufferedOutputStream(Files.newOutputStream(file, StandardOpenOption.CREATE_NEW,
+                StandardOpenOption.WRITE), 1 << 16);
         if (compression == null) {
             return out;
         }

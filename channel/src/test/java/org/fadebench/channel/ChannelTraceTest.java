@@ -294,6 +294,49 @@ class ChannelTraceTest {
                         () -> ChannelTrace.of("x", 1, 2, new double[] {0, 0, 0, 0, 0, 0, Double.NaN, 0})).getMessage());
     }
 
+    /**
+     * A small .npy file whose header claims (16777216, 4, 2) complex64 matrices (1 GiB of data, within
+     * the content limit) reserves no memory for the claim: memory grows with the data actually read,
+     * so the truncated file is reported after allocating little (the claim alone would be 2 GiB of
+     * doubles). Allocation is measured for this thread by the JVM's own counter.
+     */
+    @Test
+    void npyHeaderClaimsDoNotReserveMemory() throws IOException {
+        byte[] file = npy(1, GOOD.replace("<c16", "<c8").replace("(1, 1, 1)", "(16777216, 4, 2)"),
+                data("<c8", new double[2 * 100]));
+        com.sun.management.ThreadMXBean threads =
+                (com.sun.management.ThreadMXBean) java.lang.management.ManagementFactory.getThreadMXBean();
+        long before = threads.getThreadAllocatedBytes(Thread.currentThread().getId());
+        assertBad(file, "truncated: data ends after 800 of 1073741824 bytes");
+        long allocated = threads.getThreadAllocatedBytes(Thread.currentThread().getId()) - before;
+        assertTrue(allocated < 16L << 20, "allocated " + allocated + " bytes");
+    }
+
+    /** Folders and pipes are refused before opening: reading a pipe would wait for a writer forever. */
+    @Test
+    void onlyRegularFilesAreRead() throws Exception {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> ChannelTrace.read(dir));
+        assertEquals(dir + ": is a folder, not a trace file", e.getMessage());
+        Path fifo = dir.resolve("trace.npy");
+        org.junit.jupiter.api.Assumptions.assumeTrue(
+                new ProcessBuilder("mkfifo", fifo.toString()).start().waitFor() == 0, "mkfifo is available");
+        e = assertThrows(IllegalArgumentException.class, () -> ChannelTrace.read(fifo));
+        assertEquals(fifo + ": not a regular file (a pipe or a device?); give a trace file", e.getMessage());
+    }
+
+    /** Files hold any finite number; a link takes parts up to 1e50 in magnitude, and names the first beyond. */
+    @Test
+    void linkRangeIsCheckedWithTheEntryNamed() {
+        ChannelTrace.of("ok", 1, 2, new double[] {1e50, -1e50, 0, Double.MIN_VALUE}).requireLinkRange();
+        for (double huge : new double[] {1.0000000000000001e50 * 1.0000001, -1e150, 1e200}) {
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                    () -> ChannelTrace.of("t", 1, 2, new double[] {1, 0, 0, 0, 0, 1, 0, huge}).requireLinkRange());
+            assertEquals("t: matrix 1, entry (0, 1) has a part of magnitude " + Math.abs(huge) + "; a link takes entries"
+                    + " whose real and imaginary parts are at most 1e50 in magnitude (larger ones would overflow its"
+                    + " arithmetic)", e.getMessage());
+        }
+    }
+
     // ------------------------------------------------------------------ helpers
 
     private void assertBad(byte[] content, String problem) throws IOException {

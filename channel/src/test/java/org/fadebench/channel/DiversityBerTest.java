@@ -128,7 +128,7 @@ class DiversityBerTest {
     void nakagamiOneIsRayleigh() {
         int branches = 3;
         double gammaBar = fromDb(4.0);
-        double closedForm = ErrorRates.mrcBpskBerRayleigh(branches, gammaBar);
+        double closedForm = ErrorRates.rayleighMrcBpskBitErrorRate(branches, gammaBar);
         double integral = mgfBer(s -> Math.pow(nakagamiMgf(s, 1.0, gammaBar), branches));
         assertEquals(closedForm, integral, 1e-9 * closedForm);
         assertWithinInterval(closedForm, monteCarlo(new NakagamiFading(1.0), branches, 1, gammaBar, 13),

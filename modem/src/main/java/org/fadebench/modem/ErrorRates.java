@@ -22,7 +22,7 @@ public final class ErrorRates {
      * BPSK (and Gray QPSK per bit) in AWGN: P_b = Q(√(2 Eb/N0)). J. G. Proakis and M. Salehi,
      * Digital Communications, 5th ed., McGraw-Hill, 2008, Sec. 4.2 (binary antipodal signalling).
      */
-    public static double bpskBerAwgn(double ebN0) {
+    public static double bpskBitErrorRate(double ebN0) {
         return q(Math.sqrt(2.0 * ebN0));
     }
 
@@ -32,9 +32,9 @@ public final class ErrorRates {
      * Digital Communications, 5th ed., 2008, Sec. 4.3 (square QAM as two √M-PAM; equation number
      * from memory, not cited). M = 2 gives BPSK, P_s = Q(√(2 Es/N0)).
      */
-    public static double qamSerAwgn(int order, double esN0) {
+    public static double squareQamSymbolErrorRate(int order, double esN0) {
         if (order == 2) {
-            return bpskBerAwgn(esN0);
+            return bpskBitErrorRate(esN0);
         }
         double sqrtM = Math.sqrt(order);
         double pam = 2.0 * (1.0 - 1.0 / sqrtM) * q(Math.sqrt(3.0 * esN0 / (order - 1)));
@@ -51,9 +51,9 @@ public final class ErrorRates {
      * </pre>
      * averaged over k = 1..log2 √M. M = 2 gives BPSK.
      */
-    public static double qamBerAwgn(int order, double ebN0) {
+    public static double squareQamBitErrorRate(int order, double ebN0) {
         if (order == 2) {
-            return bpskBerAwgn(ebN0);
+            return bpskBitErrorRate(ebN0);
         }
         int sqrtM = (int) Math.round(Math.sqrt(order));
         int bitsPerAxis = Integer.numberOfTrailingZeros(sqrtM);
@@ -82,7 +82,7 @@ public final class ErrorRates {
      * Proakis and Salehi, Digital Communications, 5th ed., 2008, Sec. 13.4 (diversity with
      * binary signals; section number from memory).
      */
-    public static double mrcBpskBerRayleigh(int branches, double gammaBar) {
+    public static double rayleighMrcBpskBitErrorRate(int branches, double gammaBar) {
         double mu = Math.sqrt(gammaBar / (1.0 + gammaBar));
         double lo = 0.5 * (1.0 - mu);
         double hi = 0.5 * (1.0 + mu);

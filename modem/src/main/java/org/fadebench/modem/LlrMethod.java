@@ -3,7 +3,7 @@ package org.fadebench.modem;
 import java.util.Locale;
 
 /** How bit LLRs are computed from a symbol estimate: max-log or exact (log-sum-exp). */
-public enum LlrMethod {
+public enum LlrMethod implements NamedChoice {
     MAXLOG("maxlog"),
     EXACT("exact");
 
@@ -13,18 +13,14 @@ public enum LlrMethod {
         this.cliName = cliName;
     }
 
+    @Override
     public String cliName() {
         return cliName;
     }
 
     /** @throws IllegalArgumentException naming the valid choices when the name is unknown */
     public static LlrMethod fromCliName(String name) {
-        for (LlrMethod m : values()) {
-            if (m.cliName.equalsIgnoreCase(name.trim())) {
-                return m;
-            }
-        }
-        throw new IllegalArgumentException("unknown LLR method '" + name + "'; valid: maxlog, exact");
+        return NamedChoice.find(values(), name, "LLR method");
     }
 
     @Override

@@ -1,14 +1,12 @@
 package org.fadebench.modem;
 
-import java.util.Arrays;
 import java.util.Locale;
-import java.util.stream.Collectors;
 
 /**
  * The modulations fadebench carries: BPSK and Gray-labelled square QAM, each with unit average
  * symbol energy. {@link #cliName()} is the name used on the command line and in scenario files.
  */
-public enum Modulation {
+public enum Modulation implements NamedChoice {
     BPSK("bpsk", 1),
     QPSK("qpsk", 2),
     QAM16("16qam", 4),
@@ -24,6 +22,7 @@ public enum Modulation {
     }
 
     /** Name on the command line, e.g. {@code 16qam}. */
+    @Override
     public String cliName() {
         return cliName;
     }
@@ -49,17 +48,12 @@ public enum Modulation {
      * @throws IllegalArgumentException naming the valid choices when the name is unknown
      */
     public static Modulation fromCliName(String name) {
-        for (Modulation m : values()) {
-            if (m.cliName.equalsIgnoreCase(name.trim())) {
-                return m;
-            }
-        }
-        throw new IllegalArgumentException("unknown modulation '" + name + "'; valid: " + choices());
+        return NamedChoice.find(values(), name, "modulation");
     }
 
     /** The valid command-line names, comma separated. */
     public static String choices() {
-        return Arrays.stream(values()).map(Modulation::cliName).collect(Collectors.joining(", "));
+        return NamedChoice.list(values());
     }
 
     @Override

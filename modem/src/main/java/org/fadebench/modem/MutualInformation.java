@@ -29,7 +29,7 @@ import org.apache.commons.math3.analysis.polynomials.PolynomialSplineFunction;
 public final class MutualInformation {
 
     /** The two information measures. */
-    public enum Kind {
+    public enum Kind implements NamedChoice {
         /** I(X; Y): the limit for coded modulation with an optimal (symbol-wise) receiver. */
         CODED_MODULATION("cm"),
         /** Σ_k I(B_k; Y): the limit for bit-interleaved coded modulation with bit-wise decoding. */
@@ -41,19 +41,14 @@ public final class MutualInformation {
             this.cliName = cliName;
         }
 
+        @Override
         public String cliName() {
             return cliName;
         }
 
         /** @throws IllegalArgumentException naming the valid choices when the name is unknown */
         public static Kind fromCliName(String name) {
-            for (Kind k : values()) {
-                if (k.cliName.equalsIgnoreCase(name.trim())) {
-                    return k;
-                }
-            }
-            throw new IllegalArgumentException(
-                    "unknown mutual information kind '" + name + "'; valid: cm, bicm");
+            return NamedChoice.find(values(), name, "mutual information kind");
         }
 
         @Override

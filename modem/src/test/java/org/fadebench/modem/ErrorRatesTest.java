@@ -23,7 +23,7 @@ class ErrorRatesTest {
     /** BPSK at Eb/N0 = 9.6 dB gives about 1e-5 (common practice, no source; from memory). */
     @Test
     void bpskTenToTheMinusFive() {
-        double ber = ErrorRates.bpskBerAwgn(Math.pow(10, 0.96));
+        double ber = ErrorRates.bpskBitErrorRate(Math.pow(10, 0.96));
         assertEquals(1.0e-5, ber, 0.1e-5);
     }
 
@@ -57,7 +57,7 @@ class ErrorRatesTest {
                     }
                 }
                 double direct = errors / (l * m);
-                double formula = ErrorRates.qamBerAwgn(mod.order(), ebN0);
+                double formula = ErrorRates.squareQamBitErrorRate(mod.order(), ebN0);
                 assertEquals(direct, formula, 1e-12 + 1e-9 * direct, mod + " at " + ebN0Db + " dB");
             }
         }
@@ -67,7 +67,7 @@ class ErrorRatesTest {
     @Test
     void qpskEqualsBpskPerBit() {
         for (double e = 0.5; e < 20; e *= 1.7) {
-            assertEquals(ErrorRates.bpskBerAwgn(e), ErrorRates.qamBerAwgn(4, e), 1e-15);
+            assertEquals(ErrorRates.bpskBitErrorRate(e), ErrorRates.squareQamBitErrorRate(4, e), 1e-15);
         }
     }
 
@@ -78,13 +78,13 @@ class ErrorRatesTest {
     @Test
     void mrcRayleighSpecialCasesAndAsymptote() {
         for (double g = 0.1; g < 1e4; g *= 3) {
-            assertEquals(0.5 * (1 - Math.sqrt(g / (1 + g))), ErrorRates.mrcBpskBerRayleigh(1, g), 1e-15);
+            assertEquals(0.5 * (1 - Math.sqrt(g / (1 + g))), ErrorRates.rayleighMrcBpskBitErrorRate(1, g), 1e-15);
         }
         double g = 1e5;
         for (int l = 1; l <= 4; l++) {
             double asym = org.apache.commons.math3.util.CombinatoricsUtils.binomialCoefficientDouble(2 * l - 1, l)
                     / Math.pow(4 * g, l);
-            assertEquals(1.0, ErrorRates.mrcBpskBerRayleigh(l, g) / asym, 1e-3, "L=" + l);
+            assertEquals(1.0, ErrorRates.rayleighMrcBpskBitErrorRate(l, g) / asym, 1e-3, "L=" + l);
         }
     }
 
@@ -93,8 +93,8 @@ class ErrorRatesTest {
     void qamSer() {
         double es = 100;
         double p = 2 * (1 - 0.25) * ErrorRates.q(Math.sqrt(3 * es / 15));
-        assertEquals(1 - (1 - p) * (1 - p), ErrorRates.qamSerAwgn(16, es), 1e-15);
-        double pb = ErrorRates.bpskBerAwgn(3.0 / 2);
-        assertEquals(1 - (1 - pb) * (1 - pb), ErrorRates.qamSerAwgn(4, 3.0), 1e-15);
+        assertEquals(1 - (1 - p) * (1 - p), ErrorRates.squareQamSymbolErrorRate(16, es), 1e-15);
+        double pb = ErrorRates.bpskBitErrorRate(3.0 / 2);
+        assertEquals(1 - (1 - pb) * (1 - pb), ErrorRates.squareQamSymbolErrorRate(4, 3.0), 1e-15);
     }
 }

@@ -1,6 +1,5 @@
 package org.fadebench.bench.perf;
 
-import java.util.concurrent.TimeUnit;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkChain;
 import org.fadebench.bench.link.LinkSettings;
@@ -10,12 +9,7 @@ import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.Modulation;
 import org.openjdk.jmh.annotations.Benchmark;
-import org.openjdk.jmh.annotations.BenchmarkMode;
-import org.openjdk.jmh.annotations.Fork;
-import org.openjdk.jmh.annotations.Measurement;
-import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OperationsPerInvocation;
-import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
@@ -27,12 +21,8 @@ import org.openjdk.jmh.annotations.Warmup;
  * not shape the other's compilation). Score: data QAM symbols per second on one thread. Run with
  * {@code -prof gc} to see bytes allocated per frame (expected: 0 in steady state).
  */
-@BenchmarkMode(Mode.Throughput)
-@OutputTimeUnit(TimeUnit.SECONDS)
 @Warmup(iterations = 4, time = 1)
-@Measurement(iterations = 5, time = 1)
-@Fork(3)
-public class FullFrameBenchmark {
+public class FullFrameBenchmark extends ThroughputBenchmark {
 
     static final int SYMBOLS = 512;
 

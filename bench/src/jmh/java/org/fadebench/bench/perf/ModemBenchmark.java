@@ -1,21 +1,13 @@
 package org.fadebench.bench.perf;
 
-import java.util.concurrent.TimeUnit;
+import java.util.Arrays;
 import org.fadebench.channel.Draws;
 import org.fadebench.modem.Modulation;
 import org.fadebench.modem.QamConstellation;
 import org.openjdk.jmh.annotations.Benchmark;
-import org.openjdk.jmh.annotations.BenchmarkMode;
-import org.openjdk.jmh.annotations.Fork;
-import org.openjdk.jmh.annotations.Measurement;
-import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OperationsPerInvocation;
-import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Param;
-import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
-import org.openjdk.jmh.annotations.State;
-import org.openjdk.jmh.annotations.Warmup;
 
 /**
  * One idea each: QAM mapping, hard demapping, max-log LLR demapping, and counting hard-decision
@@ -24,13 +16,7 @@ import org.openjdk.jmh.annotations.Warmup;
  * point to a decision boundary, so that an estimate crosses one with probability 2Q(4) ≈ 6e-5 per
  * axis, as at the SNR of a low error rate.
  */
-@State(Scope.Thread)
-@BenchmarkMode(Mode.Throughput)
-@OutputTimeUnit(TimeUnit.SECONDS)
-@Warmup(iterations = 3, time = 1)
-@Measurement(iterations = 5, time = 1)
-@Fork(1)
-public class ModemBenchmark {
+public class ModemBenchmark extends ThroughputBenchmark {
 
     private static final int SYMBOLS = 512;
 
@@ -40,7 +26,8 @@ public class ModemBenchmark {
     private QamConstellation constellation;
     private byte[] bits;
     private byte[] decided;
-    private double[] symbols;
+    /** Where the mapping benchmarks write (their inputs stay as made in {@link #setUp}). */
+    private final double[] mapped = new double[2 * SYMBOLS];
     private double[] noisy;
     private double[] gain;
     private double[] llr;
@@ -57,7 +44,7 @@ public class ModemBenchmark {
         bits = new byte[SYMBOLS * b];
         decided = new byte[SYMBOLS * b];
         llr = new double[SYMBOLS * b];
-        symbols = new double[2 * SYMBOLS];
+        double[] symbols = new double[2 * SYMBOLS];
         noisy = new double[2 * SYMBOLS];
         gain = new double[SYMBOLS];
         Draws d = Draws.of(5);
@@ -66,7 +53,7 @@ public class ModemBenchmark {
         for (int i = 0; i < noisy.length; i++) {
             noisy[i] = symbols[i] + 0.1 * d.gaussian();
         }
-        java.util.Arrays.fill(gain, 1.0);
+        Arrays.fill(gain, 1.0);
         labels = new int[SYMBOLS];
         decidedLabels = new int[SYMBOLS];
         d.fillLabels(labels, 0, SYMBOLS, b);
@@ -79,8 +66,8 @@ public class ModemBenchmark {
     @Benchmark
     @OperationsPerInvocation(SYMBOLS)
     public double[] map() {
-        constellation.map(bits, 0, symbols, 0, SYMBOLS);
-        return symbols;
+        constellation.map(bits, 0, mapped, 0, SYMBOLS);
+        return mapped;
     }
 
     @Benchmark
@@ -100,8 +87,8 @@ public class ModemBenchmark {
     @Benchmark
     @OperationsPerInvocation(SYMBOLS)
     public double[] mapLabels() {
-        constellation.mapLabels(labels, 0, symbols, 0, SYMBOLS);
-        return symbols;
+        constellation.mapLabels(labels, 0, mapped, 0, SYMBOLS);
+        return mapped;
     }
 
     @Benchmark

@@ -1,6 +1,5 @@
 package org.fadebench.bench.perf;
 
-import java.util.concurrent.TimeUnit;
 import java.util.random.RandomGenerator;
 import java.util.random.RandomGeneratorFactory;
 import org.apache.commons.rng.UniformRandomProvider;
@@ -12,30 +11,20 @@ import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.apache.commons.rng.simple.RandomSource;
 import org.fadebench.channel.Draws;
 import org.openjdk.jmh.annotations.Benchmark;
-import org.openjdk.jmh.annotations.BenchmarkMode;
-import org.openjdk.jmh.annotations.Fork;
-import org.openjdk.jmh.annotations.Measurement;
-import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OperationsPerInvocation;
-import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Param;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
-import org.openjdk.jmh.annotations.Warmup;
 
 /**
  * One idea: the cost of standard normal draws, which bound the whole simulation. {@code draw}
- * compares samplers (score: draws per second); {@code alamouti2x2NoiseOnly} draws exactly the noise
- * of 512 Alamouti 2x2 symbols (4 draws per symbol) through the simulator's own {@link Draws}, in
- * symbols per second, the yardstick for the full frame.
+ * compares samplers by filling a buffer of 1024 draws, as the link fills a frame's noise (score:
+ * draws per second); {@code alamouti2x2NoiseOnly} draws exactly the noise of 512 Alamouti 2x2
+ * symbols (4 draws per symbol) through the simulator's own {@link Draws}, in symbols per second,
+ * the yardstick for the full frame.
  */
-@BenchmarkMode(Mode.Throughput)
-@OutputTimeUnit(TimeUnit.SECONDS)
-@Warmup(iterations = 3, time = 1)
-@Measurement(iterations = 5, time = 1)
-@Fork(1)
-public class NoiseBenchmark {
+public class NoiseBenchmark extends ThroughputBenchmark {
 
     private static final int N = 1024;
     private static final int SYMBOLS = 512;
@@ -47,13 +36,14 @@ public class NoiseBenchmark {
         final double[] out = new double[4 * SYMBOLS];
     }
 
-    /** One of the candidate samplers. */
+    /** One of the candidate samplers and the buffer it fills. */
     @State(Scope.Thread)
     public static class Candidate {
         @Param({"fadebench-ziggurat", "commons-ziggurat", "commons-ziggurat-old", "commons-marsaglia",
             "commons-boxmuller", "jdk17-xoshiro"})
         public String sampler;
 
+        final double[] out = new double[N];
         NormalizedGaussianSampler commons;
         RandomGenerator jdk;
         Draws own;
@@ -84,26 +74,28 @@ public class NoiseBenchmark {
                     throw new IllegalArgumentException(sampler);
             }
         }
+
+        /** Fills {@link #out} with standard normal draws: the simulator's kernel, or the same loop. */
+        double[] fill() {
+            if (own != null) {
+                own.fillGaussian(out, 0, N, 1.0);
+            } else if (jdk != null) {
+                for (int i = 0; i < N; i++) {
+                    out[i] = jdk.nextGaussian();
+                }
+            } else {
+                for (int i = 0; i < N; i++) {
+                    out[i] = commons.sample();
+                }
+            }
+            return out;
+        }
     }
 
     @Benchmark
     @OperationsPerInvocation(N)
-    public double draw(Candidate c) {
-        double s = 0;
-        if (c.own != null) {
-            for (int i = 0; i < N; i++) {
-                s += c.own.gaussian();
-            }
-        } else if (c.jdk != null) {
-            for (int i = 0; i < N; i++) {
-                s += c.jdk.nextGaussian();
-            }
-        } else {
-            for (int i = 0; i < N; i++) {
-                s += c.commons.sample();
-            }
-        }
-        return s;
+    public double[] draw(Candidate c) {
+        return c.fill();
     }
 
     @Benchmark

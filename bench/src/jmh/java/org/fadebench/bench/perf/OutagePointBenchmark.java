@@ -1,22 +1,13 @@
 package org.fadebench.bench.perf;
 
-import java.util.concurrent.TimeUnit;
 import org.fadebench.bench.analysis.BoundPoint;
 import org.fadebench.bench.analysis.BoundSettings;
 import org.fadebench.channel.OutageEstimate;
 import org.fadebench.modem.Modulation;
 import org.fadebench.modem.MutualInformation;
 import org.openjdk.jmh.annotations.Benchmark;
-import org.openjdk.jmh.annotations.BenchmarkMode;
-import org.openjdk.jmh.annotations.Fork;
-import org.openjdk.jmh.annotations.Measurement;
-import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OperationsPerInvocation;
-import org.openjdk.jmh.annotations.OutputTimeUnit;
-import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
-import org.openjdk.jmh.annotations.State;
-import org.openjdk.jmh.annotations.Warmup;
 
 /**
  * One idea: the cost of one 4x4 point of the Monte Carlo MIMO outage bound (i.i.d. Rayleigh,
@@ -24,13 +15,7 @@ import org.openjdk.jmh.annotations.Warmup;
  * second on one thread; a point of {@link BoundSettings#DEFAULT_MIMO_DRAWS} draws takes
  * DEFAULT_MIMO_DRAWS / score seconds.
  */
-@State(Scope.Thread)
-@BenchmarkMode(Mode.Throughput)
-@OutputTimeUnit(TimeUnit.SECONDS)
-@Warmup(iterations = 3, time = 1)
-@Measurement(iterations = 5, time = 1)
-@Fork(1)
-public class OutagePointBenchmark {
+public class OutagePointBenchmark extends ThroughputBenchmark {
 
     private static final int DRAWS = 10_000;
 

@@ -52,7 +52,7 @@ final class BoundsCommand implements Callable<Integer> {
             COHERENCE, FADING, K_FACTOR, NAKAGAMI_M, TX_CORR, RX_CORR, SNR_DB, RATE, MI, OUTAGE_DRAWS, FOLDER);
 
     /** Where {@code bounds} differs from {@code run}'s defaults. */
-    static final Map<Setting, String> DEFAULTS = Map.of(SNR_DB, "0:2:30", FOLDER, "fadebench-bounds");
+    static final Map<Setting, String> DEFAULTS = Map.of(SNR_DB, "0..30/2", FOLDER, "fadebench-bounds");
 
     @CommandLine.Spec
     CommandSpec spec;

@@ -50,7 +50,8 @@ final class DemoCommand implements Callable<Integer> {
             CommandLine cl = new CommandLine(run);
             cl.setOut(w);
             cl.setErr(spec.commandLine().getErr());
-            List<String> args = new ArrayList<>(List.of("--out", out + "/" + name));
+            // the demo replaces its own earlier output, so that it can be run again and again
+            List<String> args = new ArrayList<>(List.of("--out", out + "/" + name, "--overwrite"));
             if (threads != null) {
                 args.add("--threads");
                 args.add(threads.toString());

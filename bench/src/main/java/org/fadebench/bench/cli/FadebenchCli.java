@@ -36,7 +36,8 @@ public final class FadebenchCli implements Runnable {
                 return ExitCodes.INVALID_INPUT;
             }
             if (ex instanceof UncheckedIOException) {
-                errWriter.println(prefix(line) + "I/O failure: " + oneLine(ex.getCause().toString()));
+                errWriter.println(prefix(line) + "I/O failure: "
+                        + oneLine(RunOutputs.describe(((UncheckedIOException) ex).getCause())));
                 return ExitCodes.IO_FAILURE;
             }
             errWriter.println(prefix(line) + "internal error: " + oneLine(String.valueOf(ex))

@@ -56,6 +56,7 @@ final class RunCommand implements Callable<Integer> {
         SettingValues given = SettingOptions.given(spec.commandLine().getParseResult(), RunSettings.all(), Map.of());
         SettingValues values = scenario == null ? given : scenario.values().overlaidBy(given);
         RunPlan plan = plan(values, scenario == null ? null : scenario.source());
+        RunOutputs.checkBeforeRun(plan, preloaded == null ? scenarioFile : null, resume);
         if (!plan.link().code().isOrthogonal() && !plan.quiet()) {
             spec.commandLine().getErr().println("fadebench run: warning: code " + plan.link().code().name()
                     + " is not orthogonal; " + plan.link().decoder().cliName()

@@ -63,7 +63,8 @@ final class SweepJob {
                 : new ChannelRecorder(link.receiveAntennas(), link.transmitAntennas(), plan.traceOutBlocks());
         engine.recordChannels(recorder);
         String fingerprint = Checkpoint.fingerprint(plan.numbersFingerprintText(engine.batchFrames()));
-        List<PointState> resumed = resume ? readCheckpoint(fingerprint) : null;
+        List<PointState> resumed = resume ? readCheckpoint(fingerprint, engine) : null;
+        RunOutputs.checkWritable(plan);
 
         boolean talk = !plan.quiet();
         if (talk) {
@@ -170,10 +171,10 @@ final class SweepJob {
         }
         List<Path> written = new ArrayList<>();
         try {
-            Path csv = dir.resolve("results.csv");
+            Path csv = dir.resolve(RunOutputs.RESULTS_CSV);
             ResultsCsv.write(csv, plan.link(), plan.seed(), plan.confidence(), results, interrupted, curves);
             written.add(csv);
-            Path json = dir.resolve("results.json");
+            Path json = dir.resolve(RunOutputs.RESULTS_JSON);
             double seconds = outcome.nanos() * 1e-9;
             ResultsJson.Run run = new ResultsJson.Run(plan.settings(), plan.link(), plan.seed(), outcome.results(),
                     !interrupted, outcome.stopReason(), outcome.framesSimulated(), seconds, plan.threads(), summary);
@@ -183,8 +184,12 @@ final class SweepJob {
                 FerPlot.write(dir, plan.link(), results, plan.confidence(), curves);
                 written.add(dir.resolve(FerPlot.PNG_FILE));
                 written.add(dir.resolve(FerPlot.SVG_FILE));
+            } else {
+                // no plot without results: a plot left by an earlier run in this folder would mislead
+                Files.deleteIfExists(dir.resolve(FerPlot.PNG_FILE));
+                Files.deleteIfExists(dir.resolve(FerPlot.SVG_FILE));
             }
-            Path scenario = dir.resolve("scenario.yaml");
+            Path scenario = dir.resolve(RunOutputs.SCENARIO);
             AtomicFiles.writeString(scenario, plan.scenarioText());
             written.add(scenario);
             if (interrupted) {
@@ -241,11 +246,16 @@ final class SweepJob {
         return plan.bounds() != null;
     }
 
-    private List<PointState> readCheckpoint(String fingerprint) {
+    private List<PointState> readCheckpoint(String fingerprint, SweepEngine engine) {
         try {
             List<PointState> s = Checkpoint.read(plan.outDir(), fingerprint, plan.snrDb().length);
             if (s == null && !plan.quiet()) {
                 out.println("no checkpoint in " + plan.outDir() + "; starting from the beginning");
+            }
+            String problem = s == null ? null : engine.checkpointProblem(s);
+            if (problem != null) {
+                throw new IllegalArgumentException(plan.outDir().resolve(Checkpoint.FILE_NAME)
+                        + ": damaged or edited checkpoint (" + problem + "); delete it or run without --resume");
             }
             return s;
         } catch (IllegalArgumentException e) {

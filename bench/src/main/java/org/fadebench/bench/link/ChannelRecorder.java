@@ -19,6 +19,15 @@ public final class ChannelRecorder {
     private final double[] one;
     private final boolean[] seen;
 
+    /**
+     * Bytes the storage of a recorder of {@code capacity} Nr x Mt matrices takes (the arrays the
+     * constructor below allocates); {@link Long#MAX_VALUE} when it is too large for one array.
+     */
+    public static long bufferBytes(int nr, int mt, int capacity) {
+        long values = 2L * nr * mt * capacity;
+        return values > Integer.MAX_VALUE - 8 ? Long.MAX_VALUE : 8 * values + capacity;
+    }
+
     public ChannelRecorder(int nr, int mt, int capacity) {
         this.nr = nr;
         this.mt = mt;

@@ -93,6 +93,38 @@ public final class LinkChain {
         this(settings, true);
     }
 
+    /** Whether a chain of {@code settings} takes the planar path (uncoded Alamouti over block fading). */
+    private static boolean planarApplies(LinkSettings settings) {
+        return !settings.coding().coded() && settings.code().kernel() == SpaceTimeCode.Kernel.ALAMOUTI
+                && !settings.channel().varies();
+    }
+
+    /**
+     * Bytes one chain's buffers take: the arrays the constructor below allocates, the channel's
+     * matrices and the codec's buffers (array headers aside), so that a run can check the memory it
+     * needs, chains times threads, before it starts.
+     */
+    public static long bufferBytes(LinkSettings settings) {
+        long symbols = settings.symbolsPerFrame();
+        long nr = settings.receiveAntennas();
+        long mt = settings.transmitAntennas();
+        long fadeSlots = settings.effectiveCoherenceSlots();
+        long bytes = 8 * 5 * symbols // symbols sent, estimates (complex) and gains
+                + 8 * 2 * fadeSlots * (mt + nr) // grid and received signal of a fading block
+                + 8 * 2 * nr * mt * (settings.channel().varies() ? fadeSlots + 2 : 3); // H (per slot), Ĥ
+        if (settings.coding().coded()) {
+            int lanes = settings.framesDecodedTogether();
+            long sentBits = symbols * settings.modulation().bitsPerSymbol();
+            return bytes + (lanes + 1L) * settings.frameBits() + 9 * sentBits
+                    + FecCodec.bufferBytes(settings.coding().scheme(), settings.frameBits(), lanes);
+        }
+        bytes += 4 * symbols; // labels sent
+        if (planarApplies(settings)) {
+            bytes += 8 * (2 + 4 + 8 + 4 * nr + 4) * settings.blocksPerFrame();
+        }
+        return bytes;
+    }
+
     /** A chain that takes the planar path where it applies ({@code planar}) or always the general one. */
     LinkChain(LinkSettings settings, boolean planar) {
         this.settings = settings;
@@ -144,7 +176,7 @@ public final class LinkChain {
             this.llr = null;
             this.sent = new int[symbols];
         }
-        if (planar && codec == null && code.kernel() == SpaceTimeCode.Kernel.ALAMOUTI && !channel.varies()) {
+        if (planar && planarApplies(settings)) {
             this.alamouti = new AlamoutiKernel(nr);
             this.sentPlanes = new int[2][blocksPerFrame];
             this.symbolPlanes = new double[4][blocksPerFrame];

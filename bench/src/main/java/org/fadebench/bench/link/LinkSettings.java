@@ -1,5 +1,7 @@
 package org.fadebench.bench.link;
 
+import org.fadebench.bench.settings.InvalidSettingException;
+import org.fadebench.bench.settings.RunSettings;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
 import org.fadebench.coding.fec.FecScheme;
@@ -10,7 +12,7 @@ import org.fadebench.modem.Modulation;
 /**
  * What one link is: modulation, space-time code, antennas, fading and frame layout. Validated on
  * construction, so a {@code LinkSettings} object always describes a link that can be simulated;
- * every message names the command-line option at fault and the valid choices.
+ * every message names the setting at fault ({@link InvalidSettingException}) and the valid choices.
  *
  * @param frameBits       information bits per frame; a whole number of code blocks
  * @param coherenceSlots  slots (symbol periods) per fading block; 0 means the whole frame
@@ -53,45 +55,45 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
 
     public LinkSettings {
         if (transmitAntennas <= 0) {
-            throw new IllegalArgumentException("--tx must be a positive number of transmit antennas, got "
+            throw new InvalidSettingException(RunSettings.TX, "must be a positive number of transmit antennas, got "
                     + transmitAntennas);
         }
         if (receiveAntennas <= 0) {
-            throw new IllegalArgumentException("--rx must be a positive number of receive antennas, got "
+            throw new InvalidSettingException(RunSettings.RX, "must be a positive number of receive antennas, got "
                     + receiveAntennas);
         }
         if (receiveAntennas > 64) {
-            throw new IllegalArgumentException("--rx " + receiveAntennas + " is more than the 64 supported");
+            throw new InvalidSettingException(RunSettings.RX, receiveAntennas + " is more than the 64 supported");
         }
         if (code.transmitAntennas() != transmitAntennas) {
-            throw new IllegalArgumentException("--code " + code.name() + " needs exactly "
+            throw new InvalidSettingException(RunSettings.CODE, code.name() + " needs exactly "
                     + code.transmitAntennas() + " transmit antenna" + (code.transmitAntennas() == 1 ? "" : "s")
                     + " (--tx " + code.transmitAntennas() + "), got --tx " + transmitAntennas);
         }
         int blockBits = code.symbolsPerBlock() * modulation.bitsPerSymbol();
         if (frameBits <= 0) {
-            throw new IllegalArgumentException("--frame-bits must be a positive number of information bits, got "
+            throw new InvalidSettingException(RunSettings.FRAME_BITS, "must be a positive number of information bits, got "
                     + frameBits);
         }
         if (!coding.coded() && frameBits % blockBits != 0) {
-            throw new IllegalArgumentException("--frame-bits " + frameBits + " does not fill whole code blocks: "
+            throw new InvalidSettingException(RunSettings.FRAME_BITS, frameBits + " does not fill whole code blocks: "
                     + code.name() + " with " + modulation.cliName() + " carries " + blockBits
                     + " bits per block, so use a positive multiple of " + blockBits + " (e.g. "
                     + roundUpToBlocks(DEFAULT_FRAME_BITS, modulation, code) + ")");
         }
         if (frameBits > 1 << 24) {
-            throw new IllegalArgumentException("--frame-bits " + frameBits + " is more than the 16777216 supported");
+            throw new InvalidSettingException(RunSettings.FRAME_BITS, frameBits + " is more than the 16777216 supported");
         }
         coding.check(frameBits);
         channel.check(receiveAntennas, transmitAntennas);
         if (decoder == Decoder.ZF && !code.isOrthogonal()
                 && (long) code.slotsPerBlock() * receiveAntennas * 2 < 2L * code.symbolsPerBlock()) {
-            throw new IllegalArgumentException("--decoder zf cannot separate " + code.symbolsPerBlock()
+            throw new InvalidSettingException(RunSettings.DECODER, "zf cannot separate " + code.symbolsPerBlock()
                     + " symbols from " + code.slotsPerBlock() + " slot(s) x " + receiveAntennas
                     + " receive antenna(s); use --decoder mmse or more receive antennas");
         }
         if (coherenceSlots < 0 || coherenceSlots % code.slotsPerBlock() != 0) {
-            throw new IllegalArgumentException("--coherence " + coherenceSlots + " must be a positive multiple of "
+            throw new InvalidSettingException(RunSettings.COHERENCE, coherenceSlots + " must be a positive multiple of "
                     + code.name() + "'s " + code.slotsPerBlock() + " slot" + (code.slotsPerBlock() == 1 ? "" : "s")
                     + " per block (the channel is constant over a code block), or omitted for the whole frame");
         }

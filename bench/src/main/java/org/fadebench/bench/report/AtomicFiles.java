@@ -7,8 +7,14 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.util.concurrent.ThreadLocalRandom;
 
-/** Every output file is written to a temporary name beside it and renamed: never half-written. */
+/**
+ * Every output file is written to a temporary name beside it and renamed: never half-written.
+ * The temporary file is created like any new file, so the output gets the usual permissions
+ * (those the umask leaves), not the owner-only ones of {@link Files#createTempFile}.
+ */
 public final class AtomicFiles {
 
     /** Writes the content of an output file to a stream. */
@@ -23,9 +29,10 @@ public final class AtomicFiles {
     public static void write(Path file, Content content) throws IOException {
         Path dir = file.toAbsolutePath().getParent();
         Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, "." + file.getFileName(), ".tmp");
+        Path tmp = dir.resolve("." + file.getFileName() + "." + Long.toHexString(ThreadLocalRandom.current().nextLong())
+                + ".tmp");
         try {
-            try (OutputStream out = Files.newOutputStream(tmp)) {
+            try (OutputStream out = Files.newOutputStream(tmp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE)) {
                 content.writeTo(out);
             }
             try {

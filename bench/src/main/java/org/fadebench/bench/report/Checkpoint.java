@@ -19,14 +19,16 @@ import org.fadebench.bench.sweep.PointState;
 
 /**
  * The sweep's checkpoint, {@code DIR/checkpoint.json}: the reproducible state of every point
- * (batches merged in order, their counts, finished or not) and a fingerprint of every setting that
- * changes the numbers. A resumed run continues each point from its merged batches, so it ends with
- * the same results as a run that was never interrupted.
+ * (batches merged in order, their counts, finished or not), a fingerprint of every setting that
+ * changes the numbers, and a checksum over both. A resumed run continues each point from its merged
+ * batches, so it ends with the same results as a run that was never interrupted. The checksum
+ * catches a file edited by hand or damaged; the sweep also checks the counts against its settings
+ * ({@code SweepEngine.checkpointProblem}).
  */
 public final class Checkpoint {
 
     public static final String FILE_NAME = "checkpoint.json";
-    private static final String FORMAT = "fadebench-checkpoint-2";
+    private static final String FORMAT = "fadebench-checkpoint-3";
     private static final ObjectMapper JSON = new ObjectMapper();
 
     private Checkpoint() {
@@ -46,6 +48,7 @@ public final class Checkpoint {
         ObjectNode root = JSON.createObjectNode();
         root.put("format", FORMAT);
         root.put("fingerprint", fingerprint);
+        root.put("checksum", checksum(fingerprint, states));
         ArrayNode points = root.putArray("points");
         for (PointState s : states) {
             FrameCounters c = s.counts();
@@ -105,13 +108,30 @@ public final class Checkpoint {
                     whole(p, "bits", where), whole(p, "bit_errors", where), whole(p, "symbols", where),
                     whole(p, "symbol_errors", where), p.path("bit_errors_squared").asDouble(-1),
                     whole(p, "crc_failures", where), whole(p, "undetected_errors", where));
-            if (c.frameErrors() > c.frames() || c.bitErrors() > c.bits() || c.bitErrorsSquared() < 0
-                    || !p.path("done").isBoolean()) {
-                throw new IllegalArgumentException(where + "damaged checkpoint (inconsistent counts)");
+            if (c.bitErrorsSquared() < 0 || !p.path("done").isBoolean()) {
+                throw new IllegalArgumentException(where + "damaged checkpoint (bit_errors_squared or done)");
             }
             states.add(new PointState(merged, c, p.path("done").asBoolean()));
         }
+        if (!checksum(fingerprint, states).equals(root.path("checksum").asText())) {
+            throw new IllegalArgumentException(where + "damaged or edited checkpoint (its checksum does not match its "
+                    + "content); delete it or run without --resume");
+        }
         return states;
+    }
+
+    /** SHA-256 over the fingerprint and every field of every point, in a fixed text form. */
+    private static String checksum(String fingerprint, List<PointState> states) {
+        StringBuilder t = new StringBuilder(FORMAT).append('|').append(fingerprint);
+        for (PointState s : states) {
+            FrameCounters c = s.counts();
+            t.append('|').append(s.mergedBatches()).append(',').append(s.done()).append(',').append(c.frames())
+                    .append(',').append(c.frameErrors()).append(',').append(c.bits()).append(',').append(c.bitErrors())
+                    .append(',').append(c.symbols()).append(',').append(c.symbolErrors()).append(',')
+                    .append(Double.toString(c.bitErrorsSquared())).append(',').append(c.crcFailures()).append(',')
+                    .append(c.undetectedErrors());
+        }
+        return fingerprint(t.toString());
     }
 
     private static long whole(JsonNode p, String field, String where) {

@@ -12,7 +12,9 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.function.Supplier;
 import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.link.ChannelRecorder;
 import org.fadebench.bench.link.FrameCoding;
+import org.fadebench.bench.link.LinkChain;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.report.Archive;
 import org.fadebench.bench.settings.InvalidSettingException;
@@ -65,7 +67,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     public static RunPlan from(SettingValues values, String source) {
         SettingValues v = SettingValues.defaults(RunSettings.all()).overlaidBy(values);
         LinkSettings link = link(v);
-        double[] snrDb = parse(SNR_DB, () -> SnrGrid.parse(v.text(SNR_DB)));
+        double[] snrDb = parse(null, () -> SnrGrid.parse(v.text(SNR_DB)));
         Path traceOut = v.isSet(TRACE_OUT) ? Path.of(v.text(TRACE_OUT)) : null;
         int traceOutBlocks = v.integer(TRACE_OUT_BLOCKS);
         if (traceOut != null) {
@@ -86,6 +88,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
         if (threads <= 0 || threads > 1024) {
             throw new InvalidSettingException(THREADS, "must be between 1 and 1024, got " + threads);
         }
+        requireHeap(link, threads, traceOut == null ? 0 : traceOutBlocks);
         double confidence = v.number(CONFIDENCE);
         if (!(confidence > 0 && confidence < 1)) {
             throw new InvalidSettingException(CONFIDENCE, "must lie strictly between 0 and 1 (e.g. 0.95), got "
@@ -135,6 +138,32 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     }
 
     /**
+     * Refuses a run whose buffers (one chain per worker thread, and the recorder of
+     * {@code recordedBlocks} channels for --trace-out) would not fit in three quarters of the heap
+     * still free, before anything is allocated.
+     */
+    private static void requireHeap(LinkSettings link, int threads, int recordedBlocks) {
+        long chain = LinkChain.bufferBytes(link);
+        long recorder = recordedBlocks == 0 ? 0
+                : ChannelRecorder.bufferBytes(link.receiveAntennas(), link.transmitAntennas(), recordedBlocks);
+        long needed = recorder == Long.MAX_VALUE ? recorder : chain * threads + recorder;
+        Runtime rt = Runtime.getRuntime();
+        long free = rt.maxMemory() - (rt.totalMemory() - rt.freeMemory());
+        if (needed > free / 4 * 3) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "not enough memory: this run needs about %s (%s per worker thread x %d%s) but the Java heap has %s "
+                            + "free; use shorter --frame-bits, fewer --rx, fewer --threads%s, or a larger heap "
+                            + "(java -Xmx...)", mebibytes(needed), mebibytes(chain), threads,
+                    recorder > 0 ? ", plus " + mebibytes(recorder) + " for --trace-out" : "", mebibytes(free),
+                    recorder > 0 ? ", fewer --trace-out-blocks" : ""));
+        }
+    }
+
+    private static String mebibytes(long bytes) {
+        return bytes == Long.MAX_VALUE ? "more than 16 GiB in one array" : (bytes + (1 << 20) - 1 >> 20) + " MiB";
+    }
+
+    /**
      * The bound settings for a link, or null where they do not apply: a code that is not
      * orthogonal, a channel that changes within a block (Doppler) or replays a trace.
      */
@@ -178,9 +207,10 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     /** The run's settings as a scenario file, so that running the file repeats the run. */
     public String scenarioText() {
         List<String> comment = new ArrayList<>();
-        comment.add("fadebench scenario: the settings of this run, written by fadebench"
-                + (source != null ? " (from " + source + " and the command line)" : ""));
-        comment.add("every setting is listed; those not set are comments; file and folder names are absolute");
+        // no word of where the settings came from: the file run again in its folder writes the same bytes
+        comment.add("fadebench scenario: the settings of this run, written by fadebench; 'fadebench run FILE' repeats it");
+        comment.add("every setting is listed; those not set are comments; file and folder names are stored resolved "
+                + "(absolute)");
         return SettingsText.scenario(values, RunSettings.all(), comment);
     }
 
@@ -284,7 +314,8 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
                 c = c.withPilots(v.integer(PILOTS));
             }
             if (v.isSet(TRACE)) {
-                c = c.withTrace(readTrace(Path.of(v.text(TRACE))));
+                // read by its absolute name, so that the results name the trace alike from any folder
+                c = c.withTrace(readTrace(Path.of(v.text(TRACE)).toAbsolutePath().normalize()));
             }
             return c;
         });

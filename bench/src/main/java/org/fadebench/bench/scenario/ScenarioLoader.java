@@ -17,6 +17,9 @@ import org.yaml.snakeyaml.Yaml;
 import org.yaml.snakeyaml.constructor.SafeConstructor;
 import org.yaml.snakeyaml.error.MarkedYAMLException;
 import org.yaml.snakeyaml.error.YAMLException;
+import org.yaml.snakeyaml.events.CollectionStartEvent;
+import org.yaml.snakeyaml.events.Event;
+import org.yaml.snakeyaml.events.ScalarEvent;
 import org.yaml.snakeyaml.nodes.MappingNode;
 import org.yaml.snakeyaml.nodes.Node;
 import org.yaml.snakeyaml.nodes.NodeTuple;
@@ -41,8 +44,13 @@ public final class ScenarioLoader {
     public static Scenario load(Path file) {
         String name = file.toString();
         try {
+            if (Files.isDirectory(file)) {
+                throw new ScenarioException(name + ": is a folder; give a scenario file (YAML)");
+            }
             if (!Files.isRegularFile(file)) {
-                throw new ScenarioException(name + ": no such scenario file");
+                throw new ScenarioException(name + (Files.exists(file)
+                        ? ": not a regular file (a pipe or a device?); give a scenario file (YAML)"
+                        : ": no such scenario file"));
             }
             if (Files.size(file) > MAX_BYTES) {
                 throw new ScenarioException(name + ": larger than " + MAX_BYTES + " bytes; not a scenario file");
@@ -64,6 +72,7 @@ public final class ScenarioLoader {
         Yaml yaml = new Yaml(new SafeConstructor(options));
         Node root;
         try {
+            rejectExplicitTags(yaml, text, name);
             root = yaml.compose(new StringReader(text));
         } catch (MarkedYAMLException e) {
             int line = e.getProblemMark() != null ? e.getProblemMark().getLine() + 1 : 0;
@@ -113,6 +122,22 @@ public final class ScenarioLoader {
             }
         }
         return new Scenario(name, text, values);
+    }
+
+    /**
+     * Refuses every tag written in the file ({@code !!int 5}, {@code !name x}, {@code !<…>}): a
+     * scenario holds plain values only, typed by its keys.
+     */
+    private static void rejectExplicitTags(Yaml yaml, String text, String name) {
+        for (Event e : yaml.parse(new StringReader(text))) {
+            String tag = e instanceof ScalarEvent s ? s.getTag()
+                    : e instanceof CollectionStartEvent c ? c.getTag() : null;
+            if (tag != null) {
+                throw new ScenarioException(name + " line " + (e.getStartMark().getLine() + 1)
+                        + ": YAML tags are not allowed (" + tag.replace("tag:yaml.org,2002:", "!!")
+                        + "); write the plain value");
+            }
+        }
     }
 
     /** Only the standard YAML types are allowed: no tags that could name a class or anything else. */

@@ -74,8 +74,8 @@ public final class RunSettings {
     public static final Setting COHERENCE = new Setting("link", "coherence", "--coherence", WHOLE, "SLOTS", "0",
             "Symbol periods per fading block, a multiple of the code's slots; 0 for the whole frame.");
     // sweep
-    public static final Setting SNR_DB = new Setting("sweep", "snr_db", "--snr", SNR, "DB", "0:2:20",
-            "SNR points in dB: START:STEP:STOP, one value, or a list a,b,c.");
+    public static final Setting SNR_DB = new Setting("sweep", "snr_db", "--snr", SNR, "DB", "0..20/2",
+            "SNR points in dB: FROM..TO/STEP (TO included when on the grid), one value, or a list a,b,c.");
     public static final Setting MIN_ERRORS = new Setting("sweep", "min_errors", "--min-errors", WHOLE, "N", "100",
             "Frame errors to collect per point; 0 runs exactly --max-frames.");
     public static final Setting MAX_FRAMES = new Setting("sweep", "max_frames", "--max-frames", WHOLE, "N", "1000000",
@@ -106,6 +106,8 @@ public final class RunSettings {
             "Also bundle the outputs into FILE (.tar.xz, .txz, .tar.gz or .tgz; the name is taken as given).");
     public static final Setting QUIET = new Setting("output", "quiet", "--quiet", FLAG, null, "false",
             "Print nothing but errors; no progress bar.");
+    public static final Setting OVERWRITE = new Setting("output", "overwrite", "--overwrite", FLAG, null, "false",
+            "Replace the results of another run (or its checkpoint) in the output folder.");
     public static final Setting TRACE_OUT = new Setting("output", "trace_out", "--trace-out", PATH, "FILE", null,
             "Write the channels of the first SNR point's fading blocks to FILE (.npy or .csv, optionally .gz, .xz, "
                     + ".bz2, .zst).");
@@ -118,7 +120,7 @@ public final class RunSettings {
             INTERLEAVER_ROWS, LLR, FRAME_BITS, COHERENCE,
             SNR_DB, MIN_ERRORS, MAX_FRAMES, MAX_SECONDS, FER_FLOOR, CONFIDENCE, SEED, THREADS,
             TARGET_FER, RATE, MI, OUTAGE_DRAWS,
-            FOLDER, ARCHIVE, QUIET, TRACE_OUT, TRACE_OUT_BLOCKS);
+            FOLDER, ARCHIVE, QUIET, OVERWRITE, TRACE_OUT, TRACE_OUT_BLOCKS);
 
     private RunSettings() {
     }

@@ -27,8 +27,8 @@ public record Setting(String section, String name, String option, Kind kind, Str
         PATH("a file name"),
         WHOLE("a whole number"),
         NUMBER("a number"),
-        /** A dB value, a range START:STEP:STOP, or a list of numbers. */
-        SNR("a number, START:STEP:STOP, or a list of numbers"),
+        /** A dB value, a range FROM..TO/STEP, or a list of numbers. */
+        SNR("a number, FROM..TO/STEP, or a list of numbers"),
         FLAG("true or false"),
         /** A square complex matrix: a list of rows, each entry a number or a pair [re, im]. */
         MATRIX("a list of rows of numbers or [re, im] pairs");

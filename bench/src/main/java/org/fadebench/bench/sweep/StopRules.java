@@ -1,5 +1,8 @@
 package org.fadebench.bench.sweep;
 
+import org.fadebench.bench.settings.InvalidSettingException;
+import org.fadebench.bench.settings.RunSettings;
+
 /**
  * When to stop simulating one SNR point, and when to stop the sweep.
  *
@@ -16,17 +19,17 @@ public record StopRules(long minErrors, long maxFrames, double maxSeconds, doubl
 
     public StopRules {
         if (minErrors < 0) {
-            throw new IllegalArgumentException("--min-errors must be 0 or more, got " + minErrors);
+            throw new InvalidSettingException(RunSettings.MIN_ERRORS, "must be 0 or more, got " + minErrors);
         }
         if (maxFrames <= 0) {
-            throw new IllegalArgumentException("--max-frames must be positive, got " + maxFrames);
+            throw new InvalidSettingException(RunSettings.MAX_FRAMES, "must be positive, got " + maxFrames);
         }
         if (!(maxSeconds >= 0) || Double.isInfinite(maxSeconds)) {
-            throw new IllegalArgumentException("--max-seconds must be 0 (no limit) or a positive number of seconds, got "
+            throw new InvalidSettingException(RunSettings.MAX_SECONDS, "must be 0 (no limit) or a positive number of seconds, got "
                     + maxSeconds);
         }
         if (!(ferFloor >= 0 && ferFloor < 1)) {
-            throw new IllegalArgumentException("--fer-floor must lie in [0, 1), got " + ferFloor);
+            throw new InvalidSettingException(RunSettings.FER_FLOOR, "must lie in [0, 1), got " + ferFloor);
         }
     }
 

@@ -82,6 +82,42 @@ public final class SweepEngine {
         return batchFrames;
     }
 
+    /**
+     * What in a checkpoint's states (for this link, these stop rules and this batch size) could not
+     * have come from a sweep, or null when they add up: every point's frames are those of its
+     * merged batches, its counts agree with each other and with the frame's size, and it is marked
+     * done exactly when its stop rule holds (or, with a time limit, at least when it holds).
+     */
+    public String checkpointProblem(List<PointState> states) {
+        long maxBatches = (rules.maxFrames() + batchFrames - 1) / batchFrames;
+        for (int p = 0; p < states.size(); p++) {
+            PointState s = states.get(p);
+            FrameCounters c = s.counts();
+            String problem = null;
+            if (s.mergedBatches() > maxBatches
+                    || c.frames() != Math.min(s.mergedBatches() * batchFrames, rules.maxFrames())) {
+                problem = s.mergedBatches() + " batches of " + batchFrames + " frames cannot hold " + c.frames()
+                        + " frames";
+            } else if (c.bits() != c.frames() * link.frameBits() || c.symbols() != c.frames() * link.symbolsPerFrame()) {
+                problem = "bits or symbols do not match " + c.frames() + " frames";
+            } else if (c.frameErrors() > c.frames() || c.bitErrors() < c.frameErrors()
+                    || c.bitErrors() > c.frameErrors() * link.frameBits() || c.symbolErrors() > c.symbols()
+                    || c.crcFailures() > c.frames() || c.undetectedErrors() > c.frameErrors()) {
+                problem = "error counts that do not fit the frames";
+            } else if (c.bitErrorsSquared() != Math.rint(c.bitErrorsSquared()) || c.bitErrorsSquared() < c.bitErrors()
+                    || c.bitErrorsSquared() > (double) c.bitErrors() * link.frameBits() * (1 + 1e-12)) {
+                problem = "a sum of squared bit errors that does not fit the bit errors";
+            } else if (s.done() != rules.pointDone(c.frames(), c.frameErrors())
+                    && !(s.done() && rules.maxSeconds() > 0)) {
+                problem = s.done() ? "marked done before its stop rule holds" : "not marked done though its stop rule holds";
+            }
+            if (problem != null) {
+                return "point " + (p + 1) + ": " + problem;
+            }
+        }
+        return null;
+    }
+
     /** How often {@link Listener#progress} is called. */
     public void progressMillis(long millis) {
         this.progressMillis = millis;

@@ -56,7 +56,7 @@ class DiversityFitTest {
         for (int branches = 1; branches <= 4; branches++) {
             double[] ber = new double[HIGH_SNR_DB.length];
             for (int i = 0; i < ber.length; i++) {
-                ber[i] = ErrorRates.mrcBpskBerRayleigh(branches, Math.pow(10, HIGH_SNR_DB[i] / 10));
+                ber[i] = ErrorRates.rayleighMrcBpskBitErrorRate(branches, Math.pow(10, HIGH_SNR_DB[i] / 10));
             }
             assertEquals(branches, DiversityFit.ofCurve(HIGH_SNR_DB, ber, 4).orElseThrow().order(), 0.01,
                     branches + " branches");

@@ -24,7 +24,7 @@ class BoundsCliTest {
     @Test
     void sisoBoundsMatchTheClosedForm() throws IOException {
         Path dir = tmp.resolve("b");
-        CliTest.Outcome o = CliTest.run("bounds", "--mod", "16qam", "--rate", "2", "--snr", "0:5:20", "--out",
+        CliTest.Outcome o = CliTest.run("bounds", "--mod", "16qam", "--rate", "2", "--snr", "0..20/5", "--out",
                 dir.toString());
         assertEquals(0, o.code(), o.err());
         assertTrue(o.out().contains("p_out_mimo"), o.out());

@@ -45,7 +45,7 @@ class CliTest {
     void runWritesCsvWithHeaderAndConvention() throws IOException {
         Path dir = tmp.resolve("ok");
         Outcome o = run(withOut(dir, "run", "--code", "alamouti", "--rx", "2", "--mod", "16qam",
-                "--snr", "0:5:10", "--frame-bits", "512", "--min-errors", "20", "--max-frames", "2000",
+                "--snr", "0..10/5", "--frame-bits", "512", "--min-errors", "20", "--max-frames", "2000",
                 "--threads", "2"));
         assertEquals(0, o.code(), o.err());
         assertTrue(o.out().contains("alamouti 2x2"), o.out());
@@ -86,8 +86,9 @@ class CliTest {
         "--code none --tx 2 | --code none needs exactly 1 transmit antenna (--tx 1), got --tx 2",
         "--rx 0 | --rx must be a positive number of receive antennas, got 0",
         "--tx -1 | --tx must be a positive number of transmit antennas, got -1",
-        "--snr 0:2 | --snr '0:2' is not START:STEP:STOP",
-        "--snr 0:0:4 | STEP must be non-zero",
+        "--snr 0:2:20 | --snr '0:2:20': the START:STEP:STOP form is not read; write 0..20/2 for the same points",
+        "--snr 0..4/0 | STEP must be positive",
+        "--snr 5,5 | --snr '5,5': 5 dB appears more than once; give each SNR point once",
         "--snr x | --snr 'x' is not a number",
         "--code alamouti --mod 16qam --frame-bits 100 | --frame-bits 100 does not fill whole code blocks",
         "--code alamouti --coherence 3 | --coherence 3 must be a positive multiple of alamouti's 2 slots",

@@ -22,7 +22,7 @@ class InterruptResumeTest {
     @TempDir
     Path tmp;
 
-    private static final String[] SWEEP = {"run", "--code", "alamouti", "--mod", "16qam", "--snr", "0:3:18",
+    private static final String[] SWEEP = {"run", "--code", "alamouti", "--mod", "16qam", "--snr", "0..18/3",
         "--frame-bits", "256", "--min-errors", "60000", "--seed", "21", "--threads", "1"};
 
     private static List<String> args(Path out, String... extra) {

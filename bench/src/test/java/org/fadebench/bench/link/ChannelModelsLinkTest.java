@@ -51,7 +51,7 @@ class ChannelModelsLinkTest {
     @Test
     void nakagamiOneAndRicianZeroAreRayleigh() {
         double snrDb = 4;
-        double theory = ErrorRates.mrcBpskBerRayleigh(2, Math.pow(10, snrDb / 10));
+        double theory = ErrorRates.rayleighMrcBpskBitErrorRate(2, Math.pow(10, snrDb / 10));
         FrameCounters nak = run(simo(ChannelSpec.of(Fading.NAKAGAMI).withNakagamiM(1), 2, 1),
                 new double[] {snrDb}, 1000, 2).get(0).counts();
         assertBer(theory, nak, "nakagami m=1");
@@ -72,7 +72,7 @@ class ChannelModelsLinkTest {
         FrameCounters c = run(simo(ChannelSpec.of(Fading.RAYLEIGH).withTrace(trace), 2, 0), new double[] {snrDb},
                 300, 2).get(0).counts();
         // two antennas with h = 1: MRC gain 2, so Eb/N0 = 2 SNR
-        assertBer(ErrorRates.bpskBerAwgn(2 * Math.pow(10, snrDb / 10)), c, "trace of ones");
+        assertBer(ErrorRates.bpskBitErrorRate(2 * Math.pow(10, snrDb / 10)), c, "trace of ones");
     }
 
     /** A replayed trace gives the same counts on any number of threads (block number selects the matrix). */

@@ -50,7 +50,7 @@ class LinkTheoryTest {
         LinkSettings l = link(Modulation.BPSK, SpaceTimeCodes.NONE, 1, Fading.NONE, 1024, 0);
         for (double snrDb : new double[] {0, 4, 7}) {
             FrameCounters c = simulate(l, snrDb, 1500);
-            double theory = ErrorRates.bpskBerAwgn(Math.pow(10, l.ebN0Db(snrDb) / 10));
+            double theory = ErrorRates.bpskBitErrorRate(Math.pow(10, l.ebN0Db(snrDb) / 10));
             assertRate(theory, c.bitErrors(), c.bits(), 1, "BPSK AWGN " + snrDb + " dB");
         }
     }
@@ -65,7 +65,7 @@ class LinkTheoryTest {
             LinkSettings l = link(mod, SpaceTimeCodes.NONE, 1, Fading.NONE, 1536, 0);
             for (double snrDb : new double[] {10, 16, mod == Modulation.QAM16 ? 18 : 22}) {
                 FrameCounters c = simulate(l, snrDb, 800);
-                double theory = ErrorRates.qamSerAwgn(mod.order(), Math.pow(10, snrDb / 10));
+                double theory = ErrorRates.squareQamSymbolErrorRate(mod.order(), Math.pow(10, snrDb / 10));
                 assertRate(theory, c.symbolErrors(), c.symbols(), 1, mod + " SER " + snrDb + " dB");
             }
         }
@@ -80,7 +80,7 @@ class LinkTheoryTest {
         LinkSettings l = link(Modulation.QAM16, SpaceTimeCodes.NONE, 1, Fading.NONE, 1024, 0);
         double snrDb = 14;
         FrameCounters c = simulate(l, snrDb, 1500);
-        double theory = ErrorRates.qamBerAwgn(16, Math.pow(10, l.ebN0Db(snrDb) / 10));
+        double theory = ErrorRates.squareQamBitErrorRate(16, Math.pow(10, l.ebN0Db(snrDb) / 10));
         assertRate(theory, c.bitErrors(), c.bits(), 4, "16-QAM BER");
     }
 
@@ -95,7 +95,7 @@ class LinkTheoryTest {
             LinkSettings s = link(Modulation.BPSK, SpaceTimeCodes.NONE, l, Fading.RAYLEIGH, 512, 1);
             for (double snrDb : new double[] {0, l == 4 ? 4 : 8}) {
                 FrameCounters c = simulate(s, snrDb, 1000);
-                double theory = ErrorRates.mrcBpskBerRayleigh(l, Math.pow(10, snrDb / 10));
+                double theory = ErrorRates.rayleighMrcBpskBitErrorRate(l, Math.pow(10, snrDb / 10));
                 assertRate(theory, c.bitErrors(), c.bits(), 1, "1x" + l + " MRC at " + snrDb + " dB");
             }
         }
@@ -113,7 +113,7 @@ class LinkTheoryTest {
             LinkSettings s = link(Modulation.BPSK, SpaceTimeCodes.ALAMOUTI, nr, Fading.RAYLEIGH, 512, 2);
             for (double snrDb : new double[] {3, 9}) {
                 FrameCounters c = simulate(s, snrDb, nr == 2 ? 4000 : 1000);
-                double theory = ErrorRates.mrcBpskBerRayleigh(2 * nr, Math.pow(10, snrDb / 10) / 2);
+                double theory = ErrorRates.rayleighMrcBpskBitErrorRate(2 * nr, Math.pow(10, snrDb / 10) / 2);
                 assertRate(theory, c.bitErrors(), c.bits(), 2, "Alamouti 2x" + nr + " at " + snrDb + " dB");
             }
         }
@@ -126,7 +126,7 @@ class LinkTheoryTest {
         double snrDb = 10;
         FrameCounters c = simulate(s, snrDb, 1000);
         // per-bit SNR on each branch: (SNR/2 per antenna pair) / 2 bits per QPSK symbol
-        double theory = ErrorRates.mrcBpskBerRayleigh(2, Math.pow(10, snrDb / 10) / 4);
+        double theory = ErrorRates.rayleighMrcBpskBitErrorRate(2, Math.pow(10, snrDb / 10) / 4);
         assertRate(theory, c.bitErrors(), c.bits(), 4, "Alamouti 2x1 QPSK");
     }
 
@@ -146,7 +146,7 @@ class LinkTheoryTest {
         LinkSettings s = link(Modulation.BPSK, code, nr, Fading.RAYLEIGH,
                 code.symbolsPerBlock() * 64, code.slotsPerBlock());
         FrameCounters c = simulate(s, snrDb, 8000);
-        double theory = ErrorRates.mrcBpskBerRayleigh(mt * nr, Math.pow(10, snrDb / 10) / (mt * code.rate()));
+        double theory = ErrorRates.rayleighMrcBpskBitErrorRate(mt * nr, Math.pow(10, snrDb / 10) / (mt * code.rate()));
         assertRate(theory, c.bitErrors(), c.bits(), code.symbolsPerBlock(), s.describe());
     }
 

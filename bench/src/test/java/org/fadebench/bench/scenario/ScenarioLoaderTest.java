@@ -57,15 +57,20 @@ class ScenarioLoaderTest {
         "'sweeps:\\n  seed: 1' | t.yaml line 1: unknown section 'sweeps' (did you mean 'sweep'?); valid sections: link, sweep, analysis, output",
         "'link:\\n  rx: two' | t.yaml line 2, key link.rx: expected a whole number, got 'two'",
         "'sweep:\\n  confidence: high' | t.yaml line 2, key sweep.confidence: expected a number, got 'high'",
-        "'sweep:\\n  snr_db: [0, x]' | t.yaml line 2, key sweep.snr_db: expected a number, START:STEP:STOP, or a list of numbers, got 'x'",
+        "'sweep:\\n  snr_db: [0, x]' | t.yaml line 2, key sweep.snr_db: expected a number, FROM..TO/STEP, or a list of numbers, got 'x'",
         "'output:\\n  quiet: maybe' | t.yaml line 2, key output.quiet: expected true or false, got 'maybe'",
         "'link:\\n  tx: [1, 2]' | t.yaml line 2, key link.tx: expected a whole number, got a list",
         "'link: 3' | t.yaml line 1: section 'link' must be a mapping of keys code, code_file, decoder",
         "'- a\\n- b' | t.yaml line 1: the top level must be a mapping of sections link, sweep, analysis, output",
         "'link:\\n  rx: 1\\n  rx: 2' | t.yaml line 3: key 'link.rx' appears twice",
         "'link: {code: [unclosed' | t.yaml line 1: not valid YAML",
-        "'link:\\n  code: !!java.lang.Object x' | t.yaml line 2: not valid YAML: Global tag is not allowed",
+        "'link:\\n  code: !!java.lang.Object x' | t.yaml line 2: YAML tags are not allowed (!!java.lang.Object)",
         "'link:\\n  code: !custom x' | t.yaml line 2: YAML tags are not allowed (!custom)",
+        "'link:\\n  rx: !!int 2' | t.yaml line 2: YAML tags are not allowed (!!int); write the plain value",
+        "'link:\\n  code: !!str alamouti' | t.yaml line 2: YAML tags are not allowed (!!str)",
+        "'sweep:\\n  snr_db: !!seq [1, 2]' | t.yaml line 2: YAML tags are not allowed (!!seq)",
+        "'link: !!map\\n  rx: 2' | t.yaml line 1: YAML tags are not allowed (!!map)",
+        "'link:\\n  code: ! alamouti' | t.yaml line 2: YAML tags are not allowed (!)",
     })
     void badScenariosNameFileLineAndKey(String yaml, String expected) {
         ScenarioException e = assertThrows(ScenarioException.class,
@@ -78,6 +83,12 @@ class ScenarioLoaderTest {
     void missingFile() {
         ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioLoader.load(Path.of("nope.yaml")));
         assertEquals("nope.yaml: no such scenario file", e.getMessage());
+    }
+
+    @Test
+    void folderIsNamedAsAFolder(@org.junit.jupiter.api.io.TempDir Path dir) {
+        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioLoader.load(dir));
+        assertEquals(dir + ": is a folder; give a scenario file (YAML)", e.getMessage());
     }
 
     @Test

@@ -94,19 +94,4 @@ class SweepEngineTest {
         assertEquals(1, r.size());
         assertEquals(0, r.get(0).counts().frameErrors());
     }
-
-    @Test
-    void snrGrid() {
-        double[] g = SnrGrid.parse("0:2.5:10");
-        assertEquals(5, g.length);
-        assertEquals(7.5, g[3], 0);
-        assertEquals(3, SnrGrid.parse("10:-5:0").length);
-        assertEquals(1, SnrGrid.parse("3").length);
-        assertEquals(-1.5, SnrGrid.parse("1, -1.5")[1], 0);
-        for (String bad : new String[] {"0:2", "a:1:2", "0:0:5", "0:1:-5", "", "1,,2", "nan", "0:1e-6:100"}) {
-            IllegalArgumentException ex = org.junit.jupiter.api.Assertions.assertThrows(
-                    IllegalArgumentException.class, () -> SnrGrid.parse(bad), bad);
-            assertTrue(ex.getMessage().startsWith("--snr"), ex.getMessage());
-        }
-    }
 }

@@ -1,5 +1,7 @@
 package org.fadebench.coding.fec;
 
+import org.fadebench.modem.NamedChoice;
+
 /**
  * The channel codes selectable by name on the command line: none, or a terminated convolutional
  * code, punctured or not.
@@ -8,7 +10,7 @@ package org.fadebench.coding.fec;
  * rate 2/3 keeps [1 1; 1 0] over 2 steps, rate 3/4 keeps [1 1 0; 1 0 1] over 3 steps, as in the
  * IEEE 802.11a OFDM physical layer, 1999, Sec. 17.3.5.6 (from memory).
  */
-public enum ChannelCode {
+public enum ChannelCode implements NamedChoice {
     /** Uncoded: the information bits are sent as they are. */
     NONE("none", null),
     /** The 64-state (133, 171) code, rate 1/2. */
@@ -29,6 +31,7 @@ public enum ChannelCode {
     }
 
     /** Name on the command line, e.g. {@code conv-r34}. */
+    @Override
     public String cliName() {
         return cliName;
     }
@@ -66,12 +69,12 @@ public enum ChannelCode {
      * @throws IllegalArgumentException naming the valid choices when the name is unknown
      */
     public static ChannelCode fromCliName(String name) {
-        return CliNames.find(values(), ChannelCode::cliName, name, "channel code");
+        return NamedChoice.find(values(), name, "channel code");
     }
 
     /** The valid command-line names, comma separated. */
     public static String choices() {
-        return CliNames.list(values(), ChannelCode::cliName);
+        return NamedChoice.list(values());
     }
 
     @Override

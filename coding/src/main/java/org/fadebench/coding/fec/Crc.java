@@ -1,5 +1,7 @@
 package org.fadebench.coding.fec;
 
+import org.fadebench.modem.NamedChoice;
+
 /**
  * Cyclic redundancy checks, table-driven (one table look-up per byte), in the parameter model of
  * R. N. Williams, "A painless guide to CRC error detection algorithms", 1993: width, polynomial,
@@ -12,7 +14,7 @@ package org.fadebench.coding.fec;
  * are appended in the same order (register's top bit first when not reflected, lowest bit first
  * when reflected).
  */
-public enum Crc {
+public enum Crc implements NamedChoice {
     /** No check: zero bits, every frame passes. */
     NONE("none", 0, 0, 0, 0, false),
     /** CRC-16, poly 0x1021, init 0xFFFF, not reflected, no final xor ("CCITT-FALSE" parameters). */
@@ -51,6 +53,7 @@ public enum Crc {
     }
 
     /** Name on the command line, e.g. {@code crc24}. */
+    @Override
     public String cliName() {
         return cliName;
     }
@@ -164,12 +167,12 @@ public enum Crc {
      * @throws IllegalArgumentException naming the valid choices when the name is unknown
      */
     public static Crc fromCliName(String name) {
-        return CliNames.find(values(), Crc::cliName, name, "CRC");
+        return NamedChoice.find(values(), name, "CRC");
     }
 
     /** The valid command-line names, comma separated. */
     public static String choices() {
-        return CliNames.list(values(), Crc::cliName);
+        return NamedChoice.list(values());
     }
 
     @Override

@@ -31,6 +31,22 @@ public final class FecCodec {
     private final byte[][] hard;
     private int receivedLanes;
 
+    /**
+     * Bytes the buffers of a codec for frames of {@code payloadBits} in {@code lanes} lanes take
+     * (what the constructor below allocates, with its decoder and interleaver), for a memory check
+     * before a run.
+     */
+    public static long bufferBytes(FecScheme scheme, int payloadBits, int lanes) {
+        long info = scheme.infoBits(payloadBits);
+        long coded = scheme.codedBits(payloadBits);
+        long bytes = info + coded + 8 * coded + 4 * coded;
+        if (!scheme.code().isCoded()) {
+            return bytes + lanes * ViterbiDecoder.rowBytes(info);
+        }
+        ConvolutionalCode code = scheme.code().puncturer().code();
+        return bytes + 9L * code.codedBits((int) info) + ViterbiDecoder.bufferBytes(code, (int) info, lanes);
+    }
+
     FecCodec(FecScheme scheme, int payloadBits, BitInterleaver interleaver, int lanes) {
         if (payloadBits < 1) {
             throw new IllegalArgumentException("payload of " + payloadBits + " bits; need at least 1");

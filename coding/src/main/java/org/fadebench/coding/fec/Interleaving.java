@@ -1,7 +1,9 @@
 package org.fadebench.coding.fec;
 
+import org.fadebench.modem.NamedChoice;
+
 /** The bit interleavers selectable by name on the command line. */
-public enum Interleaving {
+public enum Interleaving implements NamedChoice {
     /** A seeded pseudo-random permutation ({@link BitInterleaver#random}). */
     RANDOM("random"),
     /** Row–column block interleaving ({@link BitInterleaver#block}). */
@@ -16,6 +18,7 @@ public enum Interleaving {
     }
 
     /** Name on the command line, e.g. {@code random}. */
+    @Override
     public String cliName() {
         return cliName;
     }
@@ -45,12 +48,12 @@ public enum Interleaving {
      * @throws IllegalArgumentException naming the valid choices when the name is unknown
      */
     public static Interleaving fromCliName(String name) {
-        return CliNames.find(values(), Interleaving::cliName, name, "interleaver");
+        return NamedChoice.find(values(), name, "interleaver");
     }
 
     /** The valid command-line names, comma separated. */
     public static String choices() {
-        return CliNames.list(values(), Interleaving::cliName);
+        return NamedChoice.list(values());
     }
 
     @Override

@@ -63,6 +63,22 @@ public final class ViterbiDecoder {
     private int decodedLanes;
 
     /**
+     * Bytes the buffers of a decoder for {@code infoBits} in {@code lanes} lanes take (the rows the
+     * constructor below allocates, each with its array header), for a memory check before a run.
+     */
+    static long bufferBytes(ConvolutionalCode code, int infoBits, int lanes) {
+        long steps = code.steps(infoBits);
+        long rows = steps * code.outputs() + (1L << code.outputs()) + 2L * code.states()
+                + steps * ((code.states() + 31) / 32);
+        return rows * rowBytes(4L * lanes) + lanes * rowBytes(infoBits) + 4L * lanes + 8L * code.states();
+    }
+
+    /** A Java array of {@code payload} bytes with its 16-byte header, rounded up to 8 bytes. */
+    static long rowBytes(long payload) {
+        return 16 + (payload + 7) / 8 * 8;
+    }
+
+    /**
      * @param code     the code to decode
      * @param infoBits information bits per frame, k ≥ 1 (the frame has k + K − 1 trellis steps)
      * @param lanes    how many frames one {@link #decode(int)} call can take, ≥ 1

@@ -2,6 +2,8 @@ package org.fadebench.coding.stbc;
 
 import java.util.Random;
 import org.ejml.data.DMatrixRMaj;
+import org.ejml.data.ZMatrixRMaj;
+import org.ejml.dense.row.CommonOps_ZDRM;
 import org.ejml.dense.row.SingularOps_DDRM;
 
 /**
@@ -28,7 +30,8 @@ final class CodeChecks {
         int t = code.slotsPerBlock();
         Random rnd = new Random(0x5EED_0001L);
         double[] s = new double[2 * k];
-        double[] x = new double[2 * t * mt];
+        ZMatrixRMaj x = new ZMatrixRMaj(t, mt);
+        ZMatrixRMaj gram = new ZMatrixRMaj(mt, mt);
         double c = Double.NaN;
         for (int trial = 0; trial < TRIALS; trial++) {
             double energy = 0;
@@ -36,10 +39,11 @@ final class CodeChecks {
                 s[i] = rnd.nextGaussian();
                 energy += s[i] * s[i];
             }
-            code.encodeGeneral(s, 0, 1, x, 0);
+            code.encodeGeneral(s, 0, 1, x.data, 0);
+            CommonOps_ZDRM.multTransA(x, x, gram);
             double trace = 0;
             for (int i = 0; i < mt; i++) {
-                trace += gramEntry(x, t, mt, i, i)[0];
+                trace += gram.getReal(i, i);
             }
             if (trial == 0) {
                 c = trace / (mt * energy);
@@ -51,29 +55,14 @@ final class CodeChecks {
             double tol = RELATIVE_TOLERANCE * target;
             for (int i = 0; i < mt; i++) {
                 for (int j = 0; j < mt; j++) {
-                    double[] p = gramEntry(x, t, mt, i, j);
-                    if (Math.abs(p[0] - (i == j ? target : 0.0)) > tol || Math.abs(p[1]) > tol) {
+                    if (Math.abs(gram.getReal(i, j) - (i == j ? target : 0.0)) > tol
+                            || Math.abs(gram.getImag(i, j)) > tol) {
                         return false;
                     }
                 }
             }
         }
         return true;
-    }
-
-    /** Entry (i, j) of X^H X: Σ_slot conj(x[slot][i])·x[slot][j], as {re, im}. */
-    private static double[] gramEntry(double[] x, int t, int mt, int i, int j) {
-        double re = 0;
-        double im = 0;
-        for (int slot = 0; slot < t; slot++) {
-            double ar = x[2 * (slot * mt + i)];
-            double ai = x[2 * (slot * mt + i) + 1];
-            double br = x[2 * (slot * mt + j)];
-            double bi = x[2 * (slot * mt + j) + 1];
-            re += ar * br + ai * bi;
-            im += ar * bi - ai * br;
-        }
-        return new double[] {re, im};
     }
 
     /**

@@ -1,13 +1,12 @@
 package org.fadebench.coding.stbc;
 
-import java.util.Arrays;
-import java.util.stream.Collectors;
+import org.fadebench.modem.NamedChoice;
 
 /**
  * The linear decoders a link can use in front of per-symbol slicing. For an orthogonal code all
  * three give the same estimates and gains; they differ only for non-orthogonal codes.
  */
-public enum Decoder {
+public enum Decoder implements NamedChoice {
     /** Matched filter: z = Fᵀy divided by diag(FᵀF) ({@link MatchedFilterCombiner}). */
     MF("mf"),
     /** Zero forcing: (FᵀF)⁻¹Fᵀy ({@link LinearEqualiser#zeroForcing}). */
@@ -22,6 +21,7 @@ public enum Decoder {
     }
 
     /** Name on the command line, e.g. {@code zf}. */
+    @Override
     public String cliName() {
         return cliName;
     }
@@ -32,16 +32,11 @@ public enum Decoder {
      * @throws IllegalArgumentException naming the valid choices when the name is unknown
      */
     public static Decoder fromCliName(String name) {
-        for (Decoder d : values()) {
-            if (d.cliName.equalsIgnoreCase(name.trim())) {
-                return d;
-            }
-        }
-        throw new IllegalArgumentException("unknown decoder '" + name + "'; valid: " + choices());
+        return NamedChoice.find(values(), name, "decoder");
     }
 
     /** The valid command-line names, comma separated. */
     public static String choices() {
-        return Arrays.stream(values()).map(Decoder::cliName).collect(Collectors.joining(", "));
+        return NamedChoice.list(values());
     }
 }

@@ -1,6 +1,9 @@
 package org.fadebench.coding.stbc;
 
 import org.ejml.data.DMatrixRMaj;
+import org.ejml.data.ZMatrixRMaj;
+import org.ejml.dense.row.CommonOps_ZDRM;
+import org.ejml.dense.row.mult.MatrixMatrixMult_ZDRM;
 
 /**
  * The real effective channel of a code over an Nr-antenna channel. Stacking a received block as a
@@ -17,8 +20,12 @@ final class EffectiveChannel {
     final int t;
     /** F for the current channel; rows 2TNr, columns 2K. */
     final DMatrixRMaj f;
-    private final double[][] a;
-    private final double[][] b;
+    /** The dispersion matrices in the column order of F: A_1, B_1, …, A_K, B_K (T x Mt each). */
+    private final ZMatrixRMaj[] dispersion;
+    /** H (Nr x Mt), Hᵀ (Mt x Nr, not conjugated) and one received image D Hᵀ (T x Nr). */
+    private final ZMatrixRMaj channel;
+    private final ZMatrixRMaj channelTransposed;
+    private final ZMatrixRMaj image;
 
     EffectiveChannel(SpaceTimeCode code, int nr) {
         SpaceTimeCode.checkReceiveAntennas(nr);
@@ -26,13 +33,15 @@ final class EffectiveChannel {
         this.mt = code.transmitAntennas();
         this.k = code.symbolsPerBlock();
         this.t = code.slotsPerBlock();
-        this.a = new double[k][];
-        this.b = new double[k][];
+        this.dispersion = new ZMatrixRMaj[2 * k];
         for (int i = 0; i < k; i++) {
-            a[i] = code.realDispersion(i);
-            b[i] = code.imagDispersion(i);
+            dispersion[2 * i] = new ZMatrixRMaj(t, mt, true, code.realDispersion(i));
+            dispersion[2 * i + 1] = new ZMatrixRMaj(t, mt, true, code.imagDispersion(i));
         }
         this.f = new DMatrixRMaj(2 * t * nr, 2 * k);
+        this.channel = new ZMatrixRMaj(nr, mt);
+        this.channelTransposed = new ZMatrixRMaj(mt, nr);
+        this.image = new ZMatrixRMaj(t, nr);
     }
 
     /** Length of one block's received vector y. */
@@ -40,31 +49,19 @@ final class EffectiveChannel {
         return 2 * t * nr;
     }
 
-    /** Recomputes F for the channel h (Nr x Mt interleaved complex, row-major). */
+    /**
+     * Recomputes F for the channel h (Nr x Mt interleaved complex, row-major). Column c of F is the
+     * received image D Hᵀ of the c-th dispersion matrix D, whose interleaved entries (slot, receive
+     * antenna, re/im) are the rows of y. The products are EJML's {@code mult_small}: its sum runs in
+     * one fixed order for every size (see the contributor guide, "Complex matrix products").
+     */
     void fill(double[] h) {
-        for (int i = 0; i < k; i++) {
-            fillColumn(h, a[i], 2 * i);
-            fillColumn(h, b[i], 2 * i + 1);
-        }
-    }
-
-    /** Column c of F: the received image (D Hᵀ) of dispersion matrix D, split into re/im rows. */
-    private void fillColumn(double[] h, double[] d, int c) {
-        for (int s = 0; s < t; s++) {
-            for (int r = 0; r < nr; r++) {
-                double re = 0;
-                double im = 0;
-                for (int tx = 0; tx < mt; tx++) {
-                    double dr = d[2 * (s * mt + tx)];
-                    double di = d[2 * (s * mt + tx) + 1];
-                    double hr = h[2 * (r * mt + tx)];
-                    double hi = h[2 * (r * mt + tx) + 1];
-                    re += dr * hr - di * hi;
-                    im += dr * hi + di * hr;
-                }
-                int row = 2 * (s * nr + r);
-                f.unsafe_set(row, c, re);
-                f.unsafe_set(row + 1, c, im);
+        System.arraycopy(h, 0, channel.data, 0, channel.data.length);
+        CommonOps_ZDRM.transpose(channel, channelTransposed);
+        for (int c = 0; c < dispersion.length; c++) {
+            MatrixMatrixMult_ZDRM.mult_small(dispersion[c], channelTransposed, image);
+            for (int row = 0; row < image.data.length; row++) {
+                f.unsafe_set(row, c, image.data[row]);
             }
         }
     }

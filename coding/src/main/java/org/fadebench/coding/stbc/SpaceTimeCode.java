@@ -187,6 +187,36 @@ public final class SpaceTimeCode {
         return sum / (2.0 * t);
     }
 
+    /**
+     * The factor 1/√E that brings a code to unit average energy per slot (E as in
+     * {@link #averageSlotEnergy}), without overflow or underflow on the way: the entries are first
+     * multiplied by 2^−e, 2^e the power of two at or below their largest magnitude. That product is
+     * exact, so wherever E itself is a normal number the factor has the very bits of
+     * {@code 1 / Math.sqrt(E)}. 0 when every entry is zero; infinite or below
+     * {@link Double#MIN_NORMAL} when the entries are too small or too large to be scaled.
+     */
+    static double unitEnergyScale(double[][] a, double[][] b, int t) {
+        double largest = 0;
+        for (int i = 0; i < a.length; i++) {
+            for (int c = 0; c < a[i].length; c++) {
+                largest = Math.max(largest, Math.max(Math.abs(a[i][c]), Math.abs(b[i][c])));
+            }
+        }
+        if (largest == 0) {
+            return 0;
+        }
+        double down = Math.scalb(1.0, -Math.getExponent(largest));
+        double sum = 0;
+        for (int i = 0; i < a.length; i++) {
+            for (int c = 0; c < a[i].length; c++) {
+                double re = a[i][c] * down;
+                double im = b[i][c] * down;
+                sum += re * re + im * im;
+            }
+        }
+        return down / Math.sqrt(sum / (2.0 * t));
+    }
+
     /** Encodes with the general dispersion-matrix formula (reference path; allocation-free). */
     void encodeGeneral(double[] symbols, int symOffset, int blocks, double[] grid, int gridRow) {
         int cells = t * mt;

@@ -1,6 +1,8 @@
 package org.fadebench.coding.stbc;
 
 import java.io.IOException;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -57,6 +59,10 @@ public final class SpaceTimeCodeFile {
     private static final String ENTRY_FORMS =
             "a number, a string such as \"0.5-0.5j\", \"j\" or \"-2j\", or a pair [re, im]";
     private static final double UNIT_ENERGY_TOLERANCE = 1e-12;
+    /** Most transmit antennas, slots and symbols per block a code file may have (each). */
+    public static final int MAX_SIZE = 64;
+    /** Largest code file read, in bytes (SnakeYAML's own limit on a document is 3 Mi characters). */
+    public static final long MAX_FILE_BYTES = 3L << 20;
 
     private SpaceTimeCodeFile() {
     }
@@ -65,6 +71,15 @@ public final class SpaceTimeCodeFile {
     public static SpaceTimeCode read(Path file) {
         String text;
         try {
+            if (!Files.isRegularFile(file)) {
+                throw new IllegalArgumentException("code file " + file + ": " + (Files.isDirectory(file) ? "is a folder"
+                        : Files.exists(file) ? "not a regular file (a pipe or a device?)" : "no such file")
+                        + "; valid: a YAML or JSON file");
+            }
+            if (Files.size(file) > MAX_FILE_BYTES) {
+                throw new IllegalArgumentException("code file " + file + ": larger than the limit of " + MAX_FILE_BYTES
+                        + " bytes; valid: a code of at most " + MAX_SIZE + " antennas, slots and symbols");
+            }
             text = Files.readString(file, StandardCharsets.UTF_8);
         } catch (IOException e) {
             throw new IllegalArgumentException("code file " + file + ": cannot be read (" + e.getClass().getSimpleName()
@@ -216,6 +231,9 @@ public final class SpaceTimeCodeFile {
             }
             List<?> symbols = (List<?>) top.get("symbols");
             int k = symbols.size();
+            if (k > MAX_SIZE) {
+                throw fail("'symbols' has " + k + " entries, more than " + MAX_SIZE, "1 to " + MAX_SIZE + " symbols per block");
+            }
             double[][] a = new double[k][];
             double[][] b = new double[k][];
             for (int i = 0; i < k; i++) {
@@ -229,28 +247,35 @@ public final class SpaceTimeCodeFile {
 
         private SpaceTimeCode normalised(String name, int mt, int k, int t, double[][] a, double[][] b) {
             double energy = SpaceTimeCode.averageSlotEnergy(a, b, t);
-            if (energy == 0) {
+            double scale = SpaceTimeCode.unitEnergyScale(a, b, t);
+            if (scale == 0) {
                 throw fail("every dispersion matrix is zero", "at least one nonzero entry");
             }
-            for (int i = 0; i < k; i++) {
-                if (allZero(a[i]) && allZero(b[i])) {
-                    throw fail("symbol " + (i + 1) + " is never sent: its real and imag matrices are all zero",
-                            "at least one nonzero entry per symbol");
-                }
+            if (!(scale >= Double.MIN_NORMAL && scale < Double.POSITIVE_INFINITY)) {
+                throw fail("the entries are too " + (scale > 1 ? "small" : "large")
+                        + " to be scaled to unit energy per slot (the factor would be " + sixDigits(scale) + ")",
+                        "entries whose largest magnitude lies between about 1e-300 and 1e300");
             }
             String note;
             if (Math.abs(energy - 1) <= UNIT_ENERGY_TOLERANCE) {
                 note = "as written: the file's average energy per slot is 1";
             } else {
-                double scale = 1 / Math.sqrt(energy);
                 for (int i = 0; i < k; i++) {
                     for (int c = 0; c < a[i].length; c++) {
                         a[i][c] *= scale;
                         b[i][c] *= scale;
                     }
                 }
-                note = "scaled by " + sixDigits(scale) + " on load: the file's average energy per slot was "
-                        + sixDigits(energy);
+                // E = 1/scale², which may lie beyond the range of a double when the entries are huge or tiny
+                String was = energy > 0 && energy < Double.POSITIVE_INFINITY ? sixDigits(energy)
+                        : BigDecimal.ONE.divide(new BigDecimal(scale).pow(2), new MathContext(6)).toString();
+                note = "scaled by " + sixDigits(scale) + " on load: the file's average energy per slot was " + was;
+            }
+            for (int i = 0; i < k; i++) {
+                if (allZero(a[i]) && allZero(b[i])) {
+                    throw fail("symbol " + (i + 1) + " is never sent: its real and imag matrices are all zero",
+                            "at least one nonzero entry per symbol");
+                }
             }
             return new SpaceTimeCode(name, mt, k, t, a, b, note, SpaceTimeCode.Kernel.GENERAL);
         }
@@ -298,8 +323,9 @@ public final class SpaceTimeCodeFile {
         }
 
         private int positive(Object value, String key) {
-            if (!(value instanceof Integer) || (Integer) value < 1) {
-                throw fail("'" + key + "' is " + describe(value) + ", not a positive whole number", "1, 2, 3, ...");
+            if (!(value instanceof Integer) || (Integer) value < 1 || (Integer) value > MAX_SIZE) {
+                throw fail("'" + key + "' is " + describe(value) + ", not a whole number from 1 to " + MAX_SIZE,
+                        "1 to " + MAX_SIZE);
             }
             return (Integer) value;
         }

@@ -143,9 +143,9 @@ class SpaceTimeCodeFileTest {
             Arguments.of("the top level lacks key 'slots'", with("slots: 1", "")),
             Arguments.of("'name' is 12 (integer)", with("name: sm2", "name: 12")),
             Arguments.of("'name' is 'a b'", with("name: sm2", "name: a b")),
-            Arguments.of("'tx' is 'two', not a positive whole number", with("tx: 2", "tx: two")),
-            Arguments.of("'tx' is 0 (integer), not a positive whole number", with("tx: 2", "tx: 0")),
-            Arguments.of("'slots' is 2.5 (double), not a positive whole number", with("slots: 1", "slots: 2.5")),
+            Arguments.of("'tx' is 'two', not a whole number from 1 to 64", with("tx: 2", "tx: two")),
+            Arguments.of("'tx' is 0 (integer), not a whole number from 1 to 64", with("tx: 2", "tx: 0")),
+            Arguments.of("'slots' is 2.5 (double), not a whole number from 1 to 64", with("slots: 1", "slots: 2.5")),
             Arguments.of("'symbols' must be a non-empty list, got a list of 0",
                     "name: x\ntx: 1\nslots: 1\nsymbols: []\n"),
             Arguments.of("symbol 1 is 1 (integer), not a mapping", "name: x\ntx: 1\nslots: 1\nsymbols: [1]\n"),
@@ -154,8 +154,15 @@ class SpaceTimeCodeFileTest {
             Arguments.of("symbol 1 real is a list of 2; valid: one row per slot (1), each with one entry per transmit antenna (2)",
                     with("  - real: [[1, 0]]", "  - real: [[1, 0], [0, 0]]")),
             Arguments.of("symbol 2 imag row 1 is a list of 3", with("    imag: [[0, j]]", "    imag: [[0, j, 0]]")),
-            Arguments.of("symbol 1 real row 1 is a list of 2; valid: one row per slot (1), each with one entry per"
-                    + " transmit antenna (1000000000)", with("tx: 2", "tx: 1000000000")),
+            Arguments.of("'tx' is 1000000000 (integer), not a whole number from 1 to 64",
+                    with("tx: 2", "tx: 1000000000")),
+            Arguments.of("'slots' is 65 (integer), not a whole number from 1 to 64", with("slots: 1", "slots: 65")),
+            Arguments.of("'symbols' has 10000 entries, more than 64; valid: 1 to 64 symbols per block",
+                    "name: x\ntx: 1\nslots: 1\nsymbols:\n" + "  - {real: [[1]], imag: [[j]]}\n".repeat(10_000)),
+            Arguments.of("the entries are too small to be scaled to unit energy per slot",
+                    "name: x\ntx: 1\nslots: 1\nsymbols:\n  - {real: [[1e-320]], imag: [[0]]}\n"),
+            Arguments.of("the entries are too large to be scaled to unit energy per slot",
+                    "name: x\ntx: 1\nslots: 1\nsymbols:\n  - {real: [[1.7e308]], imag: [[1.7e308]]}\n"),
             Arguments.of("symbol 1 real row 1 entry 1 is NaN (double), not finite",
                     with("  - real: [[1, 0]]", "  - real: [[.nan, 0]]")),
             Arguments.of("symbol 1 real row 1 entry 2 is Infinity (double), not finite",
@@ -191,7 +198,73 @@ class SpaceTimeCodeFileTest {
     void missingFileIsBadInput(@TempDir Path dir) {
         Path missing = dir.resolve("nope.yaml");
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> SpaceTimeCodeFile.read(missing));
-        assertEquals("code file " + missing + ": cannot be read (NoSuchFileException); valid: a readable UTF-8 YAML"
-                + " or JSON file", e.getMessage());
+        assertEquals("code file " + missing + ": no such file; valid: a YAML or JSON file", e.getMessage());
+    }
+
+    /** A folder or a pipe is refused before reading: reading a pipe would wait for a writer forever. */
+    @Test
+    void onlyRegularFilesAreRead(@TempDir Path dir) throws Exception {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> SpaceTimeCodeFile.read(dir));
+        assertEquals("code file " + dir + ": is a folder; valid: a YAML or JSON file", e.getMessage());
+        Path fifo = dir.resolve("code.yaml");
+        org.junit.jupiter.api.Assumptions.assumeTrue(
+                new ProcessBuilder("mkfifo", fifo.toString()).start().waitFor() == 0, "mkfifo is available");
+        e = assertThrows(IllegalArgumentException.class, () -> SpaceTimeCodeFile.read(fifo));
+        assertEquals("code file " + fifo + ": not a regular file (a pipe or a device?); valid: a YAML or JSON file",
+                e.getMessage());
+    }
+
+    @Test
+    void filesAboveTheSizeLimitAreRefusedUnread(@TempDir Path dir) throws IOException {
+        Path big = Files.write(dir.resolve("big.yaml"), new byte[(int) SpaceTimeCodeFile.MAX_FILE_BYTES + 1]);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> SpaceTimeCodeFile.read(big));
+        assertTrue(e.getMessage().startsWith("code file " + big + ": larger than the limit of 3145728 bytes"),
+                e.getMessage());
+    }
+
+    /**
+     * Huge and tiny entries are scaled like ordinary ones: the code with every entry multiplied by
+     * 1e300 (whose energy, 1e600, is beyond a double) or by 1e-300 loads as the same code to within
+     * a few rounding errors, and the note states the energy the file had.
+     */
+    @Test
+    void hugeAndTinyEntriesScaleToTheSameCode() {
+        SpaceTimeCode plain = SpaceTimeCodeFile.parse(GOOD, "plain.yaml");
+        for (String factor : new String[] {"1e300", "1e-300"}) {
+            String text = GOOD.replace("[[1, 0]]", "[[" + factor + ", 0]]").replace("[[0, 1]]", "[[0, " + factor + "]]")
+                    .replace("[[j, 0]]", "[[\"" + factor + "j\", 0]]").replace("[[0, j]]", "[[0, \"" + factor + "j\"]]");
+            SpaceTimeCode scaled = SpaceTimeCodeFile.parse(text, "scaled.yaml");
+            for (int i = 0; i < plain.symbolsPerBlock(); i++) {
+                assertArrayEquals(plain.realDispersion(i), scaled.realDispersion(i), 1e-15, factor + " A" + i);
+                assertArrayEquals(plain.imagDispersion(i), scaled.imagDispersion(i), 1e-15, factor + " B" + i);
+            }
+            assertTrue(scaled.scaleNote().endsWith(factor.equals("1e300") ? "was 2.00000E+600" : "was 2.00000E-600"),
+                    scaled.scaleNote());
+        }
+    }
+
+    /**
+     * For codes whose energy is an ordinary number the robust factor has the very bits of
+     * 1/√E computed directly, so scaling user codes changes no simulated number.
+     */
+    @Test
+    void unitEnergyScaleIsBitIdenticalForOrdinaryCodes() {
+        Random random = new Random(11);
+        for (int trial = 0; trial < 2000; trial++) {
+            int k = 1 + random.nextInt(8);
+            int t = 1 + random.nextInt(8);
+            int mt = 1 + random.nextInt(8);
+            double magnitude = Math.pow(10, random.nextInt(121) - 60);
+            double[][] a = new double[k][2 * t * mt];
+            double[][] b = new double[k][2 * t * mt];
+            for (int i = 0; i < k; i++) {
+                for (int c = 0; c < a[i].length; c++) {
+                    a[i][c] = magnitude * random.nextGaussian();
+                    b[i][c] = magnitude * random.nextGaussian();
+                }
+            }
+            double direct = 1 / Math.sqrt(SpaceTimeCode.averageSlotEnergy(a, b, t));
+            assertEquals(direct, SpaceTimeCode.unitEnergyScale(a, b, t), 0.0, "trial " + trial);
+        }
     }
 }
