@@ -286,17 +286,18 @@ public final class FerPlot {
     }
 
     static String boundLabel(Bound b, LinkSettings link, BoundSettings s) {
-        String blocks = s.fadingBlocks() > 1 ? ", " + s.fadingBlocks() + " fading blocks" : "";
-        String counted = s.exact(b) ? "" : " (Monte Carlo, band: 95 %)";
+        String blocks = s.fadingBlocks() > 1 ? s.fadingBlocks() + " fading blocks" : "";
+        String counted = s.exact(b) ? blocks.isEmpty() ? "" : " (" + blocks + ")"
+                : " (" + (blocks.isEmpty() ? "Monte Carlo" : blocks) + ", band: 95 %)";
         switch (b) {
             case MIMO:
-                return String.format(Locale.ROOT, "Outage, %d×%d MIMO, Gaussian inputs%s%s", s.transmitAntennas(),
-                        s.receiveAntennas(), blocks, counted);
+                return String.format(Locale.ROOT, "Outage, %d×%d MIMO, Gaussian inputs%s", s.transmitAntennas(),
+                        s.receiveAntennas(), counted);
             case STBC:
-                return "Outage, " + codeName(link) + ", Gaussian symbols" + blocks + counted;
+                return "Outage, " + codeName(link) + ", Gaussian symbols" + counted;
             default:
                 String label = "Outage, " + codeName(link) + ", " + s.modulation() + " ("
-                        + s.information().cliName().toUpperCase(Locale.ROOT) + ")" + blocks + counted;
+                        + s.information().cliName().toUpperCase(Locale.ROOT) + ")" + counted;
                 return s.fullRate() ? label + ": " + Reach.ofFullRate(s).words() : label;
         }
     }
