@@ -23,7 +23,7 @@ public final class ChannelGainSamples {
      * @throws IllegalArgumentException if {@code draws} is below 1 or an antenna count is outside 1..64
      */
     public static ChannelGainSamples draw(FadingModel model, int nr, int mt, int draws, long seed) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         OutageBounds.checkDraws(draws);
         Draws stream = Draws.of(seed);
         double[] h = new double[2 * nr * mt];

@@ -1,108 +1,120 @@
 package org.fadebench.channel;
 
+import java.io.Serializable;
+
 /**
- * Everything the command line says about the channel: the fading model and its parameters, spatial
- * correlation, Doppler, the receiver's CSI, or a recorded trace. Immutable: each {@code with…}
- * returns a changed copy and checks its own value; {@link #check} checks the combination for a link
- * of Nr x Mt antennas. Messages start with the option they are about.
+ * Everything the command line says about the channel: the fading model by name with the settings
+ * given for it, or a recorded trace, and the receiver's CSI. Immutable: each {@code with…} returns a
+ * changed copy and checks its own value; {@link #model} resolves the name and settings through
+ * {@link ChannelModels} into a {@link ChannelModel}, which checks the combination, and {@link #check}
+ * checks all of it for a link of Nr x Mt antennas. Messages start with the setting they are about.
  *
- * <p>Option ↔ method: {@code --fading} {@link #of}, {@code --k-factor} {@link #withKFactor},
+ * <p>Option ↔ method: {@code --fading} {@link #of(String)}, {@code --k-factor} {@link #withKFactor},
  * {@code --nakagami-m} {@link #withNakagamiM}, {@code --tx-corr} {@link #withTxCorr},
  * {@code --rx-corr} {@link #withRxCorr}, {@code --doppler} {@link #withDoppler},
  * {@code --csi-error} {@link #withCsiError}, {@code --pilots} {@link #withPilots},
  * {@code --trace} {@link #withTrace}.
  */
-public final class ChannelSpec {
+public final class ChannelSpec implements Serializable {
 
-    private final Fading fading;
-    /** NaN, null or 0 below: not given. */
-    private double kFactor = Double.NaN;
-    private double nakagamiM = Double.NaN;
-    private double txCorr = Double.NaN;
-    private double rxCorr = Double.NaN;
-    private KroneckerCorrelation correlation;
-    private double doppler = Double.NaN;
-    private double csiError = Double.NaN;
-    private int pilots;
-    private ChannelTrace trace;
+    private final ChannelModels registry;
+    /** The name the model is looked up by, or the name of {@link #given}. */
+    private final String name;
+    /** A model given as a value (library use), or null to look {@link #name} up. */
+    private final ChannelModel given;
+    private final ModelOptions options;
+    private final ChannelTrace trace;
+    /** The CSI error variance, or null for none. */
+    private final Double csiError;
+    /** Pilot slots per fading block, 0 for none. */
+    private final int pilots;
 
-    private ChannelSpec(Fading fading) {
-        this.fading = fading;
+    private ChannelSpec(ChannelModels registry, String name, ChannelModel given, ModelOptions options,
+                        ChannelTrace trace, Double csiError, int pilots) {
+        this.registry = registry;
+        this.name = name;
+        this.given = given;
+        this.options = options;
+        this.trace = trace;
+        this.csiError = csiError;
+        this.pilots = pilots;
     }
 
-    private ChannelSpec copy() {
-        ChannelSpec c = new ChannelSpec(fading);
-        c.kFactor = kFactor;
-        c.nakagamiM = nakagamiM;
-        c.txCorr = txCorr;
-        c.rxCorr = rxCorr;
-        c.correlation = correlation;
-        c.doppler = doppler;
-        c.csiError = csiError;
-        c.pilots = pilots;
-        c.trace = trace;
-        return c;
-    }
-
-    /** A channel of the given fading kind, block fading, perfect CSI. */
+    /** A channel of the given built-in fading kind, block fading, perfect CSI. */
     public static ChannelSpec of(Fading fading) {
         if (fading == null) {
-            throw new IllegalArgumentException("--fading must be one of " + Fading.choices());
+            throw new IllegalArgumentException("--fading must be one of " + ChannelModels.STANDARD.choices());
         }
-        return new ChannelSpec(fading);
+        return of(fading.cliName());
+    }
+
+    /**
+     * The model {@code name} of {@link ChannelModels#STANDARD}, block fading, perfect CSI.
+     *
+     * @throws IllegalArgumentException for an unknown name, listing the valid ones
+     */
+    public static ChannelSpec of(String name) {
+        return of(ChannelModels.STANDARD, name);
+    }
+
+    /** The model {@code name} of {@code registry}, block fading, perfect CSI. */
+    public static ChannelSpec of(ChannelModels registry, String name) {
+        if (!registry.has(name)) {
+            throw new IllegalArgumentException("unknown fading model '" + name + "'; valid: " + registry.choices());
+        }
+        return new ChannelSpec(registry, name.trim().toLowerCase(java.util.Locale.ROOT), null, ModelOptions.NONE,
+                null, null, 0);
+    }
+
+    /** A model given as a value (its settings are its own), perfect CSI. */
+    public static ChannelSpec of(ChannelModel model) {
+        return new ChannelSpec(null, model.name(), java.util.Objects.requireNonNull(model, "model"),
+                ModelOptions.NONE, null, null, 0);
+    }
+
+    /**
+     * This channel with the model setting {@code key} (e.g. {@code --k-factor}) given as
+     * {@code value}: for a model's own settings; the model checks the value when it is built. The
+     * {@code with…} methods below are this for the built-in settings, with the value checked at once.
+     */
+    public ChannelSpec withSetting(String key, Object value) {
+        return new ChannelSpec(registry, name, given, options.with(key, value), trace, csiError, pilots);
     }
 
     /** Rician line-of-sight factor K (linear), finite and ≥ 0; needs {@code --fading rician}. */
     public ChannelSpec withKFactor(double k) {
-        ChannelSpec c = copy();
-        c.kFactor = atLeast("--k-factor must be a finite linear K-factor >= 0", 0.0, k);
-        return c;
+        return withSetting(ModelOptions.K_FACTOR, RicianChannel.checkKFactor(k));
     }
 
     /** Nakagami m, finite and ≥ 0.5; needs {@code --fading nakagami}. */
     public ChannelSpec withNakagamiM(double m) {
-        ChannelSpec c = copy();
-        c.nakagamiM = atLeast("--nakagami-m must be a finite Nakagami m >= 0.5", 0.5, m);
-        return c;
+        return withSetting(ModelOptions.NAKAGAMI_M, NakagamiChannel.checkM(m));
     }
 
     /** Exponential correlation coefficient r in (−1, 1) between neighbouring transmit antennas. */
     public ChannelSpec withTxCorr(double r) {
-        ChannelSpec c = copy();
-        c.txCorr = coefficient("--tx-corr", r);
-        return c;
+        return withSetting(ModelOptions.TX_CORR, SpatialCorrelation.coefficient(ModelOptions.TX_CORR, r));
     }
 
     /** Exponential correlation coefficient r in (−1, 1) between neighbouring receive antennas. */
     public ChannelSpec withRxCorr(double r) {
-        ChannelSpec c = copy();
-        c.rxCorr = coefficient("--rx-corr", r);
-        return c;
+        return withSetting(ModelOptions.RX_CORR, SpatialCorrelation.coefficient(ModelOptions.RX_CORR, r));
     }
 
     /** Full correlation matrices (for library use; the CLI has the exponential profiles). */
     public ChannelSpec withCorrelation(KroneckerCorrelation correlation) {
-        ChannelSpec c = copy();
-        c.correlation = correlation;
-        return c;
+        return withSetting(ModelOptions.CORRELATION_MATRICES, java.util.Objects.requireNonNull(correlation));
     }
 
     /** Normalised Doppler f_D·T_s in [0, 0.5]; above 0 the channel changes every slot. */
     public ChannelSpec withDoppler(double normalisedDoppler) {
-        if (!(normalisedDoppler >= 0.0 && normalisedDoppler <= 0.5)) {
-            throw new IllegalArgumentException("--doppler must be a normalised Doppler f_D·T_s in [0, 0.5], got "
-                    + normalisedDoppler);
-        }
-        ChannelSpec c = copy();
-        c.doppler = normalisedDoppler;
-        return c;
+        return withSetting(ModelOptions.DOPPLER, DopplerChannel.checkDoppler(normalisedDoppler));
     }
 
     /** CSI error variance σ² per entry (Ĥ = H + CN(0, σ²)), finite and ≥ 0. */
     public ChannelSpec withCsiError(double variance) {
-        ChannelSpec c = copy();
-        c.csiError = atLeast("--csi-error must be a finite error variance >= 0", 0.0, variance);
-        return c;
+        return new ChannelSpec(registry, name, given, options, trace, CsiEstimator.checkErrorVariance(variance),
+                pilots);
     }
 
     /** Least-squares CSI from this many pilot slots per fading block, 1 to {@value CsiEstimator#MAX_PILOTS} (and ≥ Mt). */
@@ -111,20 +123,17 @@ public final class ChannelSpec {
             throw new IllegalArgumentException("--pilots must be 1 to " + CsiEstimator.MAX_PILOTS + " (and at least Mt), got "
                     + count);
         }
-        ChannelSpec c = copy();
-        c.pilots = count;
-        return c;
+        return new ChannelSpec(registry, name, given, options, trace, csiError, count);
     }
 
     /** Channel matrices from a recorded trace instead of a fading model (read it with {@link ChannelTrace#read}). */
     public ChannelSpec withTrace(ChannelTrace trace) {
-        ChannelSpec c = copy();
-        c.trace = trace;
-        return c;
+        return new ChannelSpec(registry, name, given, options, trace, csiError, pilots);
     }
 
-    public Fading fading() {
-        return fading;
+    /** The fading model's name (with a trace: the name given, which the trace replaces). */
+    public String modelName() {
+        return name;
     }
 
     /** The trace, or null. */
@@ -132,9 +141,33 @@ public final class ChannelSpec {
         return trace;
     }
 
+    /**
+     * The channel model: the trace, the model given as a value, or the named model built from the
+     * settings given.
+     *
+     * @throws IllegalArgumentException naming the setting and what is wrong
+     */
+    public ChannelModel model() {
+        if (trace != null) {
+            if (!options.keys().isEmpty()) {
+                throw new IllegalArgumentException("--trace takes the channel from the file and cannot be combined with "
+                        + options.keys().iterator().next());
+            }
+            return new TraceChannel(trace);
+        }
+        if (given != null) {
+            if (!options.keys().isEmpty()) {
+                throw new IllegalArgumentException(options.keys().iterator().next() + " cannot be combined with a "
+                        + "model given as a value");
+            }
+            return given;
+        }
+        return registry.create(name, options);
+    }
+
     /** Whether the channel changes from slot to slot (Doppler above 0). */
     public boolean varies() {
-        return doppler > 0.0;
+        return model().varies();
     }
 
     /** Pilot slots per fading block (0 without {@code --pilots}). */
@@ -161,61 +194,22 @@ public final class ChannelSpec {
      * @throws IllegalArgumentException naming the option and what is wrong
      */
     public void check(int nr, int mt) {
-        OutageBounds.checkAntennas(mt, nr);
-        if (trace != null) {
-            String other = given(kFactor) ? "--k-factor" : given(nakagamiM) ? "--nakagami-m"
-                    : given(txCorr) ? "--tx-corr" : given(rxCorr) ? "--rx-corr"
-                    : correlation != null ? "correlation matrices" : given(doppler) ? "--doppler" : null;
-            if (other != null) {
-                throw new IllegalArgumentException("--trace takes the channel from the file and cannot be combined with "
-                        + other);
-            }
-            try {
-                trace.requireShape(nr, mt);
-                trace.requireLinkRange();
-            } catch (IllegalArgumentException e) {
-                throw new IllegalArgumentException("--trace " + e.getMessage(), e);
-            }
-        } else {
-            if (fading == Fading.RICIAN && !given(kFactor)) {
-                throw new IllegalArgumentException("--fading rician needs --k-factor (a linear K-factor >= 0)");
-            }
-            if (fading == Fading.NAKAGAMI && !given(nakagamiM)) {
-                throw new IllegalArgumentException("--fading nakagami needs --nakagami-m (m >= 0.5)");
-            }
-        }
-        if (given(kFactor) && fading != Fading.RICIAN) {
-            throw new IllegalArgumentException("--k-factor applies only to --fading rician");
-        }
-        if (given(nakagamiM) && fading != Fading.NAKAGAMI) {
-            throw new IllegalArgumentException("--nakagami-m applies only to --fading nakagami");
-        }
-        boolean scattered = fading == Fading.RAYLEIGH || fading == Fading.RICIAN;
-        for (String option : new String[] {"--tx-corr", "--rx-corr", "--doppler"}) {
-            double value = option.equals("--tx-corr") ? txCorr : option.equals("--rx-corr") ? rxCorr : doppler;
-            if (given(value) && !scattered) {
-                throw new IllegalArgumentException(option + " applies only to --fading rayleigh or rician");
-            }
-        }
-        if (correlation != null) {
-            if (given(txCorr) || given(rxCorr)) {
-                throw new IllegalArgumentException("--tx-corr and --rx-corr cannot be combined with correlation matrices");
-            }
-            if (!scattered) {
-                throw new IllegalArgumentException("correlation matrices apply only to --fading rayleigh or rician");
-            }
-            if (correlation.nr() != nr || correlation.mt() != mt) {
-                throw new IllegalArgumentException("correlation matrices are for Nr x Mt = " + correlation.nr()
-                        + " x " + correlation.mt() + " but the link has " + nr + " x " + mt);
-            }
-        }
-        if (given(csiError) && pilots > 0) {
+        model(nr, mt);
+    }
+
+    /** The {@linkplain #model() model}, checked with the CSI for a link of {@code nr} x {@code mt} antennas. */
+    public ChannelModel model(int nr, int mt) {
+        Antennas.check(nr, mt);
+        ChannelModel model = model();
+        model.check(nr, mt);
+        if (csiError != null && pilots > 0) {
             throw new IllegalArgumentException("--csi-error and --pilots cannot be combined");
         }
         if (pilots > 0 && pilots < mt) {
             throw new IllegalArgumentException("--pilots must be at least the number of transmit antennas Mt = " + mt
                     + " (orthogonal pilots), got " + pilots);
         }
+        return model;
     }
 
     /**
@@ -224,23 +218,7 @@ public final class ChannelSpec {
      * without Doppler); a trace is handed out in order (see {@link TraceFading}). One per thread.
      */
     public FadingModel newModel(int nr, int mt) {
-        check(nr, mt);
-        if (trace != null) {
-            return new TraceFading(trace);
-        }
-        KroneckerCorrelation c = correlation(nr, mt);
-        switch (fading) {
-            case RAYLEIGH:
-                return c == null ? new RayleighFading() : new RayleighFading(c);
-            case RICIAN:
-                return c == null ? new RicianFading(kFactor) : new RicianFading(kFactor, c);
-            case NAKAGAMI:
-                return new NakagamiFading(nakagamiM);
-            case NONE:
-                return new NoFading();
-            default:
-                throw new AssertionError(fading);
-        }
+        return model(nr, mt).newModel(nr, mt);
     }
 
     /**
@@ -248,21 +226,13 @@ public final class ChannelSpec {
      * slots, each with its CSI.
      */
     public LinkChannel newLinkChannel(int nr, int mt, int maxSlotsPerBlock) {
-        check(nr, mt);
+        ChannelModel model = model(nr, mt);
         if (maxSlotsPerBlock < 1) {
             throw new IllegalArgumentException("slots per fading block must be >= 1, got " + maxSlotsPerBlock);
         }
         CsiEstimator csi = pilots > 0 ? CsiEstimator.leastSquares(nr, mt, pilots)
-                : given(csiError) ? CsiEstimator.withError(nr, mt, csiError) : CsiEstimator.perfect(nr, mt);
-        if (varies()) {
-            double k = fading == Fading.RICIAN ? kFactor : 0.0;
-            DopplerFading process = new DopplerFading(nr, mt, doppler, k, correlation(nr, mt));
-            return new LinkChannel(nr, mt, maxSlotsPerBlock, null, null, process, csi);
-        }
-        if (trace != null) {
-            return new LinkChannel(nr, mt, maxSlotsPerBlock, null, trace, null, csi);
-        }
-        return new LinkChannel(nr, mt, maxSlotsPerBlock, newModel(nr, mt), null, null, csi);
+                : csiError != null ? CsiEstimator.withError(nr, mt, csiError) : CsiEstimator.perfect(nr, mt);
+        return new LinkChannel(nr, mt, maxSlotsPerBlock, model.newBlockChannel(nr, mt), csi);
     }
 
     /** Nakagami m, or NaN when not given. */
@@ -285,77 +255,17 @@ public final class ChannelSpec {
      * for which the outage bounds have closed forms.
      */
     public boolean iidRayleigh() {
-        return trace == null && fading == Fading.RAYLEIGH && !given(txCorr) && !given(rxCorr) && correlation == null
-                && !given(doppler);
+        return model().iidRayleigh();
     }
 
     /** A short label, e.g. {@code rician K=3, rx-corr 0.5, doppler 0.01, pilots 4}. */
     public String describe() {
-        StringBuilder sb = new StringBuilder();
-        if (trace != null) {
-            sb.append("trace ").append(trace.source()).append(" (").append(trace.size()).append(" matrices)");
-        } else {
-            sb.append(fading.cliName());
-            if (given(kFactor)) {
-                sb.append(" K=").append(kFactor);
-            }
-            if (given(nakagamiM)) {
-                sb.append(" m=").append(nakagamiM);
-            }
-        }
-        if (given(txCorr)) {
-            sb.append(", tx-corr ").append(txCorr);
-        }
-        if (given(rxCorr)) {
-            sb.append(", rx-corr ").append(rxCorr);
-        }
-        if (correlation != null) {
-            sb.append(", correlation matrices");
-        }
-        if (given(doppler)) {
-            sb.append(", doppler ").append(doppler);
-        }
-        if (given(csiError)) {
-            sb.append(", csi-error ").append(csiError);
-        }
-        if (pilots > 0) {
-            sb.append(", pilots ").append(pilots);
-        }
-        return sb.toString();
+        return model().describe() + (csiError != null ? ", csi-error " + csiError : "")
+                + (pilots > 0 ? ", pilots " + pilots : "");
     }
 
     @Override
     public String toString() {
         return describe();
-    }
-
-    /** The correlation for the link, or null when there is none. */
-    private KroneckerCorrelation correlation(int nr, int mt) {
-        if (correlation != null) {
-            return correlation.copy();
-        }
-        double rx = given(rxCorr) ? rxCorr : 0.0;
-        double tx = given(txCorr) ? txCorr : 0.0;
-        return rx == 0.0 && tx == 0.0 ? null : KroneckerCorrelation.exponential(nr, mt, rx, tx);
-    }
-
-    /** {@code value} if finite and at least {@code min}, else an error "{@code rule}, got value". */
-    private static double atLeast(String rule, double min, double value) {
-        if (!(value >= min && value < Double.POSITIVE_INFINITY)) {
-            throw new IllegalArgumentException(rule + ", got " + value);
-        }
-        return value;
-    }
-
-    private static double coefficient(String option, double r) {
-        if (!(r > -1.0 && r < 1.0)) {
-            throw new IllegalArgumentException(option + " must be an exponential correlation coefficient in (-1, 1), got "
-                    + r);
-        }
-        return r;
-    }
-
-    private static boolean given(double value) {
-        return !Double.isNaN(value);
     }
 }

@@ -1,5 +1,6 @@
 package org.fadebench.channel;
 
+import java.io.Serializable;
 import java.nio.file.Path;
 
 /**
@@ -13,7 +14,7 @@ import java.nio.file.Path;
  * <p>Determinism: the matrix for a fading block is chosen by the caller's block index alone,
  * {@code index mod N} ({@link #matrix}), never by the order in which threads ask.
  */
-public final class ChannelTrace {
+public final class ChannelTrace implements Serializable {
 
     /**
      * Largest magnitude of a real or imaginary part of an entry that a link accepts. A trace's power
@@ -45,7 +46,7 @@ public final class ChannelTrace {
      * @throws IllegalArgumentException on a bad shape, an empty or ragged array, or a non-finite entry
      */
     public static ChannelTrace of(String source, int nr, int mt, double[] matrices) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         int per = 2 * nr * mt;
         if (matrices.length == 0 || matrices.length % per != 0) {
             throw new IllegalArgumentException(source + ": need a positive multiple of 2·Nr·Mt = " + per

@@ -48,7 +48,7 @@ public final class CsiEstimator {
     private final ZMatrixRMaj correlated;
 
     private CsiEstimator(int nr, int mt, double errorVariance, int pilots) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         this.nr = nr;
         this.mt = mt;
         this.errorVariance = errorVariance;
@@ -65,10 +65,15 @@ public final class CsiEstimator {
 
     /** Ĥ = H + E, E with independent CN(0, {@code variance}) entries, variance finite and ≥ 0. */
     public static CsiEstimator withError(int nr, int mt, double variance) {
+        return new CsiEstimator(nr, mt, checkErrorVariance(variance), 0);
+    }
+
+    /** {@code variance} if it is a finite error variance ≥ 0, else an error naming {@code --csi-error}. */
+    public static double checkErrorVariance(double variance) {
         if (!(variance >= 0.0 && variance < Double.POSITIVE_INFINITY)) {
-            throw new IllegalArgumentException("CSI error variance must be finite and >= 0, got " + variance);
+            throw new IllegalArgumentException("--csi-error must be a finite error variance >= 0, got " + variance);
         }
-        return new CsiEstimator(nr, mt, variance, 0);
+        return variance;
     }
 
     /** Least squares from {@code pilots} orthogonal pilot slots, Mt ≤ pilots ≤ {@value #MAX_PILOTS}. */

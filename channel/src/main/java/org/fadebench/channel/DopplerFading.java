@@ -53,14 +53,9 @@ public final class DopplerFading {
      */
     public DopplerFading(int nr, int mt, double normalisedDoppler, double kFactor,
                          KroneckerCorrelation correlation) {
-        OutageBounds.checkAntennas(mt, nr);
-        if (!(normalisedDoppler >= 0.0 && normalisedDoppler <= 0.5)) {
-            throw new IllegalArgumentException("normalised Doppler f_D·T_s must be in [0, 0.5], got "
-                    + normalisedDoppler);
-        }
-        if (!(kFactor >= 0.0 && kFactor < Double.POSITIVE_INFINITY)) {
-            throw new IllegalArgumentException("K-factor must be finite and >= 0, got " + kFactor);
-        }
+        Antennas.check(nr, mt);
+        DopplerChannel.checkDoppler(normalisedDoppler);
+        RicianChannel.checkKFactor(kFactor);
         if (correlation != null) {
             correlation.checkShape(nr, mt);
         }

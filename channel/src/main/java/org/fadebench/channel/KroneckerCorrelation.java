@@ -1,5 +1,6 @@
 package org.fadebench.channel;
 
+import java.io.Serializable;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_ZDRM;
@@ -29,7 +30,7 @@ import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
  *
  * <p>An instance holds work matrices: use one per thread.
  */
-public final class KroneckerCorrelation {
+public final class KroneckerCorrelation implements Serializable {
 
     /** Tolerance for the Hermitian, unit-diagonal and eigenvalue checks (entries are at most 1). */
     private static final double TOLERANCE = 1e-9;
@@ -57,7 +58,7 @@ public final class KroneckerCorrelation {
 
     /** No correlation: H = H_w. */
     public static KroneckerCorrelation identity(int nr, int mt) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         return new KroneckerCorrelation(nr, mt, null, null);
     }
 
@@ -66,7 +67,7 @@ public final class KroneckerCorrelation {
      * in (−1, 1); a coefficient of 0 means no correlation on that side.
      */
     public static KroneckerCorrelation exponential(int nr, int mt, double rxCoefficient, double txCoefficient) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         double[] rx = rxCoefficient == 0.0 ? null : exponentialMatrix(nr, rxCoefficient, 0.0);
         double[] tx = txCoefficient == 0.0 ? null : exponentialMatrix(mt, txCoefficient, 0.0);
         return of(nr, mt, rx, tx);
@@ -81,7 +82,7 @@ public final class KroneckerCorrelation {
      *     positive semidefinite
      */
     public static KroneckerCorrelation of(int nr, int mt, double[] rx, double[] tx) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         return new KroneckerCorrelation(nr, mt,
                 rx == null ? null : squareRoot("rx correlation matrix", rx, nr),
                 tx == null ? null : CommonOps_ZDRM.transpose(squareRoot("tx correlation matrix", tx, mt), null));

@@ -23,24 +23,21 @@ public final class LinkChannel {
     private final int nr;
     private final int mt;
     private final int maxSlots;
-    private final FadingModel model;
-    private final ChannelTrace trace;
-    private final DopplerFading doppler;
+    private final BlockChannel fading;
+    private final boolean varies;
     private final CsiEstimator csi;
     /** One matrix, or with Doppler one per slot (slot s at 2·s·Nr·Mt). */
     private final double[] h;
     private int slots;
 
-    LinkChannel(int nr, int mt, int maxSlots, FadingModel model, ChannelTrace trace, DopplerFading doppler,
-                CsiEstimator csi) {
+    LinkChannel(int nr, int mt, int maxSlots, BlockChannel fading, CsiEstimator csi) {
         this.nr = nr;
         this.mt = mt;
         this.maxSlots = maxSlots;
-        this.model = model;
-        this.trace = trace;
-        this.doppler = doppler;
+        this.fading = fading;
+        this.varies = fading.varies();
         this.csi = csi;
-        this.h = new double[2 * nr * mt * (doppler != null ? maxSlots : 1)];
+        this.h = new double[2 * nr * mt * (varies ? maxSlots : 1)];
     }
 
     /**
@@ -52,13 +49,7 @@ public final class LinkChannel {
             throw new IllegalArgumentException("slots must be 1 to " + maxSlots + ", got " + slots);
         }
         this.slots = slots;
-        if (trace != null) {
-            trace.matrix(blockIndex, h);
-        } else if (doppler != null) {
-            doppler.drawBlock(draws, slots, h);
-        } else {
-            model.draw(draws, nr, mt, h);
-        }
+        fading.startBlock(draws, blockIndex, slots, h);
     }
 
     /**
@@ -66,7 +57,7 @@ public final class LinkChannel {
      * the channel with noise of variance {@code n0}, into rows {@code yRow ..} of {@code y} (slots x Nr).
      */
     public void transmit(double[] x, int xRow, double n0, Draws draws, double[] y, int yRow) {
-        if (doppler != null) {
+        if (varies) {
             MimoChannel.applyPerSlot(h, nr, mt, x, xRow, slots, n0, draws, y, yRow);
         } else {
             MimoChannel.apply(h, nr, mt, x, xRow, slots, n0, draws, y, yRow);
@@ -81,7 +72,7 @@ public final class LinkChannel {
      */
     public void transmit(double[][] x, int from, double n0, Draws draws, double[][] y) {
         int slotsPerRow = x.length / 4;
-        if (doppler != null || mt != 2 || slots % slotsPerRow != 0) {
+        if (varies || mt != 2 || slots % slotsPerRow != 0) {
             throw new IllegalStateException("planar transmit needs two transmit antennas, block fading and whole rows");
         }
         MimoChannel.applyTwoTransmittersPlanar(h, nr, x, from, slots / slotsPerRow, n0, draws, y);
@@ -98,12 +89,12 @@ public final class LinkChannel {
             throw new IllegalArgumentException("slot must be 0 to " + (slots - 1) + ", got " + slot);
         }
         int per = 2 * nr * mt;
-        System.arraycopy(h, doppler != null ? slot * per : 0, out, 0, per);
+        System.arraycopy(h, varies ? slot * per : 0, out, 0, per);
     }
 
     /** Whether the channel changes from slot to slot within a block. */
     public boolean varies() {
-        return doppler != null;
+        return varies;
     }
 
     /** The estimator's error variance per entry at noise level {@code n0} (0 for perfect CSI). */

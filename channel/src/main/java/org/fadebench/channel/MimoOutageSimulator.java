@@ -37,7 +37,7 @@ public final class MimoOutageSimulator {
      * @throws IllegalArgumentException if an antenna count is outside 1..64
      */
     public MimoOutageSimulator(FadingModel fading, int mt, int nr) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         this.fading = fading;
         this.mt = mt;
         this.nr = nr;

@@ -23,10 +23,7 @@ public final class NakagamiFading implements FadingModel {
     private final boolean boost;
 
     public NakagamiFading(double m) {
-        if (!(m >= 0.5 && m < Double.POSITIVE_INFINITY)) {
-            throw new IllegalArgumentException("Nakagami m must be finite and >= 0.5, got " + m);
-        }
-        this.m = m;
+        this.m = NakagamiChannel.checkM(m);
         this.boost = m < 1.0;
         this.d = (boost ? m + 1.0 : m) - 1.0 / 3.0;
         this.c = 1.0 / Math.sqrt(9.0 * d);

@@ -22,8 +22,8 @@ import org.apache.commons.math3.special.Gamma;
  */
 public final class OutageBounds {
 
-    /** Largest antenna count accepted on either side. */
-    public static final int MAX_ANTENNAS = 64;
+    /** Largest antenna count accepted on either side (see {@link Antennas}). */
+    public static final int MAX_ANTENNAS = Antennas.MAX;
 
     /** Searches over SNR stop at ±500 dB (the messages quote this number). */
     private static final double SEARCH_LIMIT_DB = 500.0;
@@ -183,7 +183,7 @@ public final class OutageBounds {
 
     private static void checkLink(double snrDb, int mt, int nr, double codeRate, double spectralEfficiency) {
         checkSnrDb(snrDb);
-        checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         if (!(codeRate > 0.0 && codeRate <= 1.0)) {
             throw new IllegalArgumentException("code rate K/T must be in (0, 1], got " + codeRate);
         }
@@ -193,13 +193,6 @@ public final class OutageBounds {
     static void checkSnrDb(double snrDb) {
         if (!Double.isFinite(snrDb)) {
             throw new IllegalArgumentException("snrDb must be a finite number of dB, got " + snrDb);
-        }
-    }
-
-    static void checkAntennas(int mt, int nr) {
-        if (mt < 1 || mt > MAX_ANTENNAS || nr < 1 || nr > MAX_ANTENNAS) {
-            throw new IllegalArgumentException("antenna counts must be in 1.." + MAX_ANTENNAS
-                    + ", got Mt = " + mt + ", Nr = " + nr);
         }
     }
 

@@ -31,10 +31,7 @@ public final class RicianFading implements FadingModel {
     }
 
     private RicianFading(double kFactor, RayleighFading scattered) {
-        if (!(kFactor >= 0.0 && kFactor < Double.POSITIVE_INFINITY)) {
-            throw new IllegalArgumentException("K-factor must be finite and >= 0, got " + kFactor);
-        }
-        this.kFactor = kFactor;
+        this.kFactor = RicianChannel.checkKFactor(kFactor);
         this.los = Math.sqrt(kFactor / (kFactor + 1.0));
         this.scatter = Math.sqrt(1.0 / (kFactor + 1.0));
         this.scattered = scattered;

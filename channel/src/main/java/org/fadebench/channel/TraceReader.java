@@ -490,9 +490,9 @@ final class TraceReader {
     // ---------------------------------------------------------------- shared
 
     private static int[] checkShape(long nr, long mt, String name) {
-        if (nr < 1 || nr > OutageBounds.MAX_ANTENNAS || mt < 1 || mt > OutageBounds.MAX_ANTENNAS) {
+        if (nr < 1 || nr > Antennas.MAX || mt < 1 || mt > Antennas.MAX) {
             throw bad(name, "matrices of " + nr + " x " + mt + " (Nr x Mt): both must be 1 to "
-                    + OutageBounds.MAX_ANTENNAS);
+                    + Antennas.MAX);
         }
         return new int[] {(int) nr, (int) mt};
     }

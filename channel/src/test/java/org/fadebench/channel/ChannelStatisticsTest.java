@@ -36,7 +36,7 @@ class ChannelStatisticsTest {
     @Test
     void rayleighPowerIsUnitExponential() {
         Draws d = Draws.of(99);
-        FadingModel m = Fading.RAYLEIGH.model();
+        FadingModel m = new RayleighFading();
         int nr = 2;
         int mt = 3;
         double[] h = new double[2 * nr * mt];
@@ -59,7 +59,7 @@ class ChannelStatisticsTest {
     void noFadingIsAllOnes() {
         double[] h = new double[8];
         Arrays.fill(h, 7);
-        Fading.NONE.model().draw(Draws.of(1), 2, 2, h);
+        new NoFading().draw(Draws.of(1), 2, 2, h);
         assertArrayEquals(new double[] {1, 0, 1, 0, 1, 0, 1, 0}, h, 0);
     }
 

@@ -101,7 +101,7 @@ class CsiEstimatorTest {
     void parametersAreChecked() {
         assertEquals("pilots must be at least Mt = 3 and at most 65536, got 2",
                 assertThrows(IllegalArgumentException.class, () -> CsiEstimator.leastSquares(1, 3, 2)).getMessage());
-        assertEquals("CSI error variance must be finite and >= 0, got -0.1",
+        assertEquals("--csi-error must be a finite error variance >= 0, got -0.1",
                 assertThrows(IllegalArgumentException.class, () -> CsiEstimator.withError(1, 1, -0.1)).getMessage());
     }
 }

@@ -121,7 +121,7 @@ class DopplerFadingTest {
 
     @Test
     void parametersAreChecked() {
-        assertEquals("normalised Doppler f_D·T_s must be in [0, 0.5], got 0.6",
+        assertEquals("--doppler must be a normalised Doppler f_D·T_s in [0, 0.5], got 0.6",
                 assertThrows(IllegalArgumentException.class, () -> new DopplerFading(1, 1, 0.6, 0, null)).getMessage());
         assertEquals("correlation is for Nr x Mt = 2 x 2, not 1 x 2",
                 assertThrows(IllegalArgumentException.class, () -> new DopplerFading(1, 2, 0.1, 0,

@@ -80,11 +80,11 @@ class FadingModelsTest {
 
     @Test
     void parametersAreChecked() {
-        assertEquals("Nakagami m must be finite and >= 0.5, got 0.4",
+        assertEquals("--nakagami-m must be a finite Nakagami m >= 0.5, got 0.4",
                 assertThrows(IllegalArgumentException.class, () -> new NakagamiFading(0.4)).getMessage());
-        assertEquals("K-factor must be finite and >= 0, got -1.0",
+        assertEquals("--k-factor must be a finite linear K-factor >= 0, got -1.0",
                 assertThrows(IllegalArgumentException.class, () -> new RicianFading(-1)).getMessage());
-        assertEquals("K-factor must be finite and >= 0, got NaN",
+        assertEquals("--k-factor must be a finite linear K-factor >= 0, got NaN",
                 assertThrows(IllegalArgumentException.class, () -> new RicianFading(Double.NaN)).getMessage());
     }
 

@@ -11,7 +11,6 @@ import java.util.Locale;
 import java.util.concurrent.CancellationException;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.RunSummary;
-import org.fadebench.bench.link.ChannelRecorder;
 import org.fadebench.channel.ChannelTrace;
 import org.fadebench.bench.report.Archive;
 import org.fadebench.bench.report.FerPlot;
@@ -59,9 +58,7 @@ final class SweepJob {
         var link = plan.link();
         SweepEngine engine = new SweepEngine(link, plan.rules(), plan.seed(), plan.threads(), plan.confidence());
         engine.progressMillis(250);
-        ChannelRecorder recorder = plan.traceOut() == null ? null
-                : new ChannelRecorder(link.receiveAntennas(), link.transmitAntennas(), plan.traceOutBlocks());
-        engine.recordChannels(recorder);
+        engine.recordChannels(plan.traceOut() == null ? 0 : plan.traceOutBlocks());
         String fingerprint = Checkpoint.fingerprint(plan.numbersFingerprintText(engine.batchFrames()));
         List<PointState> resumed = resume ? readCheckpoint(fingerprint, engine) : null;
         RunOutputs.checkWritable(plan);
@@ -98,7 +95,7 @@ final class SweepJob {
                     progress.close();
                 }
             }
-            return finish(outcome, fingerprint, recorder, signals);
+            return finish(outcome, fingerprint, signals);
         }
     }
 
@@ -106,8 +103,6 @@ final class SweepJob {
     private SweepEngine.Listener listener(ResultsTable table, ProgressDisplay progress, String fingerprint, long start) {
         boolean talk = !plan.quiet();
         return new SweepEngine.Listener() {
-            private long lastCheckpoint;
-
             @Override
             public void pointDone(PointResult result) {
                 if (talk) {
@@ -121,16 +116,16 @@ final class SweepJob {
                 if (progress != null) {
                     progress.update(p, System.nanoTime() - start);
                 }
-                long merged = p.states().stream().mapToLong(PointState::mergedBatches).sum();
-                if (merged != lastCheckpoint) {
-                    lastCheckpoint = merged;
-                    writeCheckpoint(fingerprint, p.states());
-                }
+            }
+
+            @Override
+            public void stateChanged(List<PointState> states) {
+                writeCheckpoint(fingerprint, states);
             }
         };
     }
 
-    private int finish(SweepOutcome outcome, String fingerprint, ChannelRecorder recorder, SignalStop signals) {
+    private int finish(SweepOutcome outcome, String fingerprint, SignalStop signals) {
         boolean interrupted = outcome.interrupted();
         ChannelTrace replayed = plan.link().channel().trace();
         if (replayed != null && !plan.quiet()) {
@@ -197,10 +192,9 @@ final class SweepJob {
             } else {
                 Checkpoint.delete(dir);
             }
-            if (recorder != null && !outcome.results().isEmpty()) {
-                long blocks = outcome.results().get(0).counts().frames() * plan.link().fadingBlocksPerFrame();
-                ChannelTrace drawn = recorder.trace("channels of " + plan.link().describe(),
-                        (int) Math.min(blocks, plan.traceOutBlocks()));
+            if (plan.traceOut() != null && !outcome.results().isEmpty()) {
+                ChannelTrace drawn = ChannelTrace.of("channels of " + plan.link().describe(),
+                        plan.link().receiveAntennas(), plan.link().transmitAntennas(), outcome.recordedChannels());
                 drawn.write(plan.traceOut());
                 written.add(plan.traceOut());
             }

@@ -1,74 +1,47 @@
 package org.fadebench.bench.link;
 
-import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.LinkChannel;
 
 /**
- * Keeps the true channel of the first {@code capacity} fading blocks of an SNR point, by block
- * number, for {@code --trace-out}. A block's channel depends only on the seed and its number, so
- * what is kept does not depend on which thread drew it; each block number is written by one
- * thread only, into its own part of the array, and read after the workers have finished. With
- * Doppler the first slot's matrix stands for the block.
+ * Keeps the true channel of a run of fading blocks, {@code first .. first+blocks-1}, as a chain
+ * draws them (for {@code --trace-out}). One recorder serves one batch on one thread; the sweep
+ * merges what the batches of a point recorded in batch order. With Doppler the first slot's matrix
+ * stands for the block.
  */
 public final class ChannelRecorder {
 
-    private final int nr;
-    private final int mt;
-    private final int capacity;
+    private final long first;
+    private final int blocks;
     private final double[] matrices;
     private final double[] one;
-    private final boolean[] seen;
 
     /**
-     * Bytes the storage of a recorder of {@code capacity} Nr x Mt matrices takes (the arrays the
-     * constructor below allocates); {@link Long#MAX_VALUE} when it is too large for one array.
+     * Bytes that keeping {@code capacity} recorded Nr x Mt matrices takes (the sweep keeps those of
+     * the first point's first fading blocks, see {@code SweepLedger}); {@link Long#MAX_VALUE} when
+     * it is too large for one array.
      */
     public static long bufferBytes(int nr, int mt, int capacity) {
         long values = 2L * nr * mt * capacity;
-        return values > Integer.MAX_VALUE - 8 ? Long.MAX_VALUE : 8 * values + capacity;
+        return values > Integer.MAX_VALUE - 8 ? Long.MAX_VALUE : 8 * values;
     }
 
-    public ChannelRecorder(int nr, int mt, int capacity) {
-        this.nr = nr;
-        this.mt = mt;
-        this.capacity = capacity;
-        this.matrices = new double[2 * nr * mt * capacity];
+    /** A recorder of {@code blocks} Nr x Mt matrices, from fading block number {@code first} on. */
+    public ChannelRecorder(int nr, int mt, long first, int blocks) {
+        this.first = first;
+        this.blocks = blocks;
         this.one = new double[2 * nr * mt];
-        this.seen = new boolean[capacity];
-    }
-
-    /** A recorder of the same size, sharing the storage: one per worker thread (own work array). */
-    public ChannelRecorder forThread() {
-        return new ChannelRecorder(this);
-    }
-
-    private ChannelRecorder(ChannelRecorder shared) {
-        this.nr = shared.nr;
-        this.mt = shared.mt;
-        this.capacity = shared.capacity;
-        this.matrices = shared.matrices;
-        this.seen = shared.seen;
-        this.one = new double[2 * nr * mt];
+        this.matrices = new double[one.length * blocks];
     }
 
     void record(LinkChannel channel, long block) {
-        if (block < capacity) {
+        if (block >= first && block - first < blocks) {
             channel.trueChannel(0, one);
-            System.arraycopy(one, 0, matrices, (int) block * one.length, one.length);
-            seen[(int) block] = true;
+            System.arraycopy(one, 0, matrices, (int) (block - first) * one.length, one.length);
         }
     }
 
-    /**
-     * The first {@code blocks} recorded blocks as a trace (the caller passes the blocks of the
-     * point's merged frames, so batches computed speculatively beyond them do not count).
-     */
-    public ChannelTrace trace(String name, int blocks) {
-        int n = 0;
-        while (n < Math.min(blocks, capacity) && seen[n]) {
-            n++;
-        }
-        double[] kept = java.util.Arrays.copyOf(matrices, 2 * nr * mt * n);
-        return ChannelTrace.of(name, nr, mt, kept);
+    /** The recorded matrices, block after block, each interleaved row-major Nr x Mt (the caller's array). */
+    public double[] matrices() {
+        return matrices;
     }
 }

@@ -1,5 +1,6 @@
 package org.fadebench.bench.link;
 
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
@@ -17,7 +18,8 @@ import org.fadebench.modem.LlrMethod;
  *
  * @param interleaverRows rows of the block interleaver (0 unless {@code interleaving} is block)
  */
-public record FrameCoding(FecScheme scheme, Interleaving interleaving, int interleaverRows, LlrMethod llr) {
+public record FrameCoding(FecScheme scheme, Interleaving interleaving, int interleaverRows, LlrMethod llr)
+        implements Serializable {
 
     /** Uncoded: no CRC, no code, no interleaver, hard decisions. */
     public static final FrameCoding NONE = new FrameCoding(FecScheme.NONE, Interleaving.NONE, 0, LlrMethod.MAXLOG);

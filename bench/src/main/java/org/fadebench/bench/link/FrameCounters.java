@@ -1,7 +1,9 @@
 package org.fadebench.bench.link;
 
+import java.io.Serializable;
+
 /** Error counts over a number of frames. Mutable; one per batch, merged in batch order. */
-public final class FrameCounters {
+public final class FrameCounters implements Serializable {
 
     private long frames;
     private long frameErrors;

@@ -1,5 +1,6 @@
 package org.fadebench.bench.link;
 
+import java.io.Serializable;
 import org.fadebench.bench.settings.InvalidSettingException;
 import org.fadebench.bench.settings.RunSettings;
 import org.fadebench.channel.ChannelSpec;
@@ -22,7 +23,7 @@ import org.fadebench.modem.Modulation;
  */
 public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas,
                            int receiveAntennas, ChannelSpec channel, int frameBits, int coherenceSlots,
-                           Decoder decoder, FrameCoding coding) {
+                           Decoder decoder, FrameCoding coding) implements Serializable {
 
     /** Frame length used when the user gives none, rounded up to whole code blocks. */
     public static final int DEFAULT_FRAME_BITS = 1024;
@@ -48,9 +49,9 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
                 decoder, FrameCoding.NONE);
     }
 
-    /** The fading model's name (a trace reports the model it replaces, see {@link ChannelSpec}). */
-    public Fading fading() {
-        return channel.fading();
+    /** The fading model's name (a trace reports the model it replaces, see {@link ChannelSpec#modelName}). */
+    public String fading() {
+        return channel.modelName();
     }
 
     public LinkSettings {

@@ -268,7 +268,7 @@ public final class FerPlot {
     /** E.g. "Alamouti 2×2, 16QAM, Rayleigh fading" or "1×2, BPSK, Rayleigh fading, no space-time code". */
     static String title(LinkSettings link) {
         String antennasAndSignal = String.format(Locale.ROOT, "%d×%d, %s, %s fading", link.transmitAntennas(),
-                link.receiveAntennas(), link.modulation(), capitalised(link.fading().cliName()));
+                link.receiveAntennas(), link.modulation(), capitalised(link.fading()));
         String title = link.code() == SpaceTimeCodes.NONE ? antennasAndSignal + ", no space-time code"
                 : capitalised(link.code().name()) + " " + antennasAndSignal;
         FecScheme fec = link.coding().scheme();

@@ -26,7 +26,6 @@ import org.fadebench.bench.sweep.SnrGrid;
 import org.fadebench.bench.sweep.StopRules;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
-import org.fadebench.channel.Fading;
 import org.fadebench.channel.KroneckerCorrelation;
 import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
@@ -237,7 +236,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     public String numbersFingerprintText(int batchFrames) {
         return String.join("|", "v3", link.describe(), link.coding().toString(), link.channel().describe(),
                 SpaceTimeCodeFile.format(link.code()), link.decoder().cliName(), link.modulation().cliName(),
-                link.fading().cliName(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),
+                link.fading(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),
                 Long.toString(rules.minErrors()), Long.toString(rules.maxFrames()), Double.toString(rules.maxSeconds()),
                 Double.toString(rules.ferFloor()), Long.toString(seed), Integer.toString(batchFrames));
     }
@@ -289,9 +288,9 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
 
     /** The channel from its settings; only the settings given are passed on. */
     private static ChannelSpec channelSpec(SettingValues v) {
-        Fading fad = parse(FADING, () -> Fading.fromCliName(v.text(FADING)));
+        ChannelSpec named = parse(FADING, () -> ChannelSpec.of(v.text(FADING)));
         return parse(null, () -> {
-            ChannelSpec c = ChannelSpec.of(fad);
+            ChannelSpec c = named;
             if (v.isSet(K_FACTOR)) {
                 c = c.withKFactor(v.number(K_FACTOR));
             }

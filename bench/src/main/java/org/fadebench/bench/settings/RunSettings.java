@@ -37,7 +37,7 @@ public final class RunSettings {
     public static final Setting MODULATION = new Setting("link", "modulation", "--mod", TEXT, "NAME", "qpsk",
             "Modulation: bpsk, qpsk, 16qam, 64qam, 256qam.");
     public static final Setting FADING = new Setting("link", "fading", "--fading", TEXT, "NAME", "rayleigh",
-            "Fading model: rayleigh, rician, nakagami, none.");
+            "Fading model: " + org.fadebench.channel.ChannelModels.STANDARD.choices() + ".");
     public static final Setting K_FACTOR = new Setting("link", "k_factor", "--k-factor", NUMBER, "K", null,
             "Rician K-factor, linear (with --fading rician).");
     public static final Setting NAKAGAMI_M = new Setting("link", "nakagami_m", "--nakagami-m", NUMBER, "M", null,

@@ -1,5 +1,6 @@
 package org.fadebench.bench.sweep;
 
+import java.io.Serializable;
 import org.fadebench.bench.settings.InvalidSettingException;
 import org.fadebench.bench.settings.RunSettings;
 
@@ -12,7 +13,7 @@ import org.fadebench.bench.settings.RunSettings;
  *                   result depend on the machine's speed: the one rule that is not reproducible)
  * @param ferFloor   the sweep stops after the first point whose FER is below this (0: never)
  */
-public record StopRules(long minErrors, long maxFrames, double maxSeconds, double ferFloor) {
+public record StopRules(long minErrors, long maxFrames, double maxSeconds, double ferFloor) implements Serializable {
 
     /** Default FER floor of the sweep. */
     public static final double DEFAULT_FER_FLOOR = 1e-6;

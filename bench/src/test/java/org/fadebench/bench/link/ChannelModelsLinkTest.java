@@ -80,12 +80,11 @@ class ChannelModelsLinkTest {
     void traceReplayIsDeterministicAcrossThreads() throws Exception {
         ChannelSpec rayleigh = ChannelSpec.of(Fading.RAYLEIGH);
         LinkSettings drawn = simo(rayleigh, 2, 0);
-        ChannelRecorder rec = new ChannelRecorder(2, 1, 500);
         SweepEngine e = new SweepEngine(drawn, new StopRules(0, 500, 0, 0), 9, 2, 0.95);
-        e.recordChannels(rec);
-        e.run(new double[] {5}, p -> { });
+        e.recordChannels(500);
+        double[] recorded = e.run(new double[] {5}, p -> { }).recordedChannels();
         Path file = tmp.resolve("h.csv.xz");
-        rec.trace("test", 500).write(file);
+        ChannelTrace.of("test", 2, 1, recorded).write(file);
         ChannelTrace back = ChannelTrace.read(file);
         assertEquals(500, back.size());
         LinkSettings replay = simo(rayleigh.withTrace(back), 2, 128);

@@ -57,8 +57,8 @@ class SweepEngineTest {
                 Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
                         LlrMethod.MAXLOG));
         assertEquals(128, coded.framesDecodedTogether());
-        assertEquals(128, SweepEngine.batchFrames(coded));
-        assertEquals(SweepEngine.BATCH_SYMBOLS / LINK.symbolsPerFrame(), SweepEngine.batchFrames(LINK));
+        assertEquals(128, SweepPlan.batchFrames(coded));
+        assertEquals(SweepPlan.BATCH_SYMBOLS / LINK.symbolsPerFrame(), SweepPlan.batchFrames(LINK));
         StopRules rules = new StopRules(20, 100_000);
         FrameCounters one = new SweepEngine(coded, rules, 5, 1, 0.95).run(new double[] {6}, p -> { }).results().get(0)
                 .counts();
@@ -84,6 +84,55 @@ class SweepEngineTest {
         assertTrue(r.counts().frameErrors() >= 30);
         assertTrue(r.counts().frames() % e.batchFrames() == 0);
         assertTrue(r.counts().frames() < 10_000_000);
+    }
+
+    /** --max-frames 9223372036854775807 (the largest long) simulates until min-errors, as any other limit. */
+    @Test
+    void largestMaxFramesStillSimulates() {
+        SweepOutcome o = new SweepEngine(LINK, new StopRules(20, Long.MAX_VALUE), 99, 2, 0.95)
+                .run(new double[] {5}, p -> { });
+        assertEquals(1, o.complete().size());
+        assertTrue(o.complete().get(0).counts().frameErrors() >= 20);
+        assertTrue(o.complete().get(0).counts().frames() > 0);
+    }
+
+    /**
+     * The listener hears everything on the thread that runs the sweep (so it holds no lock of the
+     * workers'): points in SNR order, and the checkpoint state, last as the outcome's.
+     */
+    @Test
+    void listenerIsCalledOnTheCallersThread() {
+        Thread caller = Thread.currentThread();
+        List<Thread> seen = new java.util.ArrayList<>();
+        List<Integer> points = new java.util.ArrayList<>();
+        List<List<PointState>> states = new java.util.ArrayList<>();
+        SweepEngine e = new SweepEngine(LINK, new StopRules(40, 1_000_000), 99, 3, 0.95);
+        e.progressMillis(1);
+        SweepOutcome o = e.run(new double[] {5, 10, 15}, new SweepEngine.Listener() {
+            @Override
+            public void pointDone(PointResult result) {
+                seen.add(Thread.currentThread());
+                points.add(result.index());
+            }
+
+            @Override
+            public void progress(SweepEngine.Progress progress) {
+                seen.add(Thread.currentThread());
+            }
+
+            @Override
+            public void stateChanged(List<PointState> s) {
+                seen.add(Thread.currentThread());
+                states.add(s);
+            }
+        });
+        assertEquals(List.of(0, 1, 2), points);
+        assertTrue(seen.stream().allMatch(t -> t == caller), "every call on the caller's thread");
+        List<PointState> last = states.get(states.size() - 1);
+        for (int i = 0; i < 3; i++) {
+            assertEquals(o.states().get(i).mergedBatches(), last.get(i).mergedBatches());
+            assertTrue(last.get(i).done());
+        }
     }
 
     /** A point with no errors at max-frames ends the sweep. */

@@ -1,5 +1,6 @@
 package org.fadebench.coding.fec;
 
+import java.io.Serializable;
 import java.util.Objects;
 
 /**
@@ -10,7 +11,7 @@ import java.util.Objects;
  * @param crc  the check appended to each payload
  * @param code the channel code applied to payload and check
  */
-public record FecScheme(Crc crc, ChannelCode code) {
+public record FecScheme(Crc crc, ChannelCode code) implements Serializable {
 
     /** No CRC, no channel code. */
     public static final FecScheme NONE = new FecScheme(Crc.NONE, ChannelCode.NONE);

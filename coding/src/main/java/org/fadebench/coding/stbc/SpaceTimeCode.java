@@ -1,5 +1,6 @@
 package org.fadebench.coding.stbc;
 
+import java.io.Serializable;
 import java.util.Objects;
 
 /**
@@ -14,7 +15,7 @@ import java.util.Objects;
  * code's power scale, chosen so that with unit-energy symbols the average total energy per slot,
  * summed over antennas, is 1 (the SNR convention: see README). A code object is immutable.
  */
-public final class SpaceTimeCode {
+public final class SpaceTimeCode implements Serializable {
 
     /** Which specialised kernel may stand in for the general encoder and combiner. */
     public enum Kernel { SINGLE_ANTENNA, ALAMOUTI, GENERAL }
