@@ -43,7 +43,7 @@ public final class BlockFadingOutage {
      * @throws IllegalArgumentException if an antenna count is outside 1..64 or a length is below 1
      */
     public BlockFadingOutage(FadingModel fading, int mt, int nr, int frameSlots, int blockSlots) {
-        OutageBounds.checkAntennas(mt, nr);
+        Antennas.check(nr, mt);
         if (frameSlots < 1 || blockSlots < 1) {
             throw new IllegalArgumentException("frame and block lengths must be >= 1 slot, got " + frameSlots
                     + " and " + blockSlots);

@@ -235,19 +235,9 @@ public final class ChannelSpec implements Serializable {
         return new LinkChannel(nr, mt, maxSlotsPerBlock, model.newBlockChannel(nr, mt), csi);
     }
 
-    /** Nakagami m, or NaN when not given. */
-    public double nakagamiM() {
-        return nakagamiM;
-    }
-
     /** True when the receiver decodes with a channel error of fixed variance ({@code --csi-error}). */
     public boolean fixedCsiError() {
-        return given(csiError) && csiError > 0;
-    }
-
-    /** True when full correlation matrices (which may be singular) are given. */
-    public boolean correlationMatrices() {
-        return correlation != null;
+        return csiError != null && csiError > 0;
     }
 
     /**

@@ -6,7 +6,6 @@ import java.util.Optional;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
 import org.fadebench.channel.ChannelSpec;
-import org.fadebench.channel.Fading;
 
 /**
  * The diversity order a link's FER tends to at high SNR, where the model lets one say, and the
@@ -23,6 +22,7 @@ import org.fadebench.channel.Fading;
  * <li>Nakagami-m on every entry: m·Mt·Nr (‖H‖²_F is then Gamma(m·Mt·Nr); common practice, no
  *     source).</li>
  * </ul>
+ * Each fading model states its share per antenna pair ({@code ChannelModel.diversityPerPair}).
  * Not said: no fading (the FER falls exponentially, with no finite slope), a fixed CSI error
  * (the FER meets a floor), Doppler, a trace, full correlation matrices (which may be singular),
  * non-orthogonal codes with linear decoders, and coded frames over F > 1 blocks, whose order is at
@@ -43,20 +43,18 @@ public record AsymptoticDiversity(double order, String basis) {
     public static Optional<AsymptoticDiversity> of(LinkSettings link) {
         ChannelSpec c = link.channel();
         boolean oneBlockOrUncoded = link.fadingBlocksPerFrame() == 1 || !link.coding().coded();
-        if (!link.code().isOrthogonal() || c.varies() || c.trace() != null || c.fixedCsiError()
-                || c.correlationMatrices() || c.fading() == Fading.NONE || !oneBlockOrUncoded) {
+        if (!link.code().isOrthogonal() || c.trace() != null || c.varies() || c.fixedCsiError()
+                || !oneBlockOrUncoded) {
             return Optional.empty();
         }
-        int mt = link.transmitAntennas();
-        int nr = link.receiveAntennas();
-        String antennas = mt + "x" + nr;
-        if (c.fading() == Fading.NAKAGAMI) {
-            double m = c.nakagamiM();
-            return Optional.of(new AsymptoticDiversity(m * mt * nr, String.format(Locale.ROOT,
-                    "m·Mt·Nr = %s·%s for an orthogonal code in Nakagami-m fading", m, antennas)));
+        double perPair = c.model().diversityPerPair();
+        if (Double.isNaN(perPair)) {
+            return Optional.empty();
         }
-        return Optional.of(new AsymptoticDiversity(mt * nr, "Mt·Nr = " + antennas + " for an orthogonal code in "
-                + c.fading().cliName() + " fading"));
+        String antennas = link.transmitAntennas() + "x" + link.receiveAntennas();
+        String basis = (perPair == 1.0 ? "Mt·Nr = " + antennas : "m·Mt·Nr = " + perPair + "·" + antennas)
+                + " for an orthogonal code in " + c.model().name() + " fading";
+        return Optional.of(new AsymptoticDiversity(perPair * link.transmitAntennas() * link.receiveAntennas(), basis));
     }
 
     /**
