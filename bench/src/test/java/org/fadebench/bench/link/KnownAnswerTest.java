@@ -225,6 +225,6 @@ class KnownAnswerTest {
                 BoundCurves.compute(BoundSettings.of(link), snr));
         String sha = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256")
                 .digest(text.getBytes(StandardCharsets.UTF_8)));
-        assertEquals("d57279cd7fdce463f2b59a70f8885845ca083d880a31cc683f7f95c933c0f606", sha, text);
+        assertEquals("b775acc0ad41c368c9ab22cbdaeb245a77d6895e4a6c425e6c104a2af28e6cfb", sha, text);
     }
 }
