@@ -92,7 +92,7 @@ public class CombinerBenchmark extends ThroughputBenchmark {
     @Benchmark
     @OperationsPerInvocation(SYMBOLS)
     public double[][] alamoutiPlanarEncodeChannelCombine() {
-        AlamoutiKernel.encode(symbolPlanes, 0, SYMBOLS / 2, gridPlanes);
+        alamoutiPlanar.encode(symbolPlanes, 0, SYMBOLS / 2, gridPlanes);
         MimoChannel.applyTwoTransmittersPlanar(h22, 2, gridPlanes, 0, SYMBOLS / 2, N0, draws, receivedPlanes);
         alamoutiPlanar.setChannel(h22);
         alamoutiPlanar.combine(receivedPlanes, 0, SYMBOLS / 2, estimatePlanes);

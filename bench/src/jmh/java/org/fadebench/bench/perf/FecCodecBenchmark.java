@@ -6,6 +6,7 @@ import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecCodec;
 import org.fadebench.coding.fec.FecScheme;
+import org.fadebench.coding.fec.conv.PuncturedCode;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.OperationsPerInvocation;
 import org.openjdk.jmh.annotations.Setup;
@@ -21,7 +22,7 @@ public class FecCodecBenchmark extends ThroughputBenchmark {
 
     private static final int PAYLOAD_BITS = 1000;
 
-    private static final int FRAMES = FecScheme.MAX_LANES;
+    private static final int FRAMES = ChannelCode.MAX_LANES;
 
     private FecCodec codec;
     private double[][] llr;
@@ -29,7 +30,7 @@ public class FecCodecBenchmark extends ThroughputBenchmark {
 
     @Setup
     public void setUp() {
-        FecScheme scheme = new FecScheme(Crc.CRC24, ChannelCode.CONV_R34);
+        FecScheme scheme = new FecScheme(Crc.CRC24, PuncturedCode.CONV_R34);
         int n = scheme.codedBits(PAYLOAD_BITS);
         codec = scheme.newCodec(PAYLOAD_BITS, BitInterleaver.random(n, 1), FRAMES);
         Random random = new Random(1);

@@ -1,8 +1,8 @@
 package org.fadebench.bench.perf;
 
 import java.util.Random;
-import org.fadebench.coding.fec.ConvolutionalCode;
-import org.fadebench.coding.fec.ViterbiDecoder;
+import org.fadebench.coding.fec.conv.ConvolutionalCode;
+import org.fadebench.coding.fec.conv.ViterbiDecoder;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.OperationsPerInvocation;
 import org.openjdk.jmh.annotations.Scope;

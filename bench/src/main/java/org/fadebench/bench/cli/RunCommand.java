@@ -59,7 +59,7 @@ final class RunCommand implements Callable<Integer> {
         RunOutputs.checkBeforeRun(plan, preloaded == null ? scenarioFile : null, resume);
         if (!plan.link().code().isOrthogonal() && !plan.quiet()) {
             spec.commandLine().getErr().println("fadebench run: warning: code " + plan.link().code().name()
-                    + " is not orthogonal; " + plan.link().decoder().cliName()
+                    + " is not orthogonal; " + plan.link().equaliser().cliName()
                     + " linear decoding is not maximum-likelihood, so expect a loss against ML decoding");
         }
         return new SweepJob(plan, resume, spec.commandLine().getOut()).run();

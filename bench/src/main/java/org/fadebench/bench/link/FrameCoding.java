@@ -5,16 +5,15 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import org.fadebench.coding.fec.BitInterleaver;
-import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
 import org.fadebench.modem.LlrMethod;
 
 /**
- * What happens to a frame's bits around the modem: CRC, convolutional code with puncturing, bit
- * interleaver, and how the receiver computes its LLRs. {@link #NONE} is the uncoded link with
- * hard decisions.
+ * What happens to a frame's bits around the modem: CRC, channel code, bit interleaver, and how
+ * the receiver computes its LLRs. {@link #NONE} is the uncoded link with hard decisions.
  *
  * @param interleaverRows rows of the block interleaver (0 unless {@code interleaving} is block)
  */
@@ -38,10 +37,10 @@ public record FrameCoding(FecScheme scheme, Interleaving interleaving, int inter
 
     /** Whether the frame carries a CRC or a channel code (and so is decoded from LLRs). */
     public boolean coded() {
-        return scheme.crc() != Crc.NONE || scheme.code() != ChannelCode.NONE;
+        return scheme.crc() != Crc.NONE || scheme.code() != ChannelCodes.NONE;
     }
 
-    /** Bits sent for a payload, CRC, tail and puncturing included. */
+    /** Bits sent for a payload, CRC and the channel code's overhead included. */
     public int codedBits(int payloadBits) {
         return coded() ? scheme.codedBits(payloadBits) : payloadBits;
     }

@@ -6,7 +6,7 @@ import org.fadebench.bench.settings.RunSettings;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
 import org.fadebench.coding.fec.FecScheme;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.modem.Modulation;
 
@@ -17,36 +17,37 @@ import org.fadebench.modem.Modulation;
  *
  * @param frameBits       information bits per frame; a whole number of code blocks
  * @param coherenceSlots  slots (symbol periods) per fading block; 0 means the whole frame
- * @param decoder         linear decoder (matched filter, ZF or MMSE); all coincide for orthogonal codes
+ * @param equaliser       linear equaliser in front of the slicer or demapper (matched filter, ZF or
+ *                        MMSE; option {@code --decoder}); all coincide for orthogonal codes
  * @param channel         fading model, correlation, Doppler, receiver CSI, or a recorded trace
  * @param coding          CRC, channel code, interleaver and LLRs; {@link FrameCoding#NONE} for uncoded
  */
 public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas,
                            int receiveAntennas, ChannelSpec channel, int frameBits, int coherenceSlots,
-                           Decoder decoder, FrameCoding coding) implements Serializable {
+                           Equaliser equaliser, FrameCoding coding) implements Serializable {
 
     /** Frame length used when the user gives none, rounded up to whole code blocks. */
     public static final int DEFAULT_FRAME_BITS = 1024;
 
-    /** A link decoded by the matched filter. */
+    /** A link equalised by the matched filter. */
     public LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas, int receiveAntennas,
                         Fading fading, int frameBits, int coherenceSlots) {
         this(modulation, code, transmitAntennas, receiveAntennas, ChannelSpec.of(fading), frameBits, coherenceSlots,
-                Decoder.MF, FrameCoding.NONE);
+                Equaliser.MF, FrameCoding.NONE);
     }
 
     /** A link over a plain fading model with perfect CSI. */
     public LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas, int receiveAntennas,
-                        Fading fading, int frameBits, int coherenceSlots, Decoder decoder, FrameCoding coding) {
+                        Fading fading, int frameBits, int coherenceSlots, Equaliser equaliser, FrameCoding coding) {
         this(modulation, code, transmitAntennas, receiveAntennas, ChannelSpec.of(fading), frameBits, coherenceSlots,
-                decoder, coding);
+                equaliser, coding);
     }
 
     /** An uncoded link. */
     public LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas, int receiveAntennas,
-                        Fading fading, int frameBits, int coherenceSlots, Decoder decoder) {
+                        Fading fading, int frameBits, int coherenceSlots, Equaliser equaliser) {
         this(modulation, code, transmitAntennas, receiveAntennas, ChannelSpec.of(fading), frameBits, coherenceSlots,
-                decoder, FrameCoding.NONE);
+                equaliser, FrameCoding.NONE);
     }
 
     /** The fading model's name (a trace reports the model it replaces, see {@link ChannelSpec#modelName}). */
@@ -87,7 +88,7 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
         }
         coding.check(frameBits);
         channel.check(receiveAntennas, transmitAntennas);
-        if (decoder == Decoder.ZF && !code.isOrthogonal()
+        if (equaliser == Equaliser.ZF && !code.isOrthogonal()
                 && (long) code.slotsPerBlock() * receiveAntennas * 2 < 2L * code.symbolsPerBlock()) {
             throw new InvalidSettingException(RunSettings.DECODER, "zf cannot separate " + code.symbolsPerBlock()
                     + " symbols from " + code.slotsPerBlock() + " slot(s) x " + receiveAntennas
@@ -123,11 +124,11 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
     }
 
     /**
-     * How many frames the receiver decodes together: 1 without a convolutional code (see
-     * {@link FecScheme#decodeLanes}).
+     * Lanes: how many frames the receiver decodes together (see {@link FecScheme#lanes}); 1 for an
+     * uncoded link.
      */
-    public int framesDecodedTogether() {
-        return coding.scheme().decodeLanes(frameBits);
+    public int lanes() {
+        return coding.scheme().lanes(frameBits);
     }
 
     /** Channel uses (slots) per frame. */
@@ -161,7 +162,7 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transm
         String coherence = coherenceSlots == 0 || coherenceSlots >= slotsPerFrame()
                 ? "one fading block per frame"
                 : effectiveCoherenceSlots() + " slots per fading block (" + fadingBlocksPerFrame() + " per frame)";
-        String dec = code.isOrthogonal() ? "" : ", " + decoder.cliName() + " decoder";
+        String dec = code.isOrthogonal() ? "" : ", " + equaliser.cliName() + " decoder";
         String fec = coding.coded() ? ", " + coding.describe() : "";
         return String.format(java.util.Locale.ROOT, "%s %dx%d, %s, %s fading, %d bits/frame (%d symbols, %d slots), %s%s%s",
                 code.name(), transmitAntennas, receiveAntennas, modulation.cliName(), channel.describe(),

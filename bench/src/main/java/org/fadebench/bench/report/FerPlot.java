@@ -24,7 +24,7 @@ import org.fadebench.bench.analysis.Reach;
 import org.fadebench.channel.OutageEstimate;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
-import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
@@ -273,7 +273,7 @@ public final class FerPlot {
                 : capitalised(link.code().name()) + " " + antennasAndSignal;
         FecScheme fec = link.coding().scheme();
         if (link.coding().coded()) {
-            title += ", " + (fec.code() == ChannelCode.NONE ? "uncoded" : fec.code().cliName())
+            title += ", " + (fec.code() == ChannelCodes.NONE ? "uncoded" : fec.code().cliName())
                     + (fec.crc() == Crc.NONE ? "" : " + " + fec.crc().cliName());
         }
         return title;

@@ -28,10 +28,11 @@ import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.KroneckerCorrelation;
 import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.SpaceTimeCodeFile;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
@@ -123,8 +124,8 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     public static LinkSettings link(SettingValues v) {
         Modulation mod = parse(MODULATION, () -> Modulation.fromCliName(v.text(MODULATION)));
         SpaceTimeCode stbc = code(v);
-        Decoder dec = v.isSet(DECODER) ? parse(DECODER, () -> Decoder.fromCliName(v.text(DECODER)))
-                : stbc.isOrthogonal() ? Decoder.MF : Decoder.MMSE;
+        Equaliser dec = v.isSet(DECODER) ? parse(DECODER, () -> Equaliser.fromCliName(v.text(DECODER)))
+                : stbc.isOrthogonal() ? Equaliser.MF : Equaliser.MMSE;
         int nr = v.integer(RX);
         int nTx = v.isSet(TX) ? v.integer(TX) : stbc.transmitAntennas();
         ChannelSpec channel = withCorrelationMatrices(channelSpec(v), v, nr, nTx);
@@ -221,7 +222,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     public Map<String, Object> settings() {
         Map<String, Object> m = SettingsText.json(values, RunSettings.all());
         m.put(TX.jsonKey(), link.transmitAntennas());
-        m.put(DECODER.jsonKey(), link.decoder().cliName());
+        m.put(DECODER.jsonKey(), link.equaliser().cliName());
         m.put(FRAME_BITS.jsonKey(), link.frameBits());
         m.put(INTERLEAVER.jsonKey(), link.coding().interleaving().cliName());
         m.put(THREADS.jsonKey(), threads);
@@ -235,7 +236,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     /** Every setting that changes the numbers, for the checkpoint's fingerprint. */
     public String numbersFingerprintText(int batchFrames) {
         return String.join("|", "v3", link.describe(), link.coding().toString(), link.channel().describe(),
-                SpaceTimeCodeFile.format(link.code()), link.decoder().cliName(), link.modulation().cliName(),
+                SpaceTimeCodeFile.format(link.code()), link.equaliser().cliName(), link.modulation().cliName(),
                 link.fading(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),
                 Long.toString(rules.minErrors()), Long.toString(rules.maxFrames()), Double.toString(rules.maxSeconds()),
                 Double.toString(rules.ferFloor()), Long.toString(seed), Integer.toString(batchFrames));
@@ -334,8 +335,8 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     /** CRC, channel code, interleaver and LLRs from their settings. */
     private static FrameCoding frameCoding(SettingValues v) {
         Crc c = parse(CRC, () -> Crc.fromCliName(v.text(CRC)));
-        ChannelCode code = parse(FEC, () -> ChannelCode.fromCliName(v.text(FEC)));
-        boolean coded = c != Crc.NONE || code != ChannelCode.NONE;
+        ChannelCode code = parse(FEC, () -> ChannelCodes.standard().find(v.text(FEC)));
+        boolean coded = c != Crc.NONE || code != ChannelCodes.NONE;
         Interleaving il = v.isSet(INTERLEAVER) ? parse(INTERLEAVER, () -> Interleaving.fromCliName(v.text(INTERLEAVER)))
                 : coded ? Interleaving.RANDOM : Interleaving.NONE;
         LlrMethod method = parse(LLR, () -> LlrMethod.fromCliName(v.text(LLR)));

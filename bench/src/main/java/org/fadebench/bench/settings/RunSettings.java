@@ -15,6 +15,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
+import org.fadebench.coding.fec.ChannelCodes;
 
 /**
  * The table of every setting of {@code run}: one line per setting. Adding an option to
@@ -59,8 +60,7 @@ public final class RunSettings {
     public static final Setting TRACE = new Setting("link", "trace", "--trace", PATH, "FILE", null,
             "Replay channel matrices from a .npy or CSV trace (optionally gz, xz, bz2, zst), one per fading block.");
     public static final Setting FEC = new Setting("link", "fec", "--fec", TEXT, "NAME", "none",
-            "Channel code: none, conv-r12, conv-r23, conv-r34 (64-state (133,171) code, punctured), "
-                    + "conv-small (4-state (5,7)).");
+            "Channel code: " + ChannelCodes.standard().choices() + ".");
     public static final Setting CRC = new Setting("link", "crc", "--crc", TEXT, "NAME", "none",
             "CRC appended to each frame: none, crc16, crc24, crc32.");
     public static final Setting INTERLEAVER = new Setting("link", "interleaver", "--interleaver", TEXT, "NAME", null,

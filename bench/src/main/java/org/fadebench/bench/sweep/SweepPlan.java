@@ -66,12 +66,12 @@ public record SweepPlan(LinkSettings link, double[] snrDb, StopRules rules, long
 
     /**
      * About {@link #BATCH_SYMBOLS} symbols of whole frames, rounded up to a whole number of the
-     * groups the receiver decodes together, so that no group is cut short.
+     * link's {@link LinkSettings#lanes() lanes}, so that no group decoded together is cut short.
      */
     static int batchFrames(LinkSettings link) {
         int frames = Math.max(1, BATCH_SYMBOLS / link.symbolsPerFrame());
-        int group = link.framesDecodedTogether();
-        return (frames + group - 1) / group * group;
+        int lanes = link.lanes();
+        return (frames + lanes - 1) / lanes * lanes;
     }
 
     /** Batches that hold {@code maxFrames}: its quotient by the batch size, rounded up, for any long. */

@@ -13,11 +13,11 @@ import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
 import org.fadebench.channel.OutageBounds;
 import org.fadebench.channel.OutageEstimate;
-import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.conv.PuncturedCode;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
@@ -32,7 +32,7 @@ class BoundTruthTest {
 
     private static LinkSettings alamouti(int rx, int coherence) {
         return new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, rx, ChannelSpec.of(Fading.RAYLEIGH), 256,
-                coherence, Decoder.MF, new FrameCoding(new FecScheme(Crc.NONE, ChannelCode.CONV_R12),
+                coherence, Equaliser.MF, new FrameCoding(new FecScheme(Crc.NONE, PuncturedCode.CONV_R12),
                         Interleaving.RANDOM, 0, LlrMethod.MAXLOG));
     }
 
@@ -141,7 +141,7 @@ class BoundTruthTest {
         assertTrue(AsymptoticDiversity.of(awgn).isEmpty());
         // Nakagami m = 2: m·Mt·Nr = 4
         LinkSettings nakagami = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1,
-                ChannelSpec.of(Fading.NAKAGAMI).withNakagamiM(2), 128, 0, Decoder.MF, FrameCoding.NONE);
+                ChannelSpec.of(Fading.NAKAGAMI).withNakagamiM(2), 128, 0, Equaliser.MF, FrameCoding.NONE);
         assertEquals(4.0, AsymptoticDiversity.of(nakagami).orElseThrow().order());
     }
 }

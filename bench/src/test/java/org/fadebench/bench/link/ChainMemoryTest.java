@@ -6,11 +6,11 @@ import java.lang.management.ManagementFactory;
 import java.util.stream.Stream;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
-import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.fec.conv.PuncturedCode;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
@@ -28,21 +28,21 @@ class ChainMemoryTest {
 
     static Stream<Arguments> links() {
         ChannelSpec rayleigh = ChannelSpec.of(Fading.RAYLEIGH);
-        FrameCoding coded = new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+        FrameCoding coded = new FrameCoding(new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                 LlrMethod.MAXLOG);
         return Stream.of(
             Arguments.of("simo 1x64 qpsk", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.NONE, 1, 64, rayleigh,
-                    1 << 18, 0, Decoder.MF, FrameCoding.NONE)),
+                    1 << 18, 0, Equaliser.MF, FrameCoding.NONE)),
             Arguments.of("alamouti 2x2 16qam, planar", new LinkSettings(Modulation.QAM16, SpaceTimeCodes.ALAMOUTI, 2, 2,
-                    rayleigh, 1 << 20, 0, Decoder.MF, FrameCoding.NONE)),
+                    rayleigh, 1 << 20, 0, Equaliser.MF, FrameCoding.NONE)),
             Arguments.of("g4 4x2 qpsk, 64-slot blocks", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.G4, 4, 2,
-                    rayleigh, 1 << 20, 64, Decoder.MF, FrameCoding.NONE)),
+                    rayleigh, 1 << 20, 64, Equaliser.MF, FrameCoding.NONE)),
             Arguments.of("alamouti 2x4 doppler", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 4,
-                    rayleigh.withDoppler(0.01), 1 << 18, 0, Decoder.MF, FrameCoding.NONE)),
+                    rayleigh.withDoppler(0.01), 1 << 18, 0, Equaliser.MF, FrameCoding.NONE)),
             Arguments.of("conv-r12 crc16, 128 lanes", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2,
-                    rayleigh, 8192, 0, Decoder.MF, coded)),
+                    rayleigh, 8192, 0, Equaliser.MF, coded)),
             Arguments.of("conv-r12 crc16, long frames", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.NONE, 1, 2,
-                    rayleigh, 1 << 20, 0, Decoder.MF, coded)));
+                    rayleigh, 1 << 20, 0, Equaliser.MF, coded)));
     }
 
     @ParameterizedTest(name = "{0}")

@@ -13,7 +13,7 @@ import org.fadebench.channel.ChannelModel;
 import org.fadebench.channel.ChannelModels;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.FadingModel;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.Modulation;
 import org.junit.jupiter.api.Test;
@@ -82,7 +82,7 @@ class ChannelModelRecipeTest {
     @Test
     void aModelKnownOnlyToItsRegistryRunsThroughTheLink() {
         ChannelSpec channel = ChannelSpec.of(MODELS, "rotated").withSetting(PHASE, 1.0);
-        LinkSettings link = new LinkSettings(Modulation.BPSK, SpaceTimeCodes.NONE, 1, 2, channel, 512, 0, Decoder.MF,
+        LinkSettings link = new LinkSettings(Modulation.BPSK, SpaceTimeCodes.NONE, 1, 2, channel, 512, 0, Equaliser.MF,
                 FrameCoding.NONE);
         assertEquals("rotated", link.fading());
         assertTrue(link.describe().contains("rotated phase 1.0"), link.describe());

@@ -12,7 +12,7 @@ import org.fadebench.bench.sweep.SweepEngine;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.Fading;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.ErrorRates;
 import org.fadebench.modem.Modulation;
@@ -29,7 +29,7 @@ class ChannelModelsLinkTest {
     Path tmp;
 
     private static LinkSettings simo(ChannelSpec channel, int rx, int coherence) {
-        return new LinkSettings(Modulation.BPSK, SpaceTimeCodes.NONE, 1, rx, channel, 512, coherence, Decoder.MF,
+        return new LinkSettings(Modulation.BPSK, SpaceTimeCodes.NONE, 1, rx, channel, 512, coherence, Equaliser.MF,
                 FrameCoding.NONE);
     }
 
@@ -106,7 +106,7 @@ class ChannelModelsLinkTest {
     @Test
     void dopplerMakesAnErrorFloorForAlamouti() {
         LinkSettings moving = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1,
-                ChannelSpec.of(Fading.RAYLEIGH).withDoppler(0.05), 256, 0, Decoder.MF, FrameCoding.NONE);
+                ChannelSpec.of(Fading.RAYLEIGH).withDoppler(0.05), 256, 0, Equaliser.MF, FrameCoding.NONE);
         List<PointResult> r = run(moving, new double[] {30, 40}, 3000, 2);
         double ratio = r.get(0).counts().ber() / r.get(1).counts().ber();
         assertTrue(r.get(1).counts().bitErrors() > 100, "a floor: errors remain at 40 dB");

@@ -12,10 +12,12 @@ import org.fadebench.bench.sweep.StopRules;
 import org.fadebench.bench.sweep.SweepEngine;
 import org.fadebench.channel.Fading;
 import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.fec.conv.PuncturedCode;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
@@ -28,7 +30,7 @@ class CodedLinkTest {
                                              LlrMethod llr) {
         FrameCoding coding = new FrameCoding(new FecScheme(crc, code), Interleaving.RANDOM, 0, llr);
         return new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, rx, Fading.RAYLEIGH, frameBits, coherence,
-                Decoder.MF, coding);
+                Equaliser.MF, coding);
     }
 
     private static List<PointResult> run(LinkSettings l, double[] snr, long minErrors, long maxFrames) {
@@ -39,12 +41,12 @@ class CodedLinkTest {
     /** Sizes: CRC, tail and puncturing are counted; frames are padded to whole code blocks. */
     @Test
     void sizesAndSpectralEfficiency() {
-        LinkSettings l = alamoutiQpsk(1, 1000, 0, ChannelCode.CONV_R12, Crc.CRC16, LlrMethod.MAXLOG);
+        LinkSettings l = alamoutiQpsk(1, 1000, 0, PuncturedCode.CONV_R12, Crc.CRC16, LlrMethod.MAXLOG);
         // (1000 + 16 + 6 tail) x 2 = 2044 coded bits -> 1022 QPSK symbols -> 511 Alamouti blocks
         assertEquals(2044, l.codedBitsPerFrame());
         assertEquals(1022, l.symbolsPerFrame());
         assertEquals(1000.0 / 1022, l.bitsPerChannelUse(), 1e-12);
-        LinkSettings r34 = alamoutiQpsk(1, 999, 0, ChannelCode.CONV_R34, Crc.NONE, LlrMethod.MAXLOG);
+        LinkSettings r34 = alamoutiQpsk(1, 999, 0, PuncturedCode.CONV_R34, Crc.NONE, LlrMethod.MAXLOG);
         // 999 + 6 = 1005 bits at rate 3/4 -> 1340 coded bits -> 670 symbols, already whole blocks
         assertEquals(1340, r34.codedBitsPerFrame());
         assertEquals(670, r34.symbolsPerFrame());
@@ -53,11 +55,11 @@ class CodedLinkTest {
     /** Without fading and at high SNR every coded frame decodes (AWGN, h = 1). */
     @Test
     void cleanChannelDecodesEveryFrame() {
-        for (ChannelCode code : ChannelCode.values()) {
+        for (ChannelCode code : ChannelCodes.standard().all()) {
             FrameCoding coding = new FrameCoding(new FecScheme(Crc.CRC24, code), Interleaving.RANDOM, 0,
                     LlrMethod.EXACT);
             LinkSettings l = new LinkSettings(Modulation.QAM16, SpaceTimeCodes.NONE, 1, 1, Fading.NONE, 500, 0,
-                    Decoder.MF, coding);
+                    Equaliser.MF, coding);
             FrameCounters c = run(l, new double[] {30}, 0, 300).get(0).counts();
             assertEquals(0, c.frameErrors(), code.cliName());
             assertEquals(0, c.crcFailures(), code.cliName());
@@ -73,7 +75,7 @@ class CodedLinkTest {
      */
     @Test
     void codedFerIsNotBelowOutage() {
-        LinkSettings l = alamoutiQpsk(1, 1024, 0, ChannelCode.CONV_R12, Crc.NONE, LlrMethod.MAXLOG);
+        LinkSettings l = alamoutiQpsk(1, 1024, 0, PuncturedCode.CONV_R12, Crc.NONE, LlrMethod.MAXLOG);
         BoundSettings b = BoundSettings.of(l);
         for (PointResult r : run(l, new double[] {6, 10, 14}, 60, 100_000)) {
             double[] ci = BinomialInterval.clopperPearson(r.counts().frameErrors(), r.counts().frames(), 0.999);
@@ -92,9 +94,9 @@ class CodedLinkTest {
      */
     @Test
     void severalFadingBlocksPerFrameSteepenTheSlope() {
-        LinkSettings slow = alamoutiQpsk(1, 250, 0, ChannelCode.CONV_R12, Crc.NONE, LlrMethod.MAXLOG);
+        LinkSettings slow = alamoutiQpsk(1, 250, 0, PuncturedCode.CONV_R12, Crc.NONE, LlrMethod.MAXLOG);
         int quarter = slow.slotsPerFrame() / 4 / 2 * 2;
-        LinkSettings fast = alamoutiQpsk(1, 250, quarter, ChannelCode.CONV_R12, Crc.NONE, LlrMethod.MAXLOG);
+        LinkSettings fast = alamoutiQpsk(1, 250, quarter, PuncturedCode.CONV_R12, Crc.NONE, LlrMethod.MAXLOG);
         assertEquals(4, fast.fadingBlocksPerFrame());
         double sSlow = slope(run(slow, new double[] {4, 8}, 60, 400_000));
         double sFast = slope(run(fast, new double[] {4, 8}, 60, 400_000));
@@ -108,7 +110,7 @@ class CodedLinkTest {
     /** CRC bookkeeping: every wrong frame is caught or counted as undetected; CRC-32 misses none here. */
     @Test
     void crcCounts() {
-        LinkSettings l = alamoutiQpsk(1, 256, 0, ChannelCode.CONV_R23, Crc.CRC32, LlrMethod.MAXLOG);
+        LinkSettings l = alamoutiQpsk(1, 256, 0, PuncturedCode.CONV_R23, Crc.CRC32, LlrMethod.MAXLOG);
         FrameCounters c = run(l, new double[] {6}, 100, 100_000).get(0).counts();
         assertTrue(c.frameErrors() >= 100);
         assertTrue(c.crcFailures() >= c.frameErrors() - c.undetectedErrors());
@@ -118,13 +120,13 @@ class CodedLinkTest {
     @Test
     void badCodingInput() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new LinkSettings(
-                Modulation.QPSK, SpaceTimeCodes.NONE, 1, 1, Fading.RAYLEIGH, 100, 0, Decoder.MF,
-                new FrameCoding(new FecScheme(Crc.NONE, ChannelCode.CONV_R12), Interleaving.BLOCK, 7,
+                Modulation.QPSK, SpaceTimeCodes.NONE, 1, 1, Fading.RAYLEIGH, 100, 0, Equaliser.MF,
+                new FrameCoding(new FecScheme(Crc.NONE, PuncturedCode.CONV_R12), Interleaving.BLOCK, 7,
                         LlrMethod.MAXLOG)));
         assertTrue(e.getMessage().startsWith("--interleaver-rows 7 does not divide the 212 coded bits per frame; "
                 + "valid: a divisor such as 2, 4"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> new LinkSettings(Modulation.QPSK, SpaceTimeCodes.NONE,
-                1, 1, Fading.RAYLEIGH, 100, 0, Decoder.MF,
+                1, 1, Fading.RAYLEIGH, 100, 0, Equaliser.MF,
                 new FrameCoding(FecScheme.NONE, Interleaving.RANDOM, 0, LlrMethod.MAXLOG)));
         assertTrue(e.getMessage().contains("needs a coded frame"), e.getMessage());
     }

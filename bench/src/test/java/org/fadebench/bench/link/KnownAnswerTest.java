@@ -20,11 +20,11 @@ import org.fadebench.bench.sweep.SweepEngine;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.Fading;
-import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.fec.conv.PuncturedCode;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.SpaceTimeCodeFile;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
@@ -73,7 +73,7 @@ class KnownAnswerTest {
 
     private static LinkSettings uncoded(Modulation m, SpaceTimeCode code, int rx, ChannelSpec channel, int frameBits,
                                         int coherence) {
-        return new LinkSettings(m, code, code.transmitAntennas(), rx, channel, frameBits, coherence, Decoder.MF,
+        return new LinkSettings(m, code, code.transmitAntennas(), rx, channel, frameBits, coherence, Equaliser.MF,
                 FrameCoding.NONE);
     }
 
@@ -102,10 +102,10 @@ class KnownAnswerTest {
     /** Alamouti 2x1 QPSK with conv-r12 + crc24, random interleaver, max-log LLRs: the lane decoder. */
     @Test
     void codedAlamoutiLaneDecoder() {
-        FrameCoding coding = new FrameCoding(new FecScheme(Crc.CRC24, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+        FrameCoding coding = new FrameCoding(new FecScheme(Crc.CRC24, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                 LlrMethod.MAXLOG);
         LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, RAYLEIGH, 200, 0,
-                Decoder.MF, coding);
+                Equaliser.MF, coding);
         assertPinned(new long[][] {
             {300, 83, 60000, 4406, 69000, 11901, 84, 0, 334580},
             {300, 22, 60000, 1082, 69000, 4384, 22, 0, 81362}}, sweep(link, new double[] {4, 8}, 300, 2));
@@ -203,7 +203,7 @@ class KnownAnswerTest {
                     imag:
                       - [0, "j"]
                 """, "sm2.yaml");
-        LinkSettings link = new LinkSettings(Modulation.QPSK, sm2, 2, 2, RAYLEIGH, 256, 0, Decoder.MMSE,
+        LinkSettings link = new LinkSettings(Modulation.QPSK, sm2, 2, 2, RAYLEIGH, 256, 0, Equaliser.MMSE,
                 FrameCoding.NONE);
         assertPinned(new long[][] {
             {600, 598, 153600, 15761, 76800, 14413, 0, 0, 556319},

@@ -11,11 +11,11 @@ import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.Draws;
 import org.fadebench.channel.Fading;
-import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.fec.conv.PuncturedCode;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
@@ -34,7 +34,7 @@ class PlanarPathTest {
     private static final int FRAMES = 40;
 
     private static LinkSettings alamouti(Modulation mod, int rx, ChannelSpec channel, int frameBits, int coherence,
-                                         Decoder decoder) {
+                                         Equaliser decoder) {
         return new LinkSettings(mod, SpaceTimeCodes.ALAMOUTI, 2, rx, channel, frameBits, coherence, decoder,
                 FrameCoding.NONE);
     }
@@ -47,19 +47,19 @@ class PlanarPathTest {
         }
         ChannelTrace trace = ChannelTrace.of("random", 2, 2, matrices);
         return Stream.of(
-                alamouti(Modulation.QAM16, 2, ChannelSpec.of(Fading.RAYLEIGH), 2048, 0, Decoder.MF),
+                alamouti(Modulation.QAM16, 2, ChannelSpec.of(Fading.RAYLEIGH), 2048, 0, Equaliser.MF),
                 // 50 code blocks, 3 per fading block: the last fading block is short
-                alamouti(Modulation.QPSK, 1, ChannelSpec.of(Fading.RAYLEIGH), 200, 6, Decoder.MF),
+                alamouti(Modulation.QPSK, 1, ChannelSpec.of(Fading.RAYLEIGH), 200, 6, Equaliser.MF),
                 alamouti(Modulation.QAM64, 3, ChannelSpec.of(Fading.RICIAN).withKFactor(3).withRxCorr(0.5), 600, 4,
-                        Decoder.MF),
-                alamouti(Modulation.BPSK, 2, ChannelSpec.of(Fading.NAKAGAMI).withNakagamiM(2), 128, 2, Decoder.MF),
+                        Equaliser.MF),
+                alamouti(Modulation.BPSK, 2, ChannelSpec.of(Fading.NAKAGAMI).withNakagamiM(2), 128, 2, Equaliser.MF),
                 alamouti(Modulation.QAM256, 2, ChannelSpec.of(Fading.RAYLEIGH).withCsiError(0.05), 1024, 0,
-                        Decoder.MF),
+                        Equaliser.MF),
                 alamouti(Modulation.QAM16, 2, ChannelSpec.of(Fading.RAYLEIGH).withPilots(4).withTxCorr(0.3), 512, 8,
-                        Decoder.MF),
-                alamouti(Modulation.QAM16, 2, ChannelSpec.of(Fading.RAYLEIGH), 512, 0, Decoder.MMSE),
-                alamouti(Modulation.QPSK, 2, ChannelSpec.of(Fading.RAYLEIGH).withTrace(trace), 256, 2, Decoder.ZF),
-                alamouti(Modulation.QAM16, 4, ChannelSpec.of(Fading.NONE), 512, 0, Decoder.MF));
+                        Equaliser.MF),
+                alamouti(Modulation.QAM16, 2, ChannelSpec.of(Fading.RAYLEIGH), 512, 0, Equaliser.MMSE),
+                alamouti(Modulation.QPSK, 2, ChannelSpec.of(Fading.RAYLEIGH).withTrace(trace), 256, 2, Equaliser.ZF),
+                alamouti(Modulation.QAM16, 4, ChannelSpec.of(Fading.NONE), 512, 0, Equaliser.MF));
     }
 
     @ParameterizedTest
@@ -94,10 +94,10 @@ class PlanarPathTest {
     @Test
     void otherLinksTakeTheGeneralPath() {
         ChannelSpec rayleigh = ChannelSpec.of(Fading.RAYLEIGH);
-        assertFalse(new LinkChain(alamouti(Modulation.QPSK, 2, rayleigh.withDoppler(0.01), 256, 0, Decoder.MF))
+        assertFalse(new LinkChain(alamouti(Modulation.QPSK, 2, rayleigh.withDoppler(0.01), 256, 0, Equaliser.MF))
                 .planar());
         assertFalse(new LinkChain(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2, rayleigh, 256, 0,
-                Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+                Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                 LlrMethod.MAXLOG))).planar());
         assertFalse(new LinkChain(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.G4, 4, 1, Fading.RAYLEIGH, 256, 0))
                 .planar());

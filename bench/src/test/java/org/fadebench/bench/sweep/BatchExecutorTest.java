@@ -19,11 +19,11 @@ import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.Fading;
-import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.fec.conv.PuncturedCode;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
@@ -124,7 +124,7 @@ class BatchExecutorTest {
     void codedLinkOverCorrelatedRicianFading() {
         ChannelSpec channel = ChannelSpec.of(Fading.RICIAN).withKFactor(3).withTxCorr(0.5).withPilots(2);
         LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, channel, 256, 32,
-                Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+                Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                         LlrMethod.MAXLOG));
         assertSameOutcome(link, new StopRules(20, 3000, 0, 0), new double[] {2, 6});
     }
@@ -144,7 +144,7 @@ class BatchExecutorTest {
         };
         for (ChannelSpec channel : channels) {
             LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, channel, 256, 0,
-                    Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC24, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+                    Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC24, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                             LlrMethod.MAXLOG));
             SweepPlan plan = new SweepPlan(link, new double[] {4, 8}, new StopRules(0, 500), 3, 50);
             SweepPlan copy = (SweepPlan) roundTrip(plan);

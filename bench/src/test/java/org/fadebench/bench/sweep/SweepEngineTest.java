@@ -8,11 +8,11 @@ import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.channel.Fading;
-import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
-import org.fadebench.coding.stbc.Decoder;
+import org.fadebench.coding.fec.conv.PuncturedCode;
+import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
@@ -54,9 +54,9 @@ class SweepEngineTest {
     @Test
     void codedBatchesAreWholeDecodeGroups() {
         LinkSettings coded = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, Fading.RAYLEIGH, 1024, 0,
-                Decoder.MF, new FrameCoding(new FecScheme(Crc.CRC16, ChannelCode.CONV_R12), Interleaving.RANDOM, 0,
+                Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                         LlrMethod.MAXLOG));
-        assertEquals(128, coded.framesDecodedTogether());
+        assertEquals(128, coded.lanes());
         assertEquals(128, SweepPlan.batchFrames(coded));
         assertEquals(SweepPlan.BATCH_SYMBOLS / LINK.symbolsPerFrame(), SweepPlan.batchFrames(LINK));
         StopRules rules = new StopRules(20, 100_000);

@@ -1,84 +1,68 @@
 package org.fadebench.coding.fec;
 
+import java.io.Serializable;
 import org.fadebench.modem.NamedChoice;
 
 /**
- * The channel codes selectable by name on the command line: none, or a terminated convolutional
- * code, punctured or not.
+ * A channel code: what a link applies to each frame's information bits (payload and CRC) before
+ * the interleaver and modulation, and undoes from the received LLRs. An open family: the codes
+ * selectable by name are listed in {@link ChannelCodes}; each family (none, convolutional, …)
+ * lives in its own class or package. A code is an immutable, serialisable description (a run plan
+ * holds it); {@link #newCoder} makes the per-thread worker that owns the buffers.
  *
- * <p>Puncturing patterns, rows = outputs (generator 133 first, then 171), columns = trellis steps:
- * rate 2/3 keeps [1 1; 1 0] over 2 steps, rate 3/4 keeps [1 1 0; 1 0 1] over 3 steps, as in the
- * IEEE 802.11a OFDM physical layer, 1999, Sec. 17.3.5.6 (from memory).
+ * <p>Decoders take frames in lanes: up to {@link #lanes} frames of the same length decoded at
+ * once, each frame's result the same as if it were decoded alone (a lane decoder that vectorises
+ * over frames gains from many; one that does not asks for one).
  */
-public enum ChannelCode implements NamedChoice {
-    /** Uncoded: the information bits are sent as they are. */
-    NONE("none", null),
-    /** The 64-state (133, 171) code, rate 1/2. */
-    CONV_R12("conv-r12", Puncturer.none(ConvolutionalCode.K7_133_171)),
-    /** The 64-state (133, 171) code punctured to rate 2/3. */
-    CONV_R23("conv-r23", new Puncturer(ConvolutionalCode.K7_133_171, new int[][] {{1, 1}, {1, 0}})),
-    /** The 64-state (133, 171) code punctured to rate 3/4. */
-    CONV_R34("conv-r34", new Puncturer(ConvolutionalCode.K7_133_171, new int[][] {{1, 1, 0}, {1, 0, 1}})),
-    /** The 4-state (5, 7) code, rate 1/2. */
-    CONV_SMALL("conv-small", Puncturer.none(ConvolutionalCode.K3_5_7));
+public interface ChannelCode extends NamedChoice, Serializable {
 
-    private final String cliName;
-    private final Puncturer puncturer;
+    /** The most lanes any code is given: a multiple of 16, which vectorises well. */
+    int MAX_LANES = 128;
 
-    ChannelCode(String cliName, Puncturer puncturer) {
-        this.cliName = cliName;
-        this.puncturer = puncturer;
-    }
+    /** Bytes of lane memory one coder may hold when its lanes are chosen ({@link #lanesWithin}). */
+    long LANE_BUDGET_BYTES = 32L << 20;
 
-    /** Name on the command line, e.g. {@code conv-r34}. */
+    /** Name on the command line, e.g. {@code conv-r34}: lower case, unique in a {@link ChannelCodes} registry. */
     @Override
-    public String cliName() {
-        return cliName;
-    }
+    String cliName();
 
-    /** Whether this is a convolutional code (false only for {@link #NONE}). */
-    public boolean isCoded() {
-        return puncturer != null;
+    /** Nominal code rate, without termination (1 for no code). */
+    double rate();
+
+    /** Bits sent for {@code infoBits} information bits, termination and puncturing included. */
+    int codedBits(int infoBits);
+
+    /** Bytes one lane of this code's decoder holds for frames of {@code infoBits}. */
+    long bytesPerLane(int infoBits);
+
+    /**
+     * Bytes of the buffers a {@link #newCoder coder} for frames of {@code infoBits} in {@code lanes}
+     * lanes allocates, for a memory check before a run.
+     */
+    long coderBytes(int infoBits, int lanes);
+
+    /**
+     * How many frames of {@code infoBits} a coder should decode together: by default as many lanes
+     * as {@link #lanesWithin} allows for {@link #bytesPerLane}.
+     */
+    default int lanes(int infoBits) {
+        return lanesWithin(bytesPerLane(infoBits));
     }
 
     /**
-     * The punctured convolutional code ({@link Puncturer#code()} gives the mother code).
+     * A worker for frames of {@code infoBits} information bits that encodes one frame at a time and
+     * decodes up to {@code lanes} frames at once, owning its buffers (one per thread).
      *
-     * @throws IllegalStateException for {@link #NONE}
+     * @throws IllegalArgumentException if {@code infoBits} or {@code lanes} is below 1
      */
-    public Puncturer puncturer() {
-        if (puncturer == null) {
-            throw new IllegalStateException("channel code 'none' has no convolutional code");
-        }
-        return puncturer;
-    }
-
-    /** Nominal code rate without tail: 1, 1/2, 2/3 or 3/4. */
-    public double rate() {
-        return puncturer == null ? 1.0 : puncturer.rate();
-    }
-
-    /** Bits sent for {@code k} information bits, tail and puncturing included. */
-    public int codedBits(int infoBits) {
-        return puncturer == null ? infoBits : puncturer.codedBits(infoBits);
-    }
+    LaneCoder newCoder(int infoBits, int lanes);
 
     /**
-     * Looks a channel code up by its command-line name, ignoring case.
-     *
-     * @throws IllegalArgumentException naming the valid choices when the name is unknown
+     * {@link #MAX_LANES}, or fewer so that the lanes hold at most {@link #LANE_BUDGET_BYTES} (a
+     * multiple of 16 where possible), at least 1.
      */
-    public static ChannelCode fromCliName(String name) {
-        return NamedChoice.find(values(), name, "channel code");
-    }
-
-    /** The valid command-line names, comma separated. */
-    public static String choices() {
-        return NamedChoice.list(values());
-    }
-
-    @Override
-    public String toString() {
-        return cliName;
+    static int lanesWithin(long bytesPerLane) {
+        long lanes = Math.min(MAX_LANES, Math.max(1, LANE_BUDGET_BYTES / bytesPerLane));
+        return (int) (lanes >= 16 ? lanes / 16 * 16 : lanes);
     }
 }

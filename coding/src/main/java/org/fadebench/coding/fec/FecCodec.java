@@ -2,14 +2,13 @@ package org.fadebench.coding.fec;
 
 /**
  * Encodes and decodes frames of a fixed payload size under one {@link FecScheme}: payload → CRC
- * appended → convolutional encoding with zero tail → puncturing → interleaving, and back from LLRs
- * with deinterleaving, depuncturing (zero LLRs), Viterbi decoding and the CRC check. Uncoded
- * schemes decide each bit from the sign of its LLR.
+ * appended → channel code ({@link LaneCoder}) → interleaving, and back from LLRs with
+ * deinterleaving, the channel code's lane decoder and the CRC check.
  *
- * <p>Decoding takes frames in batches of up to {@link #lanes()}, which the {@link ViterbiDecoder}
- * decodes together: {@link #receive} each frame into a lane, {@link #decodeReceived} them, read
- * each with {@link #decided}. {@link #decode(double[], int, byte[], int)} does all three for one
- * frame. Buffers are allocated once; encoding and decoding allocate nothing. Not thread-safe: one
+ * <p>Decoding takes frames in batches of up to {@link #lanes()}, which the lane decoder decodes
+ * together: {@link #receive} each frame into a lane, {@link #decodeReceived} them, read each with
+ * {@link #decided}. {@link #decode(double[], int, byte[], int)} does all three for one frame.
+ * Buffers are allocated once; encoding and decoding allocate nothing. Not thread-safe: one
  * instance per thread.
  */
 public final class FecCodec {
@@ -20,16 +19,10 @@ public final class FecCodec {
     private final int codedBits;
     private final int lanes;
     private final BitInterleaver interleaver;
-    private final Puncturer puncturer;
-    private final ViterbiDecoder decoder;
+    private final LaneCoder coder;
     private final byte[] info;
-    private final byte[] mother;
     private final byte[] sent;
     private final double[] received;
-    private final double[] motherLlr;
-    /** Uncoded schemes: the hard decisions of each lane. */
-    private final byte[][] hard;
-    private int receivedLanes;
 
     /**
      * Bytes the buffers of a codec for frames of {@code payloadBits} in {@code lanes} lanes take
@@ -39,12 +32,7 @@ public final class FecCodec {
     public static long bufferBytes(FecScheme scheme, int payloadBits, int lanes) {
         long info = scheme.infoBits(payloadBits);
         long coded = scheme.codedBits(payloadBits);
-        long bytes = info + coded + 8 * coded + 4 * coded;
-        if (!scheme.code().isCoded()) {
-            return bytes + lanes * ViterbiDecoder.rowBytes(info);
-        }
-        ConvolutionalCode code = scheme.code().puncturer().code();
-        return bytes + 9L * code.codedBits((int) info) + ViterbiDecoder.bufferBytes(code, (int) info, lanes);
+        return info + coded + 8 * coded + 4 * coded + scheme.code().coderBytes((int) info, lanes);
     }
 
     FecCodec(FecScheme scheme, int payloadBits, BitInterleaver interleaver, int lanes) {
@@ -64,23 +52,10 @@ public final class FecCodec {
                     + codedBits + " coded bits of " + payloadBits + " payload bits with " + scheme);
         }
         this.interleaver = interleaver;
+        this.coder = scheme.code().newCoder(infoBits, lanes);
         this.info = new byte[infoBits];
         this.sent = new byte[codedBits];
         this.received = new double[codedBits];
-        if (scheme.code().isCoded()) {
-            this.puncturer = scheme.code().puncturer();
-            ConvolutionalCode code = puncturer.code();
-            this.decoder = new ViterbiDecoder(code, infoBits, lanes);
-            this.mother = new byte[code.codedBits(infoBits)];
-            this.motherLlr = new double[mother.length];
-            this.hard = null;
-        } else {
-            this.puncturer = null;
-            this.decoder = null;
-            this.mother = null;
-            this.motherLlr = null;
-            this.hard = new byte[lanes][infoBits];
-        }
     }
 
     public FecScheme scheme() {
@@ -106,44 +81,23 @@ public final class FecCodec {
     public void encode(byte[] payload, int off, byte[] coded, int codedOff) {
         System.arraycopy(payload, off, info, 0, payloadBits);
         scheme.crc().append(info, 0, payloadBits);
-        if (puncturer == null) {
-            System.arraycopy(info, 0, sent, 0, infoBits);
-        } else {
-            puncturer.code().encode(info, 0, infoBits, mother, 0);
-            puncturer.puncture(mother, 0, infoBits, sent, 0);
-        }
+        coder.encode(info, 0, sent, 0);
         interleaver.interleave(sent, 0, coded, codedOff);
     }
 
     /**
      * Takes one frame's {@link #codedBits()} LLRs from {@code llr[off ..]} (L = ln P(0)/P(1),
-     * finite) into a lane of the next {@link #decodeReceived}: deinterleaved, depunctured.
+     * finite) into a lane of the next {@link #decodeReceived}, deinterleaved.
      */
     public void receive(int lane, double[] llr, int off) {
-        if (lane < 0 || lane >= lanes) {
-            throw new IllegalArgumentException("lane " + lane + "; valid lanes are 0 to " + (lanes - 1));
-        }
+        Lanes.checkLane(lane, lanes);
         interleaver.deinterleave(llr, off, received, 0);
-        if (puncturer == null) {
-            byte[] bits = hard[lane];
-            for (int i = 0; i < infoBits; i++) {
-                bits[i] = (byte) (received[i] < 0 ? 1 : 0);
-            }
-        } else {
-            puncturer.depuncture(received, 0, infoBits, motherLlr, 0);
-            decoder.load(lane, motherLlr, 0);
-        }
+        coder.load(lane, received, 0);
     }
 
     /** Decodes the frames received into lanes 0 .. {@code frames} − 1. */
     public void decodeReceived(int frames) {
-        if (frames < 1 || frames > lanes) {
-            throw new IllegalArgumentException("batch of " + frames + " frames; this codec takes 1 to " + lanes);
-        }
-        if (decoder != null) {
-            decoder.decode(frames);
-        }
-        receivedLanes = frames;
+        coder.decode(frames);
     }
 
     /**
@@ -153,14 +107,7 @@ public final class FecCodec {
      * @return whether the CRC of the decided bits checks (always true without a CRC)
      */
     public boolean decided(int lane, byte[] payload, int outOff) {
-        if (lane < 0 || lane >= receivedLanes) {
-            throw new IllegalArgumentException("lane " + lane + "; valid lanes are 0 to " + (receivedLanes - 1));
-        }
-        if (decoder != null) {
-            decoder.decided(lane, info, 0);
-        } else {
-            System.arraycopy(hard[lane], 0, info, 0, infoBits);
-        }
+        coder.decided(lane, info, 0);
         System.arraycopy(info, 0, payload, outOff, payloadBits);
         return scheme.crc().check(info, 0, infoBits);
     }

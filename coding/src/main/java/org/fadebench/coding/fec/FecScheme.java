@@ -5,8 +5,8 @@ import java.util.Objects;
 
 /**
  * What a link does to its payload before modulation: append a CRC, then encode with a channel code
- * (tail and puncturing included). Answers the sizes the link needs; {@link #newCodec} gives the
- * per-thread worker that does it.
+ * (termination and puncturing included). Answers the sizes the link needs; {@link #newCodec} gives
+ * the per-thread worker that does it.
  *
  * @param crc  the check appended to each payload
  * @param code the channel code applied to payload and check
@@ -14,7 +14,7 @@ import java.util.Objects;
 public record FecScheme(Crc crc, ChannelCode code) implements Serializable {
 
     /** No CRC, no channel code. */
-    public static final FecScheme NONE = new FecScheme(Crc.NONE, ChannelCode.NONE);
+    public static final FecScheme NONE = new FecScheme(Crc.NONE, ChannelCodes.NONE);
 
     public FecScheme {
         Objects.requireNonNull(crc, "crc");
@@ -36,26 +36,12 @@ public record FecScheme(Crc crc, ChannelCode code) implements Serializable {
         return (double) payloadBits / codedBits(payloadBits);
     }
 
-    /** The most frames a codec decodes together: a multiple of 16 lanes, which vectorises well. */
-    public static final int MAX_LANES = 128;
-
-    /** Bytes of decoder rows (soft inputs and decisions) allowed per codec when choosing lanes. */
-    static final long LANE_BUDGET_BYTES = 32L << 20;
-
     /**
-     * How many frames of {@code payloadBits} a link's codec should decode together: {@link #MAX_LANES},
-     * fewer for long frames so that the decoder's rows stay within {@value #LANE_BUDGET_BYTES}
-     * bytes (a multiple of 16 where possible), 1 for schemes without a convolutional code.
+     * How many frames of {@code payloadBits} a link's codec should decode together: the channel
+     * code's {@link ChannelCode#lanes lanes} for the payload and CRC.
      */
-    public int decodeLanes(int payloadBits) {
-        if (!code.isCoded()) {
-            return 1;
-        }
-        ConvolutionalCode mother = code.puncturer().code();
-        long bytesPerLane = 4L * mother.steps(infoBits(payloadBits))
-                * (mother.outputs() + (mother.states() + 31) / 32);
-        long lanes = Math.min(MAX_LANES, Math.max(1, LANE_BUDGET_BYTES / bytesPerLane));
-        return (int) (lanes >= 16 ? lanes / 16 * 16 : lanes);
+    public int lanes(int payloadBits) {
+        return code.lanes(infoBits(payloadBits));
     }
 
     /**

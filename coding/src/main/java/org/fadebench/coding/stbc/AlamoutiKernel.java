@@ -11,7 +11,7 @@ package org.fadebench.coding.stbc;
  * which equal (‖H‖²/√2) s_k + noise; estimates ŝ_k = √2 z_k / ‖H‖² and gain ‖H‖²/2 (S. M. Alamouti,
  * "A simple transmit diversity technique for wireless communications", IEEE JSAC 16(8), 1998).
  */
-public final class AlamoutiKernel implements Combiner {
+public final class AlamoutiKernel implements Combiner, PlanarKernel {
 
     private static final double INV_SQRT2 = Math.sqrt(0.5);
 
@@ -51,7 +51,8 @@ public final class AlamoutiKernel implements Combiner {
      * eight (slot τ, antenna t, real and imaginary parts in plane 2·(2τ + t) and the next), element
      * i of each plane belonging to block i. Blocks {@code from .. from+blocks)} are encoded.
      */
-    public static void encode(double[][] s, int from, int blocks, double[][] x) {
+    @Override
+    public void encode(double[][] s, int from, int blocks, double[][] x) {
         // slot 1: (s1, s2)/√2 in planes 0-3; slot 2: (-s2*, s1*)/√2 in planes 4-7
         spread(s[0], from, blocks, x[0], x[6], 1.0);
         spread(s[1], from, blocks, x[1], x[7], -1.0);
@@ -123,6 +124,7 @@ public final class AlamoutiKernel implements Combiner {
      * Im ŝ2), element i of each plane belonging to block i. Blocks {@code from .. from+blocks)} are
      * combined. No gains are written: every symbol's is ‖Ĥ‖²/2, as the interleaved combine writes.
      */
+    @Override
     public void combine(double[][] y, int from, int blocks, double[][] est) {
         final int end = from + blocks;
         // the sums of the interleaved combine, one loop per part and antenna (short loops vectorise);

@@ -47,13 +47,13 @@ public final class LinearEqualiser implements Combiner {
     private final double[] errorScale;
     private final double[] gain;
 
-    private LinearEqualiser(SpaceTimeCode code, int nr, double lambda, Decoder decoder) {
+    private LinearEqualiser(SpaceTimeCode code, int nr, double lambda, Equaliser equaliser) {
         this.channel = new EffectiveChannel(code, nr);
         this.k = code.symbolsPerBlock();
         this.lambda = lambda;
         int t = code.slotsPerBlock();
         if (lambda == 0 && t * nr < k) {
-            throw new IllegalArgumentException("decoder " + decoder.cliName() + " cannot separate the "
+            throw new IllegalArgumentException("decoder " + equaliser.cliName() + " cannot separate the "
                     + k + " symbols of code " + code.name() + " from " + t + " slot(s) x " + nr
                     + " receive antenna(s); valid: at least " + ((k + t - 1) / t)
                     + " receive antennas, or decoder mf or mmse with n0 > 0");
@@ -71,7 +71,7 @@ public final class LinearEqualiser implements Combiner {
 
     /** Zero forcing: (FᵀF)⁻¹Fᵀy; needs T·Nr ≥ K. */
     public static LinearEqualiser zeroForcing(SpaceTimeCode code, int nr) {
-        return new LinearEqualiser(code, nr, 0.0, Decoder.ZF);
+        return new LinearEqualiser(code, nr, 0.0, Equaliser.ZF);
     }
 
     /**
@@ -80,7 +80,7 @@ public final class LinearEqualiser implements Combiner {
      */
     public static LinearEqualiser mmse(SpaceTimeCode code, int nr, double n0) {
         checkNoise(n0);
-        return new LinearEqualiser(code, nr, n0, Decoder.MMSE);
+        return new LinearEqualiser(code, nr, n0, Equaliser.MMSE);
     }
 
     static void checkNoise(double n0) {

@@ -2,6 +2,7 @@ package org.fadebench.coding.stbc;
 
 import java.io.Serializable;
 import java.util.Objects;
+import java.util.Optional;
 
 /**
  * A linear space-time block code in dispersion-matrix form: K complex symbols s_k = a_k + j b_k are
@@ -148,24 +149,38 @@ public final class SpaceTimeCode implements Serializable {
     }
 
     /**
-     * The combiner for {@code nr} receive antennas and the given decoder. For an orthogonal code
+     * The combiner for {@code nr} receive antennas and the given equaliser. For an orthogonal code
      * ZF and MMSE give exactly the matched filter's estimates and gains, so the matched filter
-     * (the fast kernel where there is one) serves every decoder.
+     * (the fast kernel where there is one) serves every equaliser.
      *
      * @param n0 noise density (complex noise variance per receive entry); read by MMSE only, which
      *           needs it finite and not negative, and a new combiner per value
      * @throws IllegalArgumentException for nr < 1, a bad n0 for MMSE, or ZF on a code it cannot
      *                                  separate with nr antennas
      */
-    public Combiner newCombiner(int nr, Decoder decoder, double n0) {
+    public Combiner newCombiner(int nr, Equaliser equaliser, double n0) {
         checkReceiveAntennas(nr);
-        if (decoder == Decoder.MMSE) {
+        if (equaliser == Equaliser.MMSE) {
             LinearEqualiser.checkNoise(n0);
         }
-        if (decoder == Decoder.MF || orthogonal) {
+        if (equaliser == Equaliser.MF || orthogonal) {
             return newCombiner(nr);
         }
-        return decoder == Decoder.ZF ? LinearEqualiser.zeroForcing(this, nr) : LinearEqualiser.mmse(this, nr, n0);
+        return equaliser == Equaliser.ZF ? LinearEqualiser.zeroForcing(this, nr) : LinearEqualiser.mmse(this, nr, n0);
+    }
+
+    /**
+     * The kernel that runs this code on planar arrays for {@code nr} receive antennas (see
+     * {@link PlanarKernel}), or empty when the code has none (every code but Alamouti's today).
+     */
+    public Optional<PlanarKernel> newPlanarKernel(int nr) {
+        checkReceiveAntennas(nr);
+        return hasPlanarKernel() ? Optional.of(new AlamoutiKernel(nr)) : Optional.empty();
+    }
+
+    /** Whether {@link #newPlanarKernel} gives a kernel. */
+    public boolean hasPlanarKernel() {
+        return kernel == Kernel.ALAMOUTI;
     }
 
     static void checkReceiveAntennas(int nr) {

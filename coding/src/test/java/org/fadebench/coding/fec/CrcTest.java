@@ -10,7 +10,7 @@ import java.util.Random;
 import java.util.zip.CRC32;
 import org.junit.jupiter.api.Test;
 
-class CrcTest {
+public class CrcTest {
 
     private static final byte[] CHECK_MESSAGE = "123456789".getBytes(StandardCharsets.US_ASCII);
 
@@ -118,7 +118,7 @@ class CrcTest {
         assertThrows(IllegalArgumentException.class, () -> Crc.CRC32.check(new byte[10], 0, 10));
     }
 
-    static byte[] randomBits(Random random, int n) {
+    public static byte[] randomBits(Random random, int n) {
         byte[] bits = new byte[n];
         for (int i = 0; i < n; i++) {
             bits[i] = (byte) random.nextInt(2);

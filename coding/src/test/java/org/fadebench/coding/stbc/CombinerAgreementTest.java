@@ -40,13 +40,13 @@ class CombinerAgreementTest {
         double[] s = TestCodes.gaussians(rnd, 4 * blocks, 1);
         double[] x = new double[8 * blocks];
         AlamoutiKernel.encode(s, 0, blocks, x, 0);
+        AlamoutiKernel kernel = new AlamoutiKernel(nr);
         double[][] xPlanes = new double[8][from + blocks];
-        AlamoutiKernel.encode(planes(s, 4, from), from, blocks, xPlanes);
+        kernel.encode(planes(s, 4, from), from, blocks, xPlanes);
         assertPlanesEqual(x, xPlanes, from);
 
         double[] h = TestCodes.gaussians(rnd, 4 * nr, Math.sqrt(0.5));
         double[] y = TestCodes.gaussians(rnd, 4 * nr * blocks, 1.3);
-        AlamoutiKernel kernel = new AlamoutiKernel(nr);
         kernel.setChannel(h);
         double[] est = new double[4 * blocks];
         kernel.combine(y, 0, blocks, est, new double[2 * blocks], 0);

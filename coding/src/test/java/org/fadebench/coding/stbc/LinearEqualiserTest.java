@@ -61,14 +61,14 @@ class LinearEqualiserTest {
     @Test
     void factoryPicksTheEqualiserForNonOrthogonalCodes() {
         for (SpaceTimeCode code : SpaceTimeCodes.all()) {
-            for (Decoder d : Decoder.values()) {
+            for (Equaliser d : Equaliser.values()) {
                 assertEquals(code.newCombiner(2).getClass(), code.newCombiner(2, d, 0.1).getClass(), code.name());
             }
         }
         SpaceTimeCode sm = TestCodes.spatialMultiplexing2x2();
-        assertInstanceOf(MatchedFilterCombiner.class, sm.newCombiner(2, Decoder.MF, 0.1));
-        assertInstanceOf(LinearEqualiser.class, sm.newCombiner(2, Decoder.ZF, 0.1));
-        assertInstanceOf(LinearEqualiser.class, sm.newCombiner(2, Decoder.MMSE, 0.1));
+        assertInstanceOf(MatchedFilterCombiner.class, sm.newCombiner(2, Equaliser.MF, 0.1));
+        assertInstanceOf(LinearEqualiser.class, sm.newCombiner(2, Equaliser.ZF, 0.1));
+        assertInstanceOf(LinearEqualiser.class, sm.newCombiner(2, Equaliser.MMSE, 0.1));
     }
 
     /** Without noise ZF inverts the effective channel exactly; MMSE with n0 = 0 is ZF. */
@@ -311,18 +311,18 @@ class LinearEqualiserTest {
     void badConfigurationsAreRejectedWithTheValidChoices() {
         SpaceTimeCode sm = TestCodes.spatialMultiplexing2x2();
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> sm.newCombiner(1, Decoder.ZF, 0.1));
+                () -> sm.newCombiner(1, Equaliser.ZF, 0.1));
         assertTrue(e.getMessage().contains("decoder zf") && e.getMessage().contains("sm2")
                 && e.getMessage().contains("at least 2 receive antennas"), e.getMessage());
         assertThrows(IllegalArgumentException.class, () -> LinearEqualiser.mmse(sm, 1, 0.0));
         LinearEqualiser.mmse(sm, 1, 0.1);
         for (double bad : new double[] {-0.1, Double.NaN, Double.POSITIVE_INFINITY}) {
-            e = assertThrows(IllegalArgumentException.class, () -> sm.newCombiner(2, Decoder.MMSE, bad));
+            e = assertThrows(IllegalArgumentException.class, () -> sm.newCombiner(2, Equaliser.MMSE, bad));
             assertTrue(e.getMessage().contains("n0") && e.getMessage().contains("valid"), e.getMessage());
             assertThrows(IllegalArgumentException.class,
-                    () -> SpaceTimeCodes.ALAMOUTI.newCombiner(2, Decoder.MMSE, bad));
+                    () -> SpaceTimeCodes.ALAMOUTI.newCombiner(2, Equaliser.MMSE, bad));
         }
-        for (Decoder d : Decoder.values()) {
+        for (Equaliser d : Equaliser.values()) {
             e = assertThrows(IllegalArgumentException.class, () -> SpaceTimeCodes.G3.newCombiner(0, d, 0.1));
             assertTrue(e.getMessage().contains("receive antennas"), e.getMessage());
         }
@@ -331,11 +331,11 @@ class LinearEqualiserTest {
 
     @Test
     void decoderNames() {
-        assertEquals(Decoder.ZF, Decoder.fromCliName(" ZF "));
-        assertEquals(Decoder.MMSE, Decoder.fromCliName("mmse"));
-        assertEquals(Decoder.MF, Decoder.fromCliName("mf"));
-        assertEquals("mf, zf, mmse", Decoder.choices());
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> Decoder.fromCliName("ml"));
+        assertEquals(Equaliser.ZF, Equaliser.fromCliName(" ZF "));
+        assertEquals(Equaliser.MMSE, Equaliser.fromCliName("mmse"));
+        assertEquals(Equaliser.MF, Equaliser.fromCliName("mf"));
+        assertEquals("mf, zf, mmse", Equaliser.choices());
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> Equaliser.fromCliName("ml"));
         assertEquals("unknown decoder 'ml'; valid: mf, zf, mmse", e.getMessage());
     }
 }

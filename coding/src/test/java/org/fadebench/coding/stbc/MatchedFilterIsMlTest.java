@@ -49,7 +49,7 @@ class MatchedFilterIsMlTest {
         int bps = qam.bitsPerSymbol();
         int order = qam.modulation().order();
         ExhaustiveMl ml = new ExhaustiveMl(code, qam, nr);
-        Combiner mf = code.newCombiner(nr, Decoder.MF, n0);
+        Combiner mf = code.newCombiner(nr, Equaliser.MF, n0);
         double[] point = new double[2];
         int symbolErrors = 0;
         for (int blk = 0; blk < BLOCKS; blk++) {

@@ -1,4 +1,4 @@
-package org.fadebench.coding.fec;
+package org.fadebench.coding.fec.conv;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 

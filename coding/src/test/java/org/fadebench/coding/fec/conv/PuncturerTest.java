@@ -1,8 +1,9 @@
-package org.fadebench.coding.fec;
+package org.fadebench.coding.fec.conv;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
+import org.fadebench.coding.fec.CrcTest;
 import org.junit.jupiter.api.Test;
 
 class PuncturerTest {
@@ -12,26 +13,25 @@ class PuncturerTest {
     /**
      * Coded lengths, tail included: rate 1/2 sends 2 (k+6); rate 2/3 sends 3 bits per 2 steps and
      * rate 3/4 4 bits per 3 steps, the pattern running on through the tail (arithmetic on the
-     * patterns in {@link ChannelCode}).
+     * patterns in {@link PuncturedCode}).
      */
     @Test
     void codedBitsFollowThePatterns() {
-        assertEquals(2 * 106, ChannelCode.CONV_R12.codedBits(100));
-        assertEquals(2 * 103, ChannelCode.CONV_SMALL.codedBits(101));
-        assertEquals(3 * 51, ChannelCode.CONV_R23.codedBits(96));       // 102 steps = 51 periods
-        assertEquals(3 * 51 + 2, ChannelCode.CONV_R23.codedBits(97));   // one step into a period: 2 bits
-        assertEquals(4 * 34, ChannelCode.CONV_R34.codedBits(96));       // 102 steps = 34 periods
-        assertEquals(4 * 34 + 2, ChannelCode.CONV_R34.codedBits(97));
-        assertEquals(4 * 34 + 3, ChannelCode.CONV_R34.codedBits(98));
-        assertEquals(96, ChannelCode.NONE.codedBits(96));
-        assertEquals(0.75, ChannelCode.CONV_R34.rate(), 0);
-        assertEquals(2.0 / 3, ChannelCode.CONV_R23.rate(), 1e-15);
+        assertEquals(2 * 106, PuncturedCode.CONV_R12.codedBits(100));
+        assertEquals(2 * 103, PuncturedCode.CONV_SMALL.codedBits(101));
+        assertEquals(3 * 51, PuncturedCode.CONV_R23.codedBits(96));       // 102 steps = 51 periods
+        assertEquals(3 * 51 + 2, PuncturedCode.CONV_R23.codedBits(97));   // one step into a period: 2 bits
+        assertEquals(4 * 34, PuncturedCode.CONV_R34.codedBits(96));       // 102 steps = 34 periods
+        assertEquals(4 * 34 + 2, PuncturedCode.CONV_R34.codedBits(97));
+        assertEquals(4 * 34 + 3, PuncturedCode.CONV_R34.codedBits(98));
+        assertEquals(0.75, PuncturedCode.CONV_R34.rate(), 0);
+        assertEquals(2.0 / 3, PuncturedCode.CONV_R23.rate(), 1e-15);
     }
 
     /** Puncturing keeps exactly the pattern's positions; depuncturing puts them back, zeros elsewhere. */
     @Test
     void depuncturingInvertsPuncturing() {
-        Puncturer p = ChannelCode.CONV_R34.puncturer();
+        Puncturer p = PuncturedCode.CONV_R34.puncturer();
         int k = 20;
         byte[] mother = CrcTest.randomBits(new java.util.Random(2), K7.codedBits(k));
         byte[] sent = new byte[p.codedBits(k)];
@@ -50,7 +50,7 @@ class PuncturerTest {
         }
         assertEquals(sent.length + 1, next);
         assertEquals("[1 1 0; 1 0 1]", p.toString());
-        assertEquals("[1 1; 1 0]", ChannelCode.CONV_R23.puncturer().toString());
+        assertEquals("[1 1; 1 0]", PuncturedCode.CONV_R23.puncturer().toString());
     }
 
     @Test
@@ -70,14 +70,5 @@ class PuncturerTest {
         assertEquals("puncturing pattern has no columns; need a period of at least 1",
                 assertThrows(IllegalArgumentException.class,
                         () -> new Puncturer(K7, new int[][] {{}, {}})).getMessage());
-    }
-
-    @Test
-    void channelCodeNames() {
-        assertEquals("none, conv-r12, conv-r23, conv-r34, conv-small", ChannelCode.choices());
-        assertEquals(ChannelCode.CONV_R34, ChannelCode.fromCliName("Conv-R34"));
-        assertEquals("unknown channel code 'turbo'; valid: none, conv-r12, conv-r23, conv-r34, conv-small",
-                assertThrows(IllegalArgumentException.class, () -> ChannelCode.fromCliName("turbo")).getMessage());
-        assertThrows(IllegalStateException.class, ChannelCode.NONE::puncturer);
     }
 }

@@ -3,10 +3,11 @@ package org.fadebench.coding.stbc;
 import org.fadebench.modem.NamedChoice;
 
 /**
- * The linear decoders a link can use in front of per-symbol slicing. For an orthogonal code all
+ * The linear equalisers a link can use in front of per-symbol slicing or demapping (the option
+ * {@code --decoder}; not to be confused with a channel code's decoder). For an orthogonal code all
  * three give the same estimates and gains; they differ only for non-orthogonal codes.
  */
-public enum Decoder implements NamedChoice {
+public enum Equaliser implements NamedChoice {
     /** Matched filter: z = Fᵀy divided by diag(FᵀF) ({@link MatchedFilterCombiner}). */
     MF("mf"),
     /** Zero forcing: (FᵀF)⁻¹Fᵀy ({@link LinearEqualiser#zeroForcing}). */
@@ -16,7 +17,7 @@ public enum Decoder implements NamedChoice {
 
     private final String cliName;
 
-    Decoder(String cliName) {
+    Equaliser(String cliName) {
         this.cliName = cliName;
     }
 
@@ -27,11 +28,11 @@ public enum Decoder implements NamedChoice {
     }
 
     /**
-     * Looks a decoder up by its command-line name, ignoring case.
+     * Looks an equaliser up by its command-line name ({@code --decoder}), ignoring case.
      *
      * @throws IllegalArgumentException naming the valid choices when the name is unknown
      */
-    public static Decoder fromCliName(String name) {
+    public static Equaliser fromCliName(String name) {
         return NamedChoice.find(values(), name, "decoder");
     }
 

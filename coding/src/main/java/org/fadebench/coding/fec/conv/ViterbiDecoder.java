@@ -1,6 +1,7 @@
-package org.fadebench.coding.fec;
+package org.fadebench.coding.fec.conv;
 
 import java.util.Arrays;
+import org.fadebench.coding.fec.Lanes;
 
 /**
  * Soft-input Viterbi decoder for a zero-tail terminated {@link ConvolutionalCode}: maximum
@@ -70,12 +71,7 @@ public final class ViterbiDecoder {
         long steps = code.steps(infoBits);
         long rows = steps * code.outputs() + (1L << code.outputs()) + 2L * code.states()
                 + steps * ((code.states() + 31) / 32);
-        return rows * rowBytes(4L * lanes) + lanes * rowBytes(infoBits) + 4L * lanes + 8L * code.states();
-    }
-
-    /** A Java array of {@code payload} bytes with its 16-byte header, rounded up to 8 bytes. */
-    static long rowBytes(long payload) {
-        return 16 + (payload + 7) / 8 * 8;
+        return rows * Lanes.rowBytes(4L * lanes) + lanes * Lanes.rowBytes(infoBits) + 4L * lanes + 8L * code.states();
     }
 
     /**
@@ -115,6 +111,14 @@ public final class ViterbiDecoder {
         this.decided = new byte[lanes][infoBits];
     }
 
+    /**
+     * Bytes of the rows one lane holds for frames of {@code infoBits}: a 4-byte soft input per
+     * mother-code bit and a 4-byte decision word per 32 states, per trellis step.
+     */
+    public static long bytesPerLane(ConvolutionalCode code, int infoBits) {
+        return 4L * code.steps(infoBits) * (code.outputs() + (code.states() + 31) / 32);
+    }
+
     /** The code this decoder decodes. */
     public ConvolutionalCode code() {
         return code;
@@ -144,7 +148,7 @@ public final class ViterbiDecoder {
      * @throws IllegalArgumentException if the lane is out of range or an LLR is not finite
      */
     public void load(int lane, double[] llr, int off) {
-        checkLane(lane, lanes);
+        Lanes.checkLane(lane, lanes);
         final int n = soft.length;
         double peak = 0;
         for (int i = 0; i < n; i++) {
@@ -166,9 +170,7 @@ public final class ViterbiDecoder {
      * @throws IllegalArgumentException if {@code frames} is not from 1 to {@link #lanes()}
      */
     public void decode(int frames) {
-        if (frames < 1 || frames > lanes) {
-            throw new IllegalArgumentException("batch of " + frames + " frames; this decoder takes 1 to " + lanes);
-        }
+        Lanes.checkFrames(frames, lanes);
         start(frames);
         for (int t = 0; t < steps; t++) {
             branchMetrics(t, frames);
@@ -183,7 +185,7 @@ public final class ViterbiDecoder {
      * byte, to {@code out[outOff ..]}.
      */
     public void decided(int lane, byte[] out, int outOff) {
-        checkLane(lane, decodedLanes);
+        Lanes.checkLane(lane, decodedLanes);
         System.arraycopy(decided[lane], 0, out, outOff, infoBits);
     }
 
@@ -192,12 +194,6 @@ public final class ViterbiDecoder {
         load(0, llr, off);
         decode(1);
         decided(0, out, outOff);
-    }
-
-    private static void checkLane(int lane, int count) {
-        if (lane < 0 || lane >= count) {
-            throw new IllegalArgumentException("lane " + lane + "; valid lanes are 0 to " + (count - 1));
-        }
     }
 
     private void start(int n) {

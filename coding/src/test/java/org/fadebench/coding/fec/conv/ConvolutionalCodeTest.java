@@ -1,9 +1,10 @@
-package org.fadebench.coding.fec;
+package org.fadebench.coding.fec.conv;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
+import org.fadebench.coding.fec.CrcTest;
 import org.junit.jupiter.api.Test;
 
 class ConvolutionalCodeTest {
@@ -61,10 +62,10 @@ class ConvolutionalCodeTest {
      */
     @Test
     void freeDistances() {
-        assertEquals(10, TrellisSearch.freeDistance(ChannelCode.CONV_R12.puncturer()));
-        assertEquals(5, TrellisSearch.freeDistance(ChannelCode.CONV_SMALL.puncturer()));
-        assertEquals(6, TrellisSearch.freeDistance(ChannelCode.CONV_R23.puncturer()));
-        assertEquals(5, TrellisSearch.freeDistance(ChannelCode.CONV_R34.puncturer()));
+        assertEquals(10, TrellisSearch.freeDistance(PuncturedCode.CONV_R12.puncturer()));
+        assertEquals(5, TrellisSearch.freeDistance(PuncturedCode.CONV_SMALL.puncturer()));
+        assertEquals(6, TrellisSearch.freeDistance(PuncturedCode.CONV_R23.puncturer()));
+        assertEquals(5, TrellisSearch.freeDistance(PuncturedCode.CONV_R34.puncturer()));
     }
 
     /**

@@ -1,4 +1,4 @@
-package org.fadebench.coding.fec;
+package org.fadebench.coding.fec.conv;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Arrays;
 import java.util.Random;
+import org.fadebench.coding.fec.CrcTest;
 import org.junit.jupiter.api.Test;
 
 class ViterbiDecoderTest {
@@ -24,10 +25,10 @@ class ViterbiDecoderTest {
         Random random = new Random(20261201L);
         for (int k = 1; k <= 10; k++) {
             for (int trial = 0; trial < 20; trial++) {
-                checkAgainstExhaustiveSearch(ChannelCode.CONV_SMALL.puncturer(), k, random);
+                checkAgainstExhaustiveSearch(PuncturedCode.CONV_SMALL.puncturer(), k, random);
             }
         }
-        for (ChannelCode code : new ChannelCode[] {ChannelCode.CONV_R12, ChannelCode.CONV_R23, ChannelCode.CONV_R34}) {
+        for (PuncturedCode code : new PuncturedCode[] {PuncturedCode.CONV_R12, PuncturedCode.CONV_R23, PuncturedCode.CONV_R34}) {
             for (int k : new int[] {1, 8, 12}) {
                 for (int trial = 0; trial < 10; trial++) {
                     checkAgainstExhaustiveSearch(code.puncturer(), k, random);
@@ -77,10 +78,8 @@ class ViterbiDecoderTest {
     @Test
     void noiseFreeDecodingAtEveryRate() {
         Random random = new Random(3);
-        for (ChannelCode channelCode : ChannelCode.values()) {
-            if (!channelCode.isCoded()) {
-                continue;
-            }
+        for (PuncturedCode channelCode : new PuncturedCode[] {PuncturedCode.CONV_R12, PuncturedCode.CONV_R23,
+            PuncturedCode.CONV_R34, PuncturedCode.CONV_SMALL}) {
             Puncturer punctured = channelCode.puncturer();
             ConvolutionalCode code = punctured.code();
             for (int k : new int[] {1, 2, 3, 50, 517, 600}) {

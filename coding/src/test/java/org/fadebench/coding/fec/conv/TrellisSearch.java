@@ -1,4 +1,4 @@
-package org.fadebench.coding.fec;
+package org.fadebench.coding.fec.conv;
 
 import java.util.Arrays;
 import java.util.PriorityQueue;

@@ -1,4 +1,6 @@
-package org.fadebench.coding.fec;
+package org.fadebench.coding.fec.conv;
+
+import java.io.Serializable;
 
 /**
  * Periodic puncturing of a terminated convolutional code. The pattern has one row per code output
@@ -6,7 +8,9 @@ package org.fadebench.coding.fec;
  * repeats over the whole coded stream, tail included, starting with column 0 at the first step.
  * Depuncturing puts a zero LLR (no information) where a bit was removed.
  */
-public final class Puncturer {
+public final class Puncturer implements Serializable {
+
+    private static final long serialVersionUID = 1L;
 
     private final ConvolutionalCode code;
     private final int period;

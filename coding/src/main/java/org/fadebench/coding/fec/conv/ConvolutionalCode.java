@@ -1,5 +1,6 @@
-package org.fadebench.coding.fec;
+package org.fadebench.coding.fec.conv;
 
+import java.io.Serializable;
 import java.util.Arrays;
 
 /**
@@ -15,7 +16,9 @@ import java.util.Arrays;
  * the newest in the top bit (bit K-2). With input u in state s the register is
  * {@code (u << (K-1)) | s} and the next state is that register shifted right by one.
  */
-public final class ConvolutionalCode {
+public final class ConvolutionalCode implements Serializable {
+
+    private static final long serialVersionUID = 1L;
 
     /** Largest constraint length: decisions of one trellis step fit in one 64-bit word. */
     public static final int MAX_CONSTRAINT_LENGTH = 7;

@@ -1,0 +1,111 @@
+package org.fadebench.bench.link;
+
+import org.fadebench.channel.Draws;
+import org.fadebench.coding.fec.Crc;
+import org.fadebench.coding.fec.FecCodec;
+import org.fadebench.modem.LlrMethod;
+import org.fadebench.modem.QamConstellation;
+
+/**
+ * Coded frames ({@link InterleavedTransmission}): payload bits → CRC, channel code, interleaver →
+ * QAM → … → LLRs → deinterleaver, channel decoder, CRC. Frames are sent one by one and decoded in
+ * lanes, up to {@link LinkSettings#lanes()} frames at once; each frame's outcome is the same as if
+ * it were decoded alone. A frame's raw symbol errors are the hard decisions on its coded bits'
+ * LLRs against the bits sent.
+ */
+final class CodedPath implements FramePath {
+
+    private final InterleavedTransmission transmission;
+    private final QamConstellation constellation;
+    private final LlrMethod llrMethod;
+    private final FecCodec codec;
+    /** Whether frames carry a CRC (else no frame counts as a CRC failure or undetected). */
+    private final boolean withCrc;
+    private final int frameBits;
+    private final int symbols;
+    private final int bitsPerSymbol;
+    private final int lanes;
+    private final int codedLength;
+    /** Row l: the payload sent in lane l of the group being decoded. */
+    private final byte[][] payload;
+    /** Per lane: raw symbol errors. */
+    private final int[] rawSymbolErrors;
+    private final byte[] payloadOut;
+    private final byte[] codedBits;
+    private final double[] llr;
+
+    CodedPath(LinkSettings settings, InterleavedTransmission transmission) {
+        FrameCoding coding = settings.coding();
+        this.transmission = transmission;
+        this.constellation = settings.modulation().constellation();
+        this.llrMethod = coding.llr();
+        this.frameBits = settings.frameBits();
+        this.symbols = settings.symbolsPerFrame();
+        this.bitsPerSymbol = settings.modulation().bitsPerSymbol();
+        this.lanes = settings.lanes();
+        this.withCrc = coding.scheme().crc() != Crc.NONE;
+        this.codec = coding.scheme().newCodec(frameBits, coding.interleaver(frameBits), lanes);
+        this.codedLength = codec.codedBits();
+        this.payload = new byte[lanes][frameBits];
+        this.rawSymbolErrors = new int[lanes];
+        this.payloadOut = new byte[frameBits];
+        this.codedBits = new byte[symbols * bitsPerSymbol];
+        this.llr = new double[symbols * bitsPerSymbol];
+    }
+
+    /** Bytes the constructor allocates: payloads of every lane, bits and LLRs sent, and the codec's buffers. */
+    static long bufferBytes(LinkSettings settings) {
+        int lanes = settings.lanes();
+        long sentBits = (long) settings.symbolsPerFrame() * settings.modulation().bitsPerSymbol();
+        return (lanes + 1L) * settings.frameBits() + 9 * sentBits
+                + FecCodec.bufferBytes(settings.coding().scheme(), settings.frameBits(), lanes);
+    }
+
+    @Override
+    public void runFrames(Draws draws, double n0, long first, int count, FrameCounters counters) {
+        for (int done = 0; done < count; done += lanes) {
+            int group = Math.min(lanes, count - done);
+            for (int lane = 0; lane < group; lane++) {
+                send(draws, n0, first + done + lane, lane);
+            }
+            codec.decodeReceived(group);
+            for (int lane = 0; lane < group; lane++) {
+                count(lane, counters);
+            }
+        }
+    }
+
+    /** One frame up to its LLRs, which go into a lane of the codec; counts raw symbol errors. */
+    private void send(Draws draws, double n0, long frame, int lane) {
+        byte[] bits = payload[lane];
+        draws.fillBits(bits, 0, frameBits);
+        codec.encode(bits, 0, codedBits, 0);
+        // padding up to whole code blocks: random bits, sent and ignored
+        draws.fillBits(codedBits, codedLength, codedBits.length - codedLength);
+        constellation.map(codedBits, 0, transmission.symbols, 0, symbols);
+        transmission.transmit(draws, n0, frame);
+        constellation.demap(llrMethod, transmission.estimates, transmission.gain, 0, n0, llr, 0, symbols);
+        codec.receive(lane, llr, 0);
+        int symbolErrors = 0;
+        for (int s = 0, b = 0; s < symbols; s++) {
+            int wrong = 0;
+            for (int j = 0; j < bitsPerSymbol; j++, b++) {
+                wrong |= codedBits[b] ^ (llr[b] < 0 ? 1 : 0);
+            }
+            symbolErrors += wrong;
+        }
+        rawSymbolErrors[lane] = symbolErrors;
+    }
+
+    /** Compares a decoded lane with its payload and adds the frame to the counters. */
+    private void count(int lane, FrameCounters counters) {
+        boolean crcOk = codec.decided(lane, payloadOut, 0);
+        byte[] bits = payload[lane];
+        int bitErrors = 0;
+        for (int i = 0; i < frameBits; i++) {
+            bitErrors += bits[i] ^ payloadOut[i];
+        }
+        counters.addFrame(frameBits, bitErrors, symbols, rawSymbolErrors[lane], withCrc && !crcOk,
+                withCrc && crcOk && bitErrors > 0);
+    }
+}

@@ -1,0 +1,62 @@
+package org.fadebench.bench.link;
+
+import org.fadebench.channel.Draws;
+import org.fadebench.channel.LinkChannel;
+import org.fadebench.coding.stbc.PlanarKernel;
+import org.fadebench.coding.stbc.SpaceTimeCode;
+
+/**
+ * {@link Transmission} on planes (see {@link PlanarKernel}): symbols, grid, received signal and
+ * estimates are kept as one array per real or imaginary part of each symbol, slot and antenna of a
+ * code block, indexed by code block, so that encoder, channel and combiner run as short
+ * unit-stride loops. It needs a channel that stays constant within a fading block.
+ */
+final class PlanarTransmission extends Transmission {
+
+    private final PlanarKernel kernel;
+    /** 2K planes: Re and Im of each symbol of a code block. */
+    final double[][] symbols;
+    /** 2K planes: Re and Im of each symbol estimate. */
+    final double[][] estimates;
+    private final double[][] grid;
+    private final double[][] received;
+
+    PlanarTransmission(LinkSettings settings, LinkChannel channel, PlanarKernel kernel) {
+        super(settings, channel);
+        SpaceTimeCode code = settings.code();
+        int blocks = settings.blocksPerFrame();
+        int slots = code.slotsPerBlock();
+        this.kernel = kernel;
+        this.symbols = new double[2 * code.symbolsPerBlock()][blocks];
+        this.estimates = new double[2 * code.symbolsPerBlock()][blocks];
+        this.grid = new double[2 * slots * settings.transmitAntennas()][blocks];
+        this.received = new double[2 * slots * settings.receiveAntennas()][blocks];
+    }
+
+    /** Bytes of the planes the constructor allocates. */
+    static long bufferBytes(LinkSettings settings) {
+        SpaceTimeCode code = settings.code();
+        long planes = 4L * code.symbolsPerBlock()
+                + 2L * code.slotsPerBlock() * (settings.transmitAntennas() + settings.receiveAntennas());
+        return 8 * planes * settings.blocksPerFrame();
+    }
+
+    @Override
+    void sendBlocks(Draws draws, double n0, int first, int blocks) {
+        kernel.encode(symbols, first, blocks, grid);
+        channel.transmit(grid, first, n0, draws, received);
+        channel.estimate(n0, draws, hHat);
+        kernel.setChannel(hHat);
+        kernel.combine(received, first, blocks, estimates);
+    }
+
+    @Override
+    void copyEstimates(double[] out) {
+        int parts = estimates.length;
+        for (int i = 0; i < estimates[0].length; i++) {
+            for (int j = 0; j < parts; j++) {
+                out[parts * i + j] = estimates[j][i];
+            }
+        }
+    }
+}

@@ -1,0 +1,38 @@
+package org.fadebench.coding.fec;
+
+/**
+ * The per-thread worker of a {@link ChannelCode} for frames of a fixed number of information bits:
+ * encodes frames one by one, and decodes them in lanes: {@link #load} each frame's LLRs into a
+ * lane, {@link #decode} the lanes loaded, read each lane's decisions with {@link #decided}. All
+ * buffers are allocated when the coder is made; encoding and decoding allocate nothing. Not
+ * thread-safe.
+ */
+public interface LaneCoder {
+
+    /**
+     * Encodes the information bits at {@code info[off ..]} into the code's
+     * {@link ChannelCode#codedBits coded bits} at {@code coded[codedOff ..]}.
+     */
+    void encode(byte[] info, int off, byte[] coded, int codedOff);
+
+    /**
+     * Puts one frame's coded-bit LLRs (L = ln P(0)/P(1), finite), from {@code llr[off ..]} in the
+     * order {@link #encode} wrote the bits, into a lane for the next {@link #decode}.
+     *
+     * @throws IllegalArgumentException if the lane is out of range
+     */
+    void load(int lane, double[] llr, int off);
+
+    /**
+     * Decodes lanes 0 .. {@code frames} − 1, as loaded.
+     *
+     * @throws IllegalArgumentException if {@code frames} is not from 1 to the coder's lanes
+     */
+    void decode(int frames);
+
+    /**
+     * Copies the decided information bits of a lane of the last {@link #decode}, one per byte, to
+     * {@code info[off ..]}.
+     */
+    void decided(int lane, byte[] info, int off);
+}

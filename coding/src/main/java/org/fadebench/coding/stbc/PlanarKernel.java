@@ -1,0 +1,25 @@
+package org.fadebench.coding.stbc;
+
+/**
+ * A space-time code's encoder and matched-filter combiner on planar arrays: one array (plane) per
+ * real or imaginary part of each symbol, slot and antenna of a code block, element i of every
+ * plane belonging to code block i. Symbols and estimates take 2K planes (Re s_k, Im s_k for
+ * k = 0 .. K−1), the transmit grid 2·T·Mt (slot τ, antenna t: planes 2·(τ·Mt + t) and the next)
+ * and the received signal 2·T·Nr (slot τ, receive antenna r: planes 2·(τ·Nr + r) and the next).
+ * Every loop then runs over code blocks with unit stride, which the JIT vectorises. A planar
+ * kernel gives exactly the numbers of the code's interleaved encoder and combiner; it writes no
+ * gains (an orthogonal code's gain is the same for every symbol of a fading block). Made by
+ * {@link SpaceTimeCode#newPlanarKernel}, for the codes that have one; implementations own their
+ * work buffers and do not allocate after construction.
+ */
+public interface PlanarKernel {
+
+    /** Encodes code blocks {@code from .. from+blocks)} of the symbol planes into the grid planes. */
+    void encode(double[][] symbols, int from, int blocks, double[][] grid);
+
+    /** Takes the channel matrix (Nr x Mt, interleaved complex, row-major) for the blocks that follow. */
+    void setChannel(double[] h);
+
+    /** Combines code blocks {@code from .. from+blocks)} of the received planes into estimate planes. */
+    void combine(double[][] received, int from, int blocks, double[][] estimates);
+}
