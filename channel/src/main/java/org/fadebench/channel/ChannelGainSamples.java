@@ -42,6 +42,11 @@ public final class ChannelGainSamples {
 
     /** The fraction of draws with ‖H‖²_F strictly below {@code x}. */
     public double cdf(double x) {
+        return (double) countBelow(x) / sorted.length;
+    }
+
+    /** The number of draws with ‖H‖²_F strictly below {@code x}. */
+    public int countBelow(double x) {
         int lo = 0;
         int hi = sorted.length;
         while (lo < hi) {
@@ -52,7 +57,7 @@ public final class ChannelGainSamples {
                 hi = mid;
             }
         }
-        return (double) lo / sorted.length;
+        return lo;
     }
 
     /** Number of draws. */

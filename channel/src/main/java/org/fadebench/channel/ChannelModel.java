@@ -47,6 +47,15 @@ public interface ChannelModel extends Serializable {
         return 0.0;
     }
 
+    /**
+     * The diversity order one transmit-receive pair gives at high SNR (an orthogonal space-time code
+     * in this fading has Mt·Nr times it), or NaN where it cannot be said: no fading (no finite
+     * slope), a trace, full correlation matrices (which may be singular).
+     */
+    default double diversityPerPair() {
+        return Double.NaN;
+    }
+
     /** Whether this is i.i.d. Rayleigh block fading, the channel for which the outage bounds have closed forms. */
     default boolean iidRayleigh() {
         return false;

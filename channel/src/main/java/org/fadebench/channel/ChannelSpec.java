@@ -238,6 +238,11 @@ public final class ChannelSpec implements Serializable {
         return new LinkChannel(nr, mt, maxSlotsPerBlock, model.newBlockChannel(nr, mt), csi);
     }
 
+    /** True when the receiver decodes with a channel error of fixed variance ({@code --csi-error}). */
+    public boolean fixedCsiError() {
+        return csiError != null && csiError > 0;
+    }
+
     /**
      * Whether the channel is i.i.d. Rayleigh block fading (whatever the receiver's CSI): the channel
      * for which the outage bounds have closed forms.

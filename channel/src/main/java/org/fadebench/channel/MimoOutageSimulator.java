@@ -1,5 +1,7 @@
 package org.fadebench.channel;
 
+import java.util.concurrent.CancellationException;
+import java.util.function.BooleanSupplier;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_ZDRM;
 import org.ejml.dense.row.decompose.chol.CholeskyDecompositionInner_ZDRM;
@@ -66,6 +68,16 @@ public final class MimoOutageSimulator {
      * draws for the same seed, so an SNR sweep is monotone and reproducible.
      */
     public OutageEstimate estimate(double snrDb, double spectralEfficiency, int draws, long seed) {
+        return estimate(snrDb, spectralEfficiency, draws, seed, () -> false);
+    }
+
+    /**
+     * As {@link #estimate(double, double, int, long)}, polling {@code stop} every 1024 draws.
+     *
+     * @throws CancellationException when {@code stop} turns true
+     */
+    public OutageEstimate estimate(double snrDb, double spectralEfficiency, int draws, long seed,
+                                   BooleanSupplier stop) {
         OutageBounds.checkSnrDb(snrDb);
         OutageBounds.checkSpectralEfficiency(spectralEfficiency);
         OutageBounds.checkDraws(draws);
@@ -73,6 +85,9 @@ public final class MimoOutageSimulator {
         Draws stream = Draws.of(seed);
         int outages = 0;
         for (int i = 0; i < draws; i++) {
+            if ((i & 1023) == 0 && stop.getAsBoolean()) {
+                throw new CancellationException("outage bound stopped");
+            }
             fading.draw(stream, nr, mt, h.data);
             if (currentBits(snr) < spectralEfficiency) {
                 outages++;

@@ -29,4 +29,10 @@ public record NakagamiChannel(double m) implements ChannelModel {
     public String describe() {
         return name() + " m=" + m;
     }
+
+    /** m: ‖h‖² of one pair is Gamma(m), so Mt·Nr pairs give Gamma(m·Mt·Nr) (common practice, no source). */
+    @Override
+    public double diversityPerPair() {
+        return m;
+    }
 }

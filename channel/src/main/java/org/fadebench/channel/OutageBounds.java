@@ -1,5 +1,6 @@
 package org.fadebench.channel;
 
+import java.util.function.BooleanSupplier;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.special.Gamma;
 
@@ -39,12 +40,18 @@ public final class OutageBounds {
      */
     public static OutageEstimate mimoOutage(double snrDb, int mt, int nr, double spectralEfficiency,
                                             int draws, long seed) {
+        return mimoOutage(snrDb, mt, nr, spectralEfficiency, draws, seed, () -> false);
+    }
+
+    /** As above, the Monte Carlo estimate polling {@code stop} (see {@link MimoOutageSimulator}). */
+    public static OutageEstimate mimoOutage(double snrDb, int mt, int nr, double spectralEfficiency,
+                                            int draws, long seed, BooleanSupplier stop) {
         checkDraws(draws);
         if (Math.min(mt, nr) == 1) {
             return OutageEstimate.exact(stbcOutage(snrDb, mt, nr, 1.0, spectralEfficiency));
         }
         return new MimoOutageSimulator(new RayleighFading(), mt, nr)
-                .estimate(snrDb, spectralEfficiency, draws, seed);
+                .estimate(snrDb, spectralEfficiency, draws, seed, stop);
     }
 
     /**

@@ -57,6 +57,14 @@ public final class OutageEstimate {
         return draws == 0;
     }
 
+    /**
+     * True when the value says something: exact, or counted with a 95 % interval no wider than the
+     * value itself. A count of no outages never is (its interval reaches from 0 to above 0).
+     */
+    public boolean resolved() {
+        return isExact() || upper() - lower() <= probability;
+    }
+
     /** Lower end of the 95 % interval. */
     public double lower() {
         return lower(0.95);
@@ -82,6 +90,17 @@ public final class OutageEstimate {
             throw new IllegalArgumentException("confidence must be in (0, 1), got " + confidence);
         }
         return IntervalUtils.getWilsonScoreInterval(draws, outages, confidence);
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof OutageEstimate e && Double.compare(probability, e.probability) == 0
+                && outages == e.outages && draws == e.draws;
+    }
+
+    @Override
+    public int hashCode() {
+        return java.util.Objects.hash(probability, outages, draws);
     }
 
     @Override

@@ -11,6 +11,16 @@ public interface ScatteredChannel extends ChannelModel {
 
     SpatialCorrelation correlation();
 
+    /**
+     * 1 for Rayleigh and Rician fading (K delays the asymptote but does not change it), also with
+     * exponential correlation |r| < 1, which keeps the correlation matrices full rank; NaN with full
+     * correlation matrices, which may be singular.
+     */
+    @Override
+    default double diversityPerPair() {
+        return correlation().matrices() == null ? 1.0 : Double.NaN;
+    }
+
     @Override
     default void check(int nr, int mt) {
         correlation().check(nr, mt);

@@ -1,26 +1,26 @@
 package org.fadebench.bench.analysis;
 
-/**
- * The three outage bounds at one SNR.
- *
- * @param mimo        MIMO outage: the exact value, or the fraction of draws in outage
- * @param mimoLow     lower end of its 95 % Wilson interval (= {@code mimo} when exact)
- * @param mimoHigh    upper end of that interval (= {@code mimo} when exact)
- * @param mimoOutages draws in outage (0 when exact)
- * @param mimoDraws   draws counted (0 when exact)
- * @param stbc        outage of the space-time code with Gaussian symbols
- * @param qam         outage of the space-time code with the link's QAM symbols
- */
-public record BoundPoint(double snrDb, double mimo, double mimoLow, double mimoHigh, int mimoOutages,
-                         int mimoDraws, double stbc, double qam) {
+import java.util.Objects;
+import org.fadebench.channel.OutageEstimate;
 
-    /** True when the MIMO value is a closed form rather than a count. */
-    public boolean mimoExact() {
-        return mimoDraws == 0;
+/**
+ * The three outage bounds at one SNR, each exact or counted over channel draws with its 95 %
+ * Wilson interval.
+ *
+ * @param mimo MIMO outage with Gaussian inputs
+ * @param stbc outage of the space-time code with Gaussian symbols
+ * @param qam  outage of the space-time code with the link's QAM symbols
+ */
+public record BoundPoint(double snrDb, OutageEstimate mimo, OutageEstimate stbc, OutageEstimate qam) {
+
+    public BoundPoint {
+        Objects.requireNonNull(mimo, "mimo");
+        Objects.requireNonNull(stbc, "stbc");
+        Objects.requireNonNull(qam, "qam");
     }
 
-    /** The value of one bound. */
-    public double value(Bound bound) {
+    /** The estimate of one bound. */
+    public OutageEstimate estimate(Bound bound) {
         switch (bound) {
             case MIMO:
                 return mimo;
@@ -29,5 +29,19 @@ public record BoundPoint(double snrDb, double mimo, double mimoLow, double mimoH
             default:
                 return qam;
         }
+    }
+
+    /** The value of one bound (a count of 0 included). */
+    public double value(Bound bound) {
+        return estimate(bound).probability();
+    }
+
+    /**
+     * The value of one bound where it may be shown, NaN where a count cannot resolve it (its
+     * interval is wider than the value; see {@link OutageEstimate#resolved()}).
+     */
+    public double shown(Bound bound) {
+        OutageEstimate e = estimate(bound);
+        return e.resolved() ? e.probability() : Double.NaN;
     }
 }

@@ -1,5 +1,7 @@
 package org.fadebench.bench.analysis;
 
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -9,35 +11,40 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.function.DoubleUnaryOperator;
 import org.fadebench.bench.sweep.PointResult;
+import org.fadebench.channel.OutageEstimate;
 
 /**
  * What a sweep says against its bounds: the simulated diversity order, the SNR at a target FER,
  * and for each outage bound its own SNR at that target, its diversity order and the gap in dB
- * (simulated SNR − bound SNR; positive when the link needs more SNR than the bound). Every
- * "not reached" is an empty optional here and {@code null} in {@link #toJson()}.
+ * (simulated SNR − bound SNR; positive when the link needs more SNR than the bound). Where a
+ * curve has no SNR at the target, {@link Reach} says why.
  *
  * @param diversity      weighted fit of the simulated FER tail (see {@link DiversityFit#ofPoints})
  * @param snrDbAtTarget  where the simulated FER falls to the target (see {@link TargetCrossing#ofPoints})
+ * @param linkReach      {@link Reach#IN_RANGE} or {@link Reach#LINK_NOT_REACHED}
+ * @param curves         the bounds at the swept SNR points
  * @param bounds         the same for each outage bound
  */
 public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Optional<DiversityFit> diversity,
-                           OptionalDouble snrDbAtTarget, BoundSettings boundSettings,
+                           OptionalDouble snrDbAtTarget, Reach linkReach, BoundCurves curves,
                            Map<Bound, BoundAnalysis> bounds) {
 
     /**
      * One bound against the target.
      *
-     * @param snrDbAtTarget closed forms: exact crossing by bisection; the Monte Carlo MIMO curve:
-     *                      interpolated between the evaluated points
-     * @param diversity     equal-weight fit of the bound's tail (for the Monte Carlo MIMO curve, over
+     * @param snrDbAtTarget closed forms: exact crossing by bisection, inside or outside the swept
+     *                      range; Monte Carlo counts: interpolated between resolved swept points
+     * @param reach         where it crosses, or why it has no crossing
+     * @param diversity     equal-weight fit of the bound's tail (for a Monte Carlo count, over
      *                      points with at least {@code minErrors} outages)
      */
-    public record BoundAnalysis(OptionalDouble snrDbAtTarget, Optional<DiversityFit> diversity) {
+    public record BoundAnalysis(OptionalDouble snrDbAtTarget, Reach reach, Optional<DiversityFit> diversity) {
     }
 
     public LinkAnalysis {
         TargetCrossing.checkTarget(targetFer);
-        Objects.requireNonNull(boundSettings, "boundSettings");
+        Objects.requireNonNull(curves, "curves");
+        Objects.requireNonNull(linkReach, "linkReach");
         bounds = Map.copyOf(bounds);
     }
 
@@ -60,24 +67,58 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
         double[] snrDb = curves.snrDb();
         Map<Bound, BoundAnalysis> bounds = new EnumMap<>(Bound.class);
         for (Bound b : Bound.values()) {
-            double[] values = curves.values(b);
-            OptionalDouble crossing;
-            if (b == Bound.MIMO && !s.mimoExact()) {
-                crossing = TargetCrossing.interpolate(snrDb, values, targetFer);
-                for (int i = 0; i < values.length; i++) {
-                    if (curves.points().get(i).mimoOutages() < minErrors) {
-                        values[i] = Double.NaN;
-                    }
-                }
-            } else {
-                crossing = TargetCrossing.ofClosedForm(closedForm(s, b), targetFer);
-            }
-            bounds.put(b, new BoundAnalysis(crossing, DiversityFit.ofCurve(snrDb, values, tailPoints)));
+            bounds.put(b, s.exact(b) ? closedForm(s, b, snrDb, targetFer, tailPoints)
+                    : counted(curves, b, targetFer, minErrors, tailPoints));
         }
-        return new LinkAnalysis(targetFer, minErrors, tailPoints, diversity, snrDbAtTarget, s, bounds);
+        return new LinkAnalysis(targetFer, minErrors, tailPoints, diversity, snrDbAtTarget,
+                snrDbAtTarget.isPresent() ? Reach.IN_RANGE : Reach.LINK_NOT_REACHED, curves, bounds);
     }
 
-    /** Simulated SNR minus the bound's SNR at the target FER; empty when either is not reached. */
+    private static BoundAnalysis closedForm(BoundSettings s, Bound b, double[] snrDb, double targetFer,
+                                            int tailPoints) {
+        double[] values = new double[snrDb.length];
+        DoubleUnaryOperator f = s.closedForm(b);
+        for (int i = 0; i < snrDb.length; i++) {
+            values[i] = f.applyAsDouble(snrDb[i]);
+        }
+        Optional<DiversityFit> fit = DiversityFit.ofCurve(snrDb, values, tailPoints);
+        if (b == Bound.QAM && s.fullRate()) {
+            return new BoundAnalysis(OptionalDouble.empty(), Reach.ofFullRate(s), fit);
+        }
+        OptionalDouble crossing = TargetCrossing.ofClosedForm(f, targetFer);
+        double low = Arrays.stream(snrDb).min().orElseThrow();
+        double high = Arrays.stream(snrDb).max().orElseThrow();
+        Reach reach = crossing.isPresent() && crossing.getAsDouble() >= low && crossing.getAsDouble() <= high
+                ? Reach.IN_RANGE : Reach.OUTSIDE_RANGE;
+        return new BoundAnalysis(crossing, reach, fit);
+    }
+
+    /** A Monte Carlo bound: crossing and fit only where its count resolves it. */
+    private static BoundAnalysis counted(BoundCurves curves, Bound b, double targetFer, int minErrors,
+                                         int tailPoints) {
+        double[] snrDb = curves.snrDb();
+        double[] shown = curves.shown(b);
+        OptionalDouble crossing = TargetCrossing.interpolate(snrDb, shown, targetFer);
+        double[] fitted = new double[snrDb.length];
+        for (int i = 0; i < fitted.length; i++) {
+            fitted[i] = curves.points().get(i).estimate(b).outages() < minErrors ? Double.NaN : shown[i];
+        }
+        Reach reach = Reach.IN_RANGE;
+        if (crossing.isEmpty()) {
+            int[] order = SnrOrder.ascending(snrDb);
+            double first = shown[order[0]];
+            double last = shown[order[order.length - 1]];
+            reach = first <= targetFer ? Reach.BELOW_RANGE : last > targetFer ? Reach.ABOVE_RANGE : Reach.UNRESOLVED;
+        }
+        return new BoundAnalysis(crossing, reach, DiversityFit.ofCurve(snrDb, fitted, tailPoints));
+    }
+
+    /** The settings of the bounds. */
+    public BoundSettings boundSettings() {
+        return curves.settings();
+    }
+
+    /** Simulated SNR minus the bound's SNR at the target FER; empty when either has none. */
     public OptionalDouble gapDb(Bound bound) {
         OptionalDouble boundDb = bounds.get(bound).snrDbAtTarget();
         return snrDbAtTarget.isPresent() && boundDb.isPresent()
@@ -85,48 +126,69 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
                 : OptionalDouble.empty();
     }
 
+    /** Why a gap is missing: the bound's reason, else the link's; null when there is a gap. */
+    public Reach gapReach(Bound bound) {
+        Reach r = bounds.get(bound).reach();
+        return gapDb(bound).isPresent() ? null : !r.hasSnr() ? r : linkReach;
+    }
+
     /**
-     * The analysis as plain maps, lists, numbers and nulls, in a fixed key order, for results.json
+     * The bounds for results.json as plain maps, lists, numbers and nulls, in a fixed key order
      * (e.g. {@code objectMapper.valueToTree(analysis.toJson())}):
      * <pre>
-     * target_fer, snr_db_at_target, diversity_order {value, standard_error, ci_low, ci_high,
-     *   confidence, snr_db_used}, gap_db {mimo, stbc, qam}, fit {min_errors, tail_points},
-     * bounds {spectral_efficiency, information, mimo_exact, mimo_draws, mimo_seed,
-     *   mimo|stbc|qam {snr_db_at_target, diversity_order}}
+     * spectral_efficiency, information, fading_blocks, seed, fit {min_errors, tail_points},
+     * mimo|stbc|qam {method, draws, snr_db_at_target, reach, note, diversity_order},
+     * points [{snr_db, mimo|stbc|qam {value, ci_low, ci_high, outages, draws, resolved}}]
      * </pre>
-     * A value not reached, and an interval a closed form does not have, is null.
+     * {@code method} is {@code exact} or {@code monte_carlo}; {@code value} is null where a count
+     * does not resolve the bound ({@code resolved} false), and the interval and counts are null for
+     * a closed form. The simulated curve's own numbers are in the run's {@code summary}.
      */
     public Map<String, Object> toJson() {
+        BoundSettings s = boundSettings();
         Map<String, Object> root = new LinkedHashMap<>();
-        root.put("target_fer", targetFer);
-        root.put("snr_db_at_target", orNull(snrDbAtTarget));
-        root.put("diversity_order", json(diversity));
-        Map<String, Object> gaps = new LinkedHashMap<>();
-        for (Bound b : Bound.values()) {
-            gaps.put(b.key(), orNull(gapDb(b)));
-        }
-        root.put("gap_db", gaps);
+        root.put("spectral_efficiency", s.spectralEfficiency());
+        root.put("information", s.information().cliName());
+        root.put("fading_blocks", s.fadingBlocks());
+        root.put("seed", s.mimoSeed());
         Map<String, Object> fit = new LinkedHashMap<>();
         fit.put("min_errors", minErrors);
         fit.put("tail_points", tailPoints);
         root.put("fit", fit);
-        Map<String, Object> b = new LinkedHashMap<>();
-        b.put("spectral_efficiency", boundSettings.spectralEfficiency());
-        b.put("information", boundSettings.information().cliName());
-        b.put("mimo_exact", boundSettings.mimoExact());
-        b.put("mimo_draws", boundSettings.mimoExact() ? null : boundSettings.mimoDraws());
-        b.put("mimo_seed", boundSettings.mimoExact() ? null : boundSettings.mimoSeed());
         for (Bound bound : Bound.values()) {
+            BoundAnalysis a = bounds.get(bound);
             Map<String, Object> one = new LinkedHashMap<>();
-            one.put("snr_db_at_target", orNull(bounds.get(bound).snrDbAtTarget()));
-            one.put("diversity_order", json(bounds.get(bound).diversity()));
-            b.put(bound.key(), one);
+            one.put("method", s.exact(bound) ? "exact" : "monte_carlo");
+            one.put("draws", s.exact(bound) ? null : curves.points().get(0).estimate(bound).draws());
+            one.put("snr_db_at_target", orNull(a.snrDbAtTarget()));
+            one.put("reach", a.reach().key());
+            one.put("note", a.reach() == Reach.IN_RANGE ? null : a.reach().words());
+            one.put("diversity_order", json(a.diversity()));
+            root.put(bound.key(), one);
         }
-        root.put("bounds", b);
+        List<Object> points = new ArrayList<>();
+        for (BoundPoint p : curves.points()) {
+            Map<String, Object> one = new LinkedHashMap<>();
+            one.put("snr_db", p.snrDb());
+            for (Bound bound : Bound.values()) {
+                OutageEstimate e = p.estimate(bound);
+                Map<String, Object> v = new LinkedHashMap<>();
+                v.put("value", e.resolved() ? e.probability() : null);
+                v.put("ci_low", e.isExact() ? null : e.lower());
+                v.put("ci_high", e.isExact() ? null : e.upper());
+                v.put("outages", e.isExact() ? null : e.outages());
+                v.put("draws", e.isExact() ? null : e.draws());
+                v.put("resolved", e.resolved());
+                one.put(bound.key(), v);
+            }
+            points.add(one);
+        }
+        root.put("points", points);
         return root;
     }
 
-    private static Map<String, Object> json(Optional<DiversityFit> fit) {
+    /** A fit as a map, or null. */
+    static Map<String, Object> json(Optional<DiversityFit> fit) {
         if (fit.isEmpty()) {
             return null;
         }
@@ -141,18 +203,7 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
         return m;
     }
 
-    private static Double orNull(OptionalDouble v) {
+    static Double orNull(OptionalDouble v) {
         return v.isPresent() ? v.getAsDouble() : null;
-    }
-
-    private static DoubleUnaryOperator closedForm(BoundSettings s, Bound b) {
-        switch (b) {
-            case MIMO:
-                return snrDb -> s.mimoOutage(snrDb).probability();
-            case STBC:
-                return s::stbcOutage;
-            default:
-                return s::qamOutage;
-        }
     }
 }

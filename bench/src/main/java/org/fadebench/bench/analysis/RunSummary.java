@@ -1,77 +1,105 @@
 package org.fadebench.bench.analysis;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
 
 /**
- * What a sweep says in a few numbers: diversity order, the SNR at the target FER and, where the
- * outage bounds apply, the gap to each of them. The {@code summary} object of results.json and the
- * lines printed after the table.
+ * What a sweep says in a few numbers: diversity order (with a warning when the curve is not yet
+ * on its asymptote), the SNR at the target FER and, where the outage bounds apply, the gap to each
+ * of them. The {@code summary} object of results.json and the lines printed after the table.
  *
- * @param analysis the comparison with the bounds, or null where no bounds apply to the channel
+ * @param asymptote  the diversity order the link tends to, where it can be said
+ * @param warning    why the fitted order is not to be quoted yet, or empty
+ * @param analysis   the comparison with the bounds, or null where there are none
+ * @param noBounds   with no analysis: why (e.g. "no outage bounds for this channel")
  */
 public record RunSummary(double targetFer, Optional<DiversityFit> diversity, OptionalDouble snrDbAtTarget,
-                         LinkAnalysis analysis) {
+                         Optional<AsymptoticDiversity> asymptote, Optional<String> warning, LinkAnalysis analysis,
+                         String noBounds) {
 
-    /** Summarises a sweep; {@code curves} may be null when no bounds apply. */
-    public static RunSummary of(List<PointResult> points, BoundCurves curves, double targetFer) {
-        if (curves != null) {
-            LinkAnalysis a = LinkAnalysis.of(points, curves, targetFer, DiversityFit.DEFAULT_MIN_ERRORS,
-                    DiversityFit.DEFAULT_TAIL_POINTS);
-            return new RunSummary(targetFer, a.diversity(), a.snrDbAtTarget(), a);
-        }
-        return new RunSummary(targetFer,
-                DiversityFit.ofPoints(points, DiversityFit.DEFAULT_MIN_ERRORS, DiversityFit.DEFAULT_TAIL_POINTS),
-                TargetCrossing.ofPoints(points, targetFer), null);
+    /** The words when a channel has no outage bounds. */
+    public static final String NO_BOUNDS = "no outage bounds for this channel";
+
+    /** Summarises a sweep of {@code link}; {@code curves} may be null, and {@code noBounds} then says why. */
+    public static RunSummary of(LinkSettings link, List<PointResult> points, BoundCurves curves, double targetFer,
+                                String noBounds) {
+        LinkAnalysis a = curves == null ? null : LinkAnalysis.of(points, curves, targetFer,
+                DiversityFit.DEFAULT_MIN_ERRORS, DiversityFit.DEFAULT_TAIL_POINTS);
+        Optional<DiversityFit> diversity = a != null ? a.diversity()
+                : DiversityFit.ofPoints(points, DiversityFit.DEFAULT_MIN_ERRORS, DiversityFit.DEFAULT_TAIL_POINTS);
+        Optional<AsymptoticDiversity> asymptote = AsymptoticDiversity.of(link);
+        Optional<String> warning = diversity.flatMap(f -> asymptote.isPresent()
+                ? asymptote.get().warning(f, points) : AsymptoticDiversity.warningWithoutAsymptote(f, points));
+        return new RunSummary(targetFer, diversity, a != null ? a.snrDbAtTarget() : TargetCrossing.ofPoints(points,
+                targetFer), asymptote, warning, a, a == null ? noBounds : null);
     }
 
-    /** The gap in dB to a bound, empty when not reached or no bounds apply. */
+    /** The gap in dB to a bound, empty when either side has no SNR at the target or no bounds apply. */
     public OptionalDouble gapDb(Bound bound) {
         return analysis == null ? OptionalDouble.empty() : analysis.gapDb(bound);
     }
 
-    /** The {@code summary} object: numbers, or null for what was not reached. */
+    /** The {@code summary} object: numbers, or null for what has none, with the reason beside it. */
     public Map<String, Object> toJson() {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("diversity_order", diversity.map(DiversityFit::order).orElse(null));
         m.put("diversity_order_ci", diversity.filter(DiversityFit::hasInterval)
                 .map(f -> List.of(f.low(), f.high())).orElse(null));
+        m.put("diversity_snr_db_used", diversity.map(DiversityFit::snrDbUsed).orElse(null));
+        m.put("diversity_asymptote", asymptote.map(AsymptoticDiversity::order).orElse(null));
+        m.put("diversity_asymptote_basis", asymptote.map(AsymptoticDiversity::basis).orElse(null));
+        m.put("diversity_warning", warning.orElse(null));
         m.put("target_fer", targetFer);
         m.put("snr_db_at_target", snrDbAtTarget.isPresent() ? snrDbAtTarget.getAsDouble() : null);
+        m.put("target_note", snrDbAtTarget.isPresent() ? null : Reach.LINK_NOT_REACHED.words());
         Map<String, Object> gaps = new LinkedHashMap<>();
+        Map<String, Object> notes = new LinkedHashMap<>();
         for (Bound b : Bound.values()) {
             OptionalDouble g = gapDb(b);
             gaps.put(b.key(), g.isPresent() ? g.getAsDouble() : null);
+            notes.put(b.key(), analysis == null ? noBounds : g.isPresent() ? null : analysis.gapReach(b).words());
         }
         m.put("gap_db", gaps);
+        m.put("gap_note", notes);
         return m;
     }
 
-    /** Two or three lines for the terminal. */
+    /** A few lines for the terminal. */
     public List<String> lines() {
-        String div = diversity.map(f -> f.hasInterval()
+        List<String> lines = new ArrayList<>();
+        lines.add(diversity.map(f -> (f.hasInterval()
                 ? String.format(Locale.ROOT, "diversity order %.2f (95 %% interval %.2f to %.2f), fitted on %s dB",
                         f.order(), f.low(), f.high(), f.snrDbUsed())
                 : String.format(Locale.ROOT, "diversity order %.2f, fitted on %s dB", f.order(), f.snrDbUsed()))
-                .orElse("diversity order: not enough points with errors to fit");
+                + warning.map(w -> "; " + w).orElse(""))
+                .orElse("diversity order: not enough points with errors to fit"));
         String target = String.format(Locale.ROOT, "SNR at FER %s: %s", targetFer,
                 snrDbAtTarget.isPresent() ? String.format(Locale.ROOT, "%.2f dB", snrDbAtTarget.getAsDouble())
-                        : "not reached");
+                        : "none: " + Reach.LINK_NOT_REACHED.words());
         if (analysis == null) {
-            return List.of(div, target + "; no outage bounds for this channel");
+            lines.add(target + "; " + noBounds);
+            return lines;
         }
-        StringBuilder gap = new StringBuilder("gap to outage at that FER:");
+        lines.add(target);
         for (Bound b : Bound.values()) {
+            LinkAnalysis.BoundAnalysis ba = analysis.bounds().get(b);
             OptionalDouble g = gapDb(b);
-            gap.append(' ').append(b.key()).append(' ')
-                    .append(g.isPresent() ? String.format(Locale.ROOT, "%.2f dB", g.getAsDouble()) : "not reached")
-                    .append(b == Bound.QAM ? "" : ",");
+            String at = ba.snrDbAtTarget().isPresent()
+                    ? String.format(Locale.ROOT, "%.2f dB", ba.snrDbAtTarget().getAsDouble()) : "none";
+            String note = ba.reach() == Reach.IN_RANGE ? "" : " (" + ba.reach().words() + ")";
+            Reach missing = analysis.gapReach(b);
+            String gap = g.isPresent() ? String.format(Locale.ROOT, ", gap %.2f dB", g.getAsDouble())
+                    : missing == ba.reach() ? "" : "; no gap: " + missing.words();
+            lines.add(String.format(Locale.ROOT, "  %s outage bound at FER %s: %s%s%s", b.key(), targetFer, at, note,
+                    gap));
         }
-        return List.of(div, target, gap.toString());
+        return lines;
     }
 }

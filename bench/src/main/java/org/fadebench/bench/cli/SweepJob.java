@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.concurrent.CancellationException;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.channel.ChannelTrace;
@@ -27,13 +28,11 @@ import org.fadebench.bench.sweep.SweepOutcome;
 
 /**
  * Runs a {@link RunPlan}: prints the table as points finish, shows progress on a terminal, keeps a
- * checkpoint, stops cleanly on Ctrl-C or SIGTERM, and writes results.csv, results.json, the
+ * checkpoint, stops cleanly on Ctrl-C or SIGTERM (during the sweep and during the outage bounds;
+ * exit code 130 or 143), and writes results.csv, results.json, the
  * effective scenario and, if asked, an archive.
  */
 final class SweepJob {
-
-    /** Exit code after an interruption (128 + SIGINT), as shells report it. */
-    static final int INTERRUPTED = 130;
 
     private final RunPlan plan;
     private final boolean resume;
@@ -92,7 +91,7 @@ final class SweepJob {
         ProgressDisplay progress = ProgressDisplay.startIfTerminal(plan.snrDb(), plan.quiet());
         long start = System.nanoTime();
         // the handler stays installed while the outputs are written: a signal then changes nothing
-        try (SignalStop ignored = SignalStop.install(engine::requestStop)) {
+        try (SignalStop signals = SignalStop.install(engine::requestStop)) {
             SweepOutcome outcome;
             try {
                 outcome = engine.run(plan.snrDb(), resumed, listener(table, progress, fingerprint, start));
@@ -101,7 +100,7 @@ final class SweepJob {
                     progress.close();
                 }
             }
-            return finish(outcome, fingerprint);
+            return finish(outcome, fingerprint, signals);
         }
     }
 
@@ -131,7 +130,7 @@ final class SweepJob {
         };
     }
 
-    private int finish(SweepOutcome outcome, String fingerprint) {
+    private int finish(SweepOutcome outcome, String fingerprint, SignalStop signals) {
         boolean interrupted = outcome.interrupted();
         ChannelTrace replayed = plan.link().channel().trace();
         if (replayed != null && !plan.quiet()) {
@@ -153,10 +152,20 @@ final class SweepJob {
         }
         Path dir = plan.outDir();
         List<PointResult> results = outcome.results();
-        BoundCurves curves = boundsApply() && !results.isEmpty()
-                ? BoundCurves.compute(plan.bounds(), results.stream().mapToDouble(PointResult::snrDb).toArray())
-                : null;
-        summary = RunSummary.of(outcome.complete(), curves, plan.targetFer());
+        BoundCurves curves = null;
+        String noBounds = RunSummary.NO_BOUNDS;
+        if (boundsApply() && !results.isEmpty()) {
+            try {
+                curves = BoundCurves.compute(plan.bounds(), results.stream().mapToDouble(PointResult::snrDb).toArray(),
+                        signals::requested);
+            } catch (CancellationException e) {
+                if (!interrupted) {
+                    return stoppedInBounds(outcome, fingerprint, signals);
+                }
+                noBounds = "outage bounds not computed (interrupted); --resume computes them";
+            }
+        }
+        summary = RunSummary.of(plan.link(), outcome.complete(), curves, plan.targetFer(), noBounds);
         if (!plan.quiet()) {
             summary.lines().forEach(out::println);
         }
@@ -215,7 +224,22 @@ final class SweepJob {
             throw new UncheckedIOException(e);
         }
         out.flush();
-        return interrupted ? INTERRUPTED : ExitCodes.OK;
+        return interrupted ? signals.exitCode() : ExitCodes.OK;
+    }
+
+    /**
+     * A signal came while the outage bounds of a finished sweep were computed: keeps the sweep in
+     * the checkpoint, so that --resume only computes the bounds and writes the outputs.
+     */
+    private int stoppedInBounds(SweepOutcome outcome, String fingerprint, SignalStop signals) {
+        writeCheckpoint(fingerprint, outcome.states());
+        if (!plan.quiet()) {
+            out.println("interrupted while computing the outage bounds; the sweep is kept in "
+                    + plan.outDir().resolve(Checkpoint.FILE_NAME)
+                    + ": run the same command with --resume to compute the bounds and write the results");
+        }
+        out.flush();
+        return signals.exitCode();
     }
 
     /** The summary of the sweep {@link #run} finished, or null before. */

@@ -23,6 +23,8 @@ import org.fadebench.bench.analysis.Bound;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundPoint;
 import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.analysis.Reach;
+import org.fadebench.channel.OutageEstimate;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
 import org.fadebench.coding.fec.ChannelCodes;
@@ -73,8 +75,8 @@ import org.jfree.svg.SVGGraphics2D;
  * are friendly to colorblind people", 2008; from memory). Simulated curves are solid with markers
  * (FER blue circles, BER vermillion squares); bounds are broken lines without markers, each its own
  * pattern (MIMO black long dashes, STBC bluish-green dash-dots, QAM reddish-purple short dashes), so
- * the chart also reads in grey; a subtitle says so in words. A Monte Carlo MIMO bound carries a
- * light band over its 95 % interval.
+ * the chart also reads in grey; a subtitle says so in words. Every Monte Carlo bound carries a light
+ * band over its 95 % interval and stops where that interval is wider than its value.
  *
  * <p>A point with no errors has an error rate of 0, which a log axis cannot show. It is drawn as
  * an open downward triangle at the upper end of its interval, the largest rate the run leaves
@@ -373,7 +375,10 @@ public final class FerPlot {
         plot.setRenderer(1, limitRenderer);
     }
 
-    /** Dataset 2: the three bounds as dashed lines; the Monte Carlo MIMO bound with a band over its interval. */
+    /**
+     * Dataset 2: the three bounds as dashed lines; a Monte Carlo bound with a band over its
+     * interval, and left out where its interval is wider than its value.
+     */
     private static void addBounds(XYPlot plot, LinkSettings link, BoundCurves bounds, double floor,
                                   DoubleUnaryOperator x) {
         YIntervalSeriesCollection outage = new YIntervalSeriesCollection();
@@ -383,10 +388,10 @@ public final class FerPlot {
         for (Bound b : Bound.values()) {
             YIntervalSeries series = new YIntervalSeries(boundLabel(b, link, bounds.settings()));
             for (BoundPoint p : bounds.points()) {
-                double v = p.value(b);
+                OutageEstimate e = p.estimate(b);
+                double v = p.shown(b);
                 if (v > 0.0) {
-                    boolean band = b == Bound.MIMO && !p.mimoExact();
-                    series.add(x.applyAsDouble(p.snrDb()), v, band ? Math.max(p.mimoLow(), floor) : v, band ? p.mimoHigh() : v);
+                    series.add(x.applyAsDouble(p.snrDb()), v, Math.max(e.lower(), floor), e.upper());
                 }
             }
             addSeries(outage, renderer, series, boundColour(b), boundStroke(b), null);
@@ -453,20 +458,22 @@ public final class FerPlot {
     }
 
     static String boundLabel(Bound b, LinkSettings link, BoundSettings s) {
+        String blocks = s.fadingBlocks() > 1 ? s.fadingBlocks() + " fading blocks" : "";
+        String counted = s.exact(b) ? blocks.isEmpty() ? "" : " (" + blocks + ")"
+                : " (" + (blocks.isEmpty() ? "Monte Carlo" : blocks) + ", band: 95 %)";
         switch (b) {
             case MIMO:
                 return String.format(Locale.ROOT, "Outage, %d×%d MIMO, Gaussian inputs%s", s.transmitAntennas(),
-                        s.receiveAntennas(), s.mimoExact() ? "" : " (Monte Carlo, band: 95 %)");
+                        s.receiveAntennas(), counted);
             case STBC:
-                return "Outage, " + codeName(link) + ", Gaussian symbols";
+                return "Outage, " + codeName(link) + ", Gaussian symbols" + counted;
             default:
                 String label = "Outage, " + codeName(link) + ", " + s.modulation() + " ("
-                        + s.information().cliName().toUpperCase(Locale.ROOT) + ")";
-                return s.spectralEfficiency() >= s.qamLimit()
-                        ? label + ": 1 at every SNR, as R ≥ r·log2 M = " + Numbers.db(s.qamLimit())
-                        : label;
+                        + s.information().cliName().toUpperCase(Locale.ROOT) + ")" + counted;
+                return s.fullRate() ? label + ": " + Reach.ofFullRate(s).words() : label;
         }
     }
+
 
     private static String codeName(LinkSettings link) {
         return link.code() == SpaceTimeCodes.NONE ? "no STBC" : capitalised(link.code().name());

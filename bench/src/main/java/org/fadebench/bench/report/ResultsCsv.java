@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import org.fadebench.bench.analysis.Bound;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundPoint;
 import org.fadebench.bench.analysis.BoundSettings;
@@ -58,14 +59,15 @@ public final class ResultsCsv {
         if (bounds != null) {
             BoundSettings b = bounds.settings();
             w.append("# p_out_*: outage probability at R = ").append(Numbers.db(b.spectralEfficiency()))
-                    .append(" bits per channel use, ")
-                    .append(b.channel() == null ? "i.i.d. Rayleigh" : b.channel().describe() + " by Monte Carlo over "
-                            + b.mimoDraws() + " channel draws")
+                    .append(" bits per channel use, ").append(b.channelWords())
                     .append(": mimo = Gaussian inputs on the ")
                     .append(b.transmitAntennas()).append('x').append(b.receiveAntennas()).append(" channel")
-                    .append(b.mimoExact() ? " (exact)" : " (Monte Carlo, " + b.mimoDraws() + " draws, 95 % Wilson interval)")
                     .append("; stbc = the code with Gaussian symbols; qam = the code with ")
                     .append(link.modulation().cliName()).append(" (").append(b.information().cliName()).append(")\n");
+            for (Bound bound : Bound.values()) {
+                w.append("# p_out_").append(bound.key()).append(": ").append(b.method(bound)).append('\n');
+            }
+            w.append("# a Monte Carlo value is left empty where its interval is wider than the value\n");
         } else {
             w.append("# p_out_*: empty, outage bounds are given for orthogonal codes over channels constant within a "
                     + "block (no Doppler, no trace)\n");
@@ -99,16 +101,21 @@ public final class ResultsCsv {
                     Long.toString(c.symbols()),
                     Long.toString(c.symbolErrors()),
                     Numbers.rate(c.ser()),
-                    b == null ? "" : Numbers.rate(b.mimo()),
-                    b == null ? "" : Numbers.rate(b.stbc()),
-                    b == null ? "" : Numbers.rate(b.qam()),
-                    b == null ? "" : Numbers.rate(b.mimoLow()),
-                    b == null ? "" : Numbers.rate(b.mimoHigh()),
+                    b == null ? "" : shown(b, Bound.MIMO),
+                    b == null ? "" : shown(b, Bound.STBC),
+                    b == null ? "" : shown(b, Bound.QAM),
+                    b == null ? "" : Numbers.rate(b.mimo().lower()),
+                    b == null ? "" : Numbers.rate(b.mimo().upper()),
                     Long.toString(c.crcFailures()),
                     Long.toString(c.undetectedErrors())));
             w.append('\n');
         }
         return w.toString();
+    }
+
+    /** A bound's value, empty where its count cannot resolve it. */
+    public static String shown(BoundPoint p, Bound bound) {
+        return p.estimate(bound).resolved() ? Numbers.rate(p.value(bound)) : "";
     }
 
     public static void write(Path file, LinkSettings link, long seed, double confidence, List<PointResult> results,

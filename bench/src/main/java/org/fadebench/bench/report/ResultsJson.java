@@ -81,9 +81,8 @@ public final class ResultsJson {
             p.put("seconds", r.seconds());
         }
         root.set("summary", JSON.valueToTree(run.summary().toJson()));
-        if (run.summary().analysis() != null) {
-            root.set("analysis", JSON.valueToTree(run.summary().analysis().toJson()));
-        }
+        root.set("bounds", run.summary().analysis() == null ? JSON.nullNode()
+                : JSON.valueToTree(run.summary().analysis().toJson()));
         root.put("symbols_per_second", run.symbolsPerSecond());
         ObjectNode timing = root.putObject("timing");
         timing.put("seconds", run.seconds());

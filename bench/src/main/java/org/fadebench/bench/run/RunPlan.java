@@ -71,21 +71,8 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
      */
     public static RunPlan from(SettingValues values, String source) {
         SettingValues v = SettingValues.defaults(RunSettings.all()).overlaidBy(values);
-        Modulation mod = parse(MODULATION, () -> Modulation.fromCliName(v.text(MODULATION)));
-        SpaceTimeCode stbc = code(v);
-        Equaliser dec = v.isSet(DECODER) ? parse(DECODER, () -> Equaliser.fromCliName(v.text(DECODER)))
-                : stbc.isOrthogonal() ? Equaliser.MF : Equaliser.MMSE;
-        int nr = v.integer(RX);
-        int nTx = v.isSet(TX) ? v.integer(TX) : stbc.transmitAntennas();
-        ChannelSpec channel = withCorrelationMatrices(channelSpec(v), v, nr, nTx);
+        LinkSettings link = link(v);
         double[] snrDb = parse(null, () -> SnrGrid.parse(v.text(SNR_DB)));
-        FrameCoding coding = frameCoding(v);
-        int bits = v.isSet(FRAME_BITS) ? v.integer(FRAME_BITS)
-                : coding.coded() ? LinkSettings.DEFAULT_FRAME_BITS
-                : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
-        int coherence = v.integer(COHERENCE);
-        LinkSettings link = parse(null, () -> new LinkSettings(mod, stbc, nTx, nr, channel, bits, coherence, dec,
-                coding));
         Path traceOut = v.isSet(TRACE_OUT) ? Path.of(v.text(TRACE_OUT)) : null;
         int traceOutBlocks = v.integer(TRACE_OUT_BLOCKS);
         if (traceOut != null) {
@@ -146,6 +133,27 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
         }
         CsiAgeing.warning(link).ifPresent(w::add);
         return List.copyOf(w);
+    }
+
+    /**
+     * The link the values describe: code, antennas, modulation, channel, frame coding, frame length
+     * and coherence (also what {@code bounds} computes the bounds of). Unset settings must already
+     * hold the table's defaults.
+     */
+    public static LinkSettings link(SettingValues v) {
+        Modulation mod = parse(MODULATION, () -> Modulation.fromCliName(v.text(MODULATION)));
+        SpaceTimeCode stbc = code(v);
+        Equaliser dec = v.isSet(DECODER) ? parse(DECODER, () -> Equaliser.fromCliName(v.text(DECODER)))
+                : stbc.isOrthogonal() ? Equaliser.MF : Equaliser.MMSE;
+        int nr = v.integer(RX);
+        int nTx = v.isSet(TX) ? v.integer(TX) : stbc.transmitAntennas();
+        ChannelSpec channel = withCorrelationMatrices(channelSpec(v), v, nr, nTx);
+        FrameCoding coding = frameCoding(v);
+        int bits = v.isSet(FRAME_BITS) ? v.integer(FRAME_BITS)
+                : coding.coded() ? LinkSettings.DEFAULT_FRAME_BITS
+                : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
+        int coherence = v.integer(COHERENCE);
+        return parse(null, () -> new LinkSettings(mod, stbc, nTx, nr, channel, bits, coherence, dec, coding));
     }
 
     /**

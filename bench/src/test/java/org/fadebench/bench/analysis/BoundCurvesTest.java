@@ -38,11 +38,11 @@ class BoundCurvesTest {
         BoundCurves c = BoundCurves.compute(settings(1, 1, 1.0, Modulation.QPSK, rate), new double[] {0, 5, 10, 20});
         for (BoundPoint p : c.points()) {
             double expected = -Math.expm1(-(Math.pow(2, rate) - 1) / linear(p.snrDb()));
-            assertEquals(expected, p.mimo(), 1e-12 * expected, "mimo at " + p.snrDb());
-            assertEquals(expected, p.stbc(), 1e-12 * expected, "stbc at " + p.snrDb());
-            assertTrue(p.mimoExact());
-            assertEquals(p.mimo(), p.mimoLow());
-            assertEquals(p.mimo(), p.mimoHigh());
+            assertEquals(expected, p.value(Bound.MIMO), 1e-12 * expected, "mimo at " + p.snrDb());
+            assertEquals(expected, p.value(Bound.STBC), 1e-12 * expected, "stbc at " + p.snrDb());
+            assertTrue(p.mimo().isExact());
+            assertEquals(p.value(Bound.MIMO), p.mimo().lower());
+            assertEquals(p.value(Bound.MIMO), p.mimo().upper());
         }
     }
 
@@ -138,9 +138,9 @@ class BoundCurvesTest {
         List<BoundPoint> p = a.points();
         assertEquals(12.0, p.get(0).snrDb());
         for (BoundPoint q : p) {
-            assertEquals(20_000, q.mimoDraws());
-            assertEquals((double) q.mimoOutages() / q.mimoDraws(), q.mimo());
-            assertTrue(q.mimoLow() < q.mimo() && q.mimo() < q.mimoHigh(), q.toString());
+            assertEquals(20_000, q.mimo().draws());
+            assertEquals((double) q.mimo().outages() / q.mimo().draws(), q.value(Bound.MIMO));
+            assertTrue(q.mimo().lower() < q.value(Bound.MIMO) && q.value(Bound.MIMO) < q.mimo().upper(), q.toString());
         }
         double[] mimo = a.values(Bound.MIMO);
         assertTrue(mimo[1] >= mimo[2] && mimo[2] >= mimo[3] && mimo[3] >= mimo[0], java.util.Arrays.toString(mimo));

@@ -13,8 +13,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * A real process is stopped with SIGTERM while it runs, exits 130 with partial results and a
- * checkpoint, and `--resume` then ends with a results.csv byte-identical to an uninterrupted run.
+ * A real process is stopped with SIGTERM while it runs, exits 143 (128 + SIGTERM) with partial
+ * results and a checkpoint, and `--resume` then ends with a results.csv byte-identical to an
+ * uninterrupted run. The same holds while the outage bounds are computed after the sweep.
  */
 class InterruptResumeTest {
 
@@ -55,7 +56,7 @@ class InterruptResumeTest {
         // the sweep runs for seconds and the checkpoint appears within a quarter of a second of its
         // start, so the signal arrives while it runs
         assertTrue(interrupted, "the process was still running when the checkpoint appeared");
-        assertEquals(130, p.exitValue(), log);
+        assertEquals(143, p.exitValue(), "128 + SIGTERM: " + log);
         assertTrue(log.contains("--resume"), log);
         assertTrue(Files.exists(checkpoint), "checkpoint kept for --resume");
         assertTrue(Files.readString(cut.resolve("results.csv")).contains("# interrupted"));
@@ -63,6 +64,50 @@ class InterruptResumeTest {
         assertEquals(0, resumed.code(), resumed.err());
         assertEquals(Files.readString(straight.resolve("results.csv")), Files.readString(cut.resolve("results.csv")));
         assertTrue(!Files.exists(checkpoint), "checkpoint removed once the sweep is complete");
+    }
+
+    /**
+     * A signal while the Monte Carlo bounds are computed (here 10^8 draws per point, tens of
+     * seconds) ends the process within seconds, exit 143, with the finished sweep in the
+     * checkpoint; --resume (with a smaller effort, which is no part of the checkpoint) writes the
+     * results with their bounds and the same counts.
+     */
+    @Test
+    void sigtermWhileTheBoundsAreComputed() throws Exception {
+        Path dir = tmp.resolve("bounds");
+        List<String> link = List.of("run", "--code", "alamouti", "--rx", "2", "--snr", "0", "--max-frames", "64",
+                "--min-errors", "0", "--seed", "3", "--threads", "1", "--out", dir.toString());
+        List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-cp", System.getProperty("java.class.path"), FadebenchCli.class.getName()));
+        cmd.addAll(link);
+        cmd.addAll(List.of("--outage-draws", "100000000"));
+        Path logFile = tmp.resolve("bounds.log");
+        Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(logFile.toFile()).start();
+        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(30);
+        // the sweep's one row is printed when it is done; the bounds come next
+        java.util.regex.Pattern row = java.util.regex.Pattern.compile("(?m)^\\s+0\\s+\\S+\\s+64\\s");
+        while (!row.matcher(Files.readString(logFile)).find() && p.isAlive() && System.nanoTime() < deadline) {
+            Thread.sleep(20);
+        }
+        Thread.sleep(300);
+        assertTrue(p.isAlive(), "still computing the bounds: " + Files.readString(logFile));
+        long sent = System.nanoTime();
+        p.destroy(); // SIGTERM on Unix
+        assertTrue(p.waitFor(10, TimeUnit.SECONDS), "the process stops promptly");
+        double seconds = (System.nanoTime() - sent) * 1e-9;
+        String log = Files.readString(logFile);
+        assertEquals(143, p.exitValue(), log);
+        assertTrue(log.contains("interrupted while computing the outage bounds"), log);
+        assertTrue(Files.exists(dir.resolve("checkpoint.json")), "checkpoint kept for --resume");
+        assertTrue(seconds < 10, seconds + " s");
+
+        List<String> resume = new ArrayList<>(link);
+        resume.addAll(List.of("--resume", "--outage-draws", "1000"));
+        CliTest.Outcome o = CliTest.run(resume.toArray(new String[0]));
+        assertEquals(0, o.code(), o.err());
+        String csv = Files.readString(dir.resolve("results.csv"));
+        assertTrue(csv.contains("\n0,64,"), csv);
+        assertTrue(!Files.exists(dir.resolve("checkpoint.json")), "checkpoint removed once complete");
     }
 
     @Test

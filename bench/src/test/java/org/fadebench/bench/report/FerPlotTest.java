@@ -247,6 +247,30 @@ class FerPlotTest {
         }
     }
 
+    /**
+     * Over Rician fading every bound is a count: each carries a band over its interval, and a
+     * point whose count cannot resolve it (0 outages at 20 dB in 2000 draws) is left out.
+     */
+    @Test
+    void everyCountedBoundHasABandAndStopsWhereUnresolved() {
+        BoundCurves curves = BoundCurves.compute(BoundSettings.of(LINK).withSpectralEfficiency(1.5)
+                .withMimoDraws(2000, 2L).withChannel(ChannelSpec.of(Fading.RICIAN).withKFactor(3)), SNR_DB);
+        JFreeChart chart = FerPlot.chart(LINK, SEED, sweep(), 0.95, curves, TARGET_FER, FerPlot.Axes.AUTOMATIC);
+        YIntervalSeriesCollection outage = (YIntervalSeriesCollection) panels(chart).get(0).getDataset(2);
+        for (Bound b : Bound.values()) {
+            int series = b.ordinal();
+            assertTrue(outage.getSeriesKey(series).toString().contains("Monte Carlo, band"), outage.getSeriesKey(series)
+                    .toString());
+            long resolved = curves.points().stream().filter(p -> p.estimate(b).resolved()).count();
+            assertTrue(resolved < SNR_DB.length, b + ": the last points have no outage in 2000 draws");
+            assertEquals(resolved, outage.getItemCount(series), b.key());
+            for (int i = 0; i < outage.getItemCount(series); i++) {
+                assertTrue(outage.getStartYValue(series, i) < outage.getYValue(series, i)
+                        && outage.getYValue(series, i) < outage.getEndYValue(series, i), b + " band at " + i);
+            }
+        }
+    }
+
     @Test
     void titleNamesTheLink() {
         assertEquals("Alamouti 2×2, QPSK, Rayleigh fading", FerPlot.title(LINK));
