@@ -132,7 +132,7 @@ class MimoOutageSimulatorTest {
             MimoOutageSimulator sim = new MimoOutageSimulator(new RayleighFading(), mt, nr);
             for (double db : new double[] {0, 5, 10}) {
                 OutageEstimate count = sim.estimate(db, 2, draws, 11);
-                double closed = OutageBounds.stbcOutage(db, mt, nr, 1.0, 2);
+                double closed = OutageBounds.stbcOutage(db, nr, mt, 1.0, 2);
                 assertTrue(count.lower(CONFIDENCE) <= closed && closed <= count.upper(CONFIDENCE),
                         mt + "x" + nr + " at " + db + " dB: " + count + " vs " + closed);
             }
@@ -187,13 +187,13 @@ class MimoOutageSimulatorTest {
     void alamoutiAgainstMimo() {
         for (double db = 0; db <= 30; db += 5) {
             for (double bits : new double[] {1, 4}) {
-                assertEquals(OutageBounds.stbcOutage(db, 2, 1, 1.0, bits),
-                        OutageBounds.mimoOutage(db, 2, 1, bits, 1, 0).probability(), 0.0);
+                assertEquals(OutageBounds.stbcOutage(db, 1, 2, 1.0, bits),
+                        OutageBounds.mimoOutage(db, 1, 2, bits, 1, 0).probability(), 0.0);
             }
         }
         MimoOutageSimulator miso = new MimoOutageSimulator(new RayleighFading(), 2, 1);
         OutageEstimate count = miso.estimate(8, 2, 40_000, 5);
-        double closed = OutageBounds.stbcOutage(8, 2, 1, 1.0, 2);
+        double closed = OutageBounds.stbcOutage(8, 1, 2, 1.0, 2);
         assertTrue(count.lower(CONFIDENCE) <= closed && closed <= count.upper(CONFIDENCE), count + " vs " + closed);
 
         double[][] points = {{10, 4}, {15, 6}, {20, 8}};

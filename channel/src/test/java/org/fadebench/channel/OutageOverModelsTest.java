@@ -33,7 +33,7 @@ class OutageOverModelsTest {
         for (int[] link : new int[][] {{2, 1}, {1, 3}}) {
             int mt = link[0];
             int nr = link[1];
-            double exact = OutageBounds.mimoOutage(8, mt, nr, 2, 1, 1).probability();
+            double exact = OutageBounds.mimoOutage(8, nr, mt, 2, 1, 1).probability();
             assertInInterval(exact, new MimoOutageSimulator(new NakagamiFading(1), mt, nr).estimate(8, 2, DRAWS, 61),
                     "Nakagami m=1, " + mt + " x " + nr);
             assertInInterval(exact, new MimoOutageSimulator(new RicianFading(0), mt, nr).estimate(8, 2, DRAWS, 62),
@@ -71,7 +71,7 @@ class OutageOverModelsTest {
         FadingModel model = new RayleighFading(KroneckerCorrelation.exponential(2, 1, r, 0));
         assertInInterval(exact, new MimoOutageSimulator(model, 1, 2).estimate(5, 2, DRAWS, 64), "rx-corr 0.8");
         // correlation costs diversity: more outage than independent antennas at this rate
-        assertTrue(exact > OutageBounds.mimoOutage(5, 1, 2, 2, 1, 1).probability());
+        assertTrue(exact > OutageBounds.mimoOutage(5, 2, 1, 2, 1, 1).probability());
     }
 
     /** A trace in the simulator: outages are counted over its matrices in order, cycling. */

@@ -256,14 +256,14 @@ public record BoundSettings(int transmitAntennas, int receiveAntennas, double co
                     return new MimoOutageSimulator(model(), transmitAntennas, receiveAntennas)
                             .estimate(snrDb, spectralEfficiency, mimoDraws, mimoSeed, stop);
                 }
-                return OutageBounds.mimoOutage(snrDb, transmitAntennas, receiveAntennas, spectralEfficiency,
+                return OutageBounds.mimoOutage(snrDb, receiveAntennas, transmitAntennas, spectralEfficiency,
                         mimoDraws, mimoSeed, stop);
             case STBC:
-                return codeOutage(OutageBounds.stbcOutage(snrDb, transmitAntennas, receiveAntennas, codeRate,
+                return codeOutage(OutageBounds.stbcOutage(snrDb, receiveAntennas, transmitAntennas, codeRate,
                         spectralEfficiency, gainCdf()));
             default:
                 MutualInformation info = MutualInformation.of(modulation, information);
-                return codeOutage(OutageBounds.stbcOutage(snrDb, transmitAntennas, receiveAntennas, codeRate,
+                return codeOutage(OutageBounds.stbcOutage(snrDb, receiveAntennas, transmitAntennas, codeRate,
                         spectralEfficiency, info::bits, info.maxBits(), gainCdf()));
         }
     }
@@ -282,6 +282,6 @@ public record BoundSettings(int transmitAntennas, int receiveAntennas, double co
 
     /** The distribution function of ‖H‖²_F: the Gamma law, or the empirical one of the draws. */
     private DoubleUnaryOperator gainCdf() {
-        return gains == null ? OutageBounds.rayleighGainCdf(transmitAntennas, receiveAntennas) : gains::cdf;
+        return gains == null ? OutageBounds.rayleighGainCdf(receiveAntennas, transmitAntennas) : gains::cdf;
     }
 }
