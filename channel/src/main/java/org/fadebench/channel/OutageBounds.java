@@ -50,7 +50,7 @@ public final class OutageBounds {
         if (Math.min(mt, nr) == 1) {
             return OutageEstimate.exact(stbcOutage(snrDb, nr, mt, 1.0, spectralEfficiency));
         }
-        return new MimoOutageSimulator(new RayleighFading(), mt, nr)
+        return new MimoOutageSimulator(new RayleighFading(), nr, mt)
                 .estimate(snrDb, spectralEfficiency, draws, seed, stop);
     }
 

@@ -207,7 +207,7 @@ public record BoundSettings(int transmitAntennas, int receiveAntennas, double co
     public BoundPoint point(double snrDb, BooleanSupplier stop) {
         if (fadingBlocks() > 1) {
             MutualInformation info = MutualInformation.of(modulation, information);
-            BlockFadingOutage.Estimates e = new BlockFadingOutage(model(), transmitAntennas, receiveAntennas,
+            BlockFadingOutage.Estimates e = new BlockFadingOutage(model(), receiveAntennas, transmitAntennas,
                     frameSlots, blockSlots).estimate(snrDb, spectralEfficiency, codeRate, info::bits, info.maxBits(),
                     frames(), mimoSeed, stop);
             return new BoundPoint(snrDb, e.mimo(), e.stbc(), e.qam());
@@ -253,7 +253,7 @@ public record BoundSettings(int transmitAntennas, int receiveAntennas, double co
         switch (bound) {
             case MIMO:
                 if (channel != null) {
-                    return new MimoOutageSimulator(model(), transmitAntennas, receiveAntennas)
+                    return new MimoOutageSimulator(model(), receiveAntennas, transmitAntennas)
                             .estimate(snrDb, spectralEfficiency, mimoDraws, mimoSeed, stop);
                 }
                 return OutageBounds.mimoOutage(snrDb, receiveAntennas, transmitAntennas, spectralEfficiency,

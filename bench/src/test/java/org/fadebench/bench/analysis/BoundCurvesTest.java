@@ -83,7 +83,7 @@ class BoundCurvesTest {
         double rate = 2.0;
         double snrDb = 10.0;
         BoundSettings alamouti = BoundSettings.of(link(Modulation.QPSK, 1)).withSpectralEfficiency(rate);
-        OutageEstimate miso = new MimoOutageSimulator(new RayleighFading(), 2, 1).estimate(snrDb, rate, 200_000, 11L);
+        OutageEstimate miso = new MimoOutageSimulator(new RayleighFading(), 1, 2).estimate(snrDb, rate, 200_000, 11L);
         double stbc = alamouti.stbcOutage(snrDb);
         assertTrue(stbc >= miso.lower(0.999) && stbc <= miso.upper(0.999), "Alamouti " + stbc + " vs " + miso);
 
