@@ -168,7 +168,7 @@ class BoundCurvesTest {
     }
 
     static LinkSettings link(Modulation mod, int nr) {
-        return new LinkSettings(mod, SpaceTimeCodes.ALAMOUTI, 2, nr, Fading.RAYLEIGH, 64 * mod.bitsPerSymbol(), 0);
+        return new LinkSettings(mod, SpaceTimeCodes.ALAMOUTI, nr, 2, Fading.RAYLEIGH, 64 * mod.bitsPerSymbol(), 0);
     }
 
     /**

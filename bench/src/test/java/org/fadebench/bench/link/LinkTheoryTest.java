@@ -41,7 +41,7 @@ class LinkTheoryTest {
 
     private static LinkSettings link(Modulation mod, SpaceTimeCode code, int rx, Fading fading, int frameBits,
                                      int coherence) {
-        return new LinkSettings(mod, code, code.transmitAntennas(), rx, fading, frameBits, coherence);
+        return new LinkSettings(mod, code, rx, code.transmitAntennas(), fading, frameBits, coherence);
     }
 
     /** BPSK in AWGN: P_b = Q(√(2 Eb/N0)) (Proakis and Salehi, Digital Communications, 5th ed., Sec. 4.2). */
