@@ -30,19 +30,19 @@ public final class BlockFadingOutage {
     }
 
     private final FadingModel fading;
-    private final int mt;
     private final int nr;
+    private final int mt;
     private final double[] weights;
     private final double[] h;
     private final MimoOutageSimulator mimo;
 
     /**
      * A frame of {@code frameSlots} channel uses in fading blocks of {@code blockSlots} (the last
-     * block may be shorter) over {@code fading}, with {@code mt} x {@code nr} antennas.
+     * block may be shorter) over {@code fading}, with {@code nr} x {@code mt} antennas.
      *
      * @throws IllegalArgumentException if an antenna count is outside 1..64 or a length is below 1
      */
-    public BlockFadingOutage(FadingModel fading, int mt, int nr, int frameSlots, int blockSlots) {
+    public BlockFadingOutage(FadingModel fading, int nr, int mt, int frameSlots, int blockSlots) {
         Antennas.check(nr, mt);
         if (frameSlots < 1 || blockSlots < 1) {
             throw new IllegalArgumentException("frame and block lengths must be >= 1 slot, got " + frameSlots
@@ -55,10 +55,10 @@ public final class BlockFadingOutage {
             weights[f] = (double) slots / frameSlots;
         }
         this.fading = fading;
-        this.mt = mt;
         this.nr = nr;
+        this.mt = mt;
         this.h = new double[2 * nr * mt];
-        this.mimo = new MimoOutageSimulator(fading, mt, nr);
+        this.mimo = new MimoOutageSimulator(fading, nr, mt);
     }
 
     /** Fading blocks per frame, F. */

@@ -24,23 +24,23 @@ public final class MimoOutageSimulator {
     private static final double LN2 = Math.log(2.0);
 
     private final FadingModel fading;
-    private final int mt;
     private final int nr;
+    private final int mt;
     private final int size;
     private final ZMatrixRMaj h;
     private final ZMatrixRMaj gram;
     private final CholeskyDecompositionInner_ZDRM cholesky = new CholeskyDecompositionInner_ZDRM(true);
 
     /**
-     * A simulator for {@code mt} transmit and {@code nr} receive antennas over {@code fading}.
+     * A simulator for {@code nr} receive and {@code mt} transmit antennas over {@code fading}.
      *
      * @throws IllegalArgumentException if an antenna count is outside 1..64
      */
-    public MimoOutageSimulator(FadingModel fading, int mt, int nr) {
+    public MimoOutageSimulator(FadingModel fading, int nr, int mt) {
         Antennas.check(nr, mt);
         this.fading = fading;
-        this.mt = mt;
         this.nr = nr;
+        this.mt = mt;
         this.size = Math.min(mt, nr);
         this.h = new ZMatrixRMaj(nr, mt);
         this.gram = new ZMatrixRMaj(size, size);

@@ -33,24 +33,24 @@ public final class OutageBounds {
     }
 
     /**
-     * Outage probability of the Mt x Nr MIMO channel with Gaussian inputs, equal power and no
+     * Outage probability of the Nr x Mt MIMO channel with Gaussian inputs, equal power and no
      * transmit channel knowledge, P(log2 det(I + snr/Mt·H Hᴴ) < R). Exact (closed form, no draws)
      * when min(Mt, Nr) = 1 (draws and seed unused); otherwise a Monte Carlo estimate over {@code draws} Rayleigh channel
      * draws of the stream {@code Draws.of(seed)} with its interval (see {@link MimoOutageSimulator}).
      */
-    public static OutageEstimate mimoOutage(double snrDb, int mt, int nr, double spectralEfficiency,
+    public static OutageEstimate mimoOutage(double snrDb, int nr, int mt, double spectralEfficiency,
                                             int draws, long seed) {
-        return mimoOutage(snrDb, mt, nr, spectralEfficiency, draws, seed, () -> false);
+        return mimoOutage(snrDb, nr, mt, spectralEfficiency, draws, seed, () -> false);
     }
 
     /** As above, the Monte Carlo estimate polling {@code stop} (see {@link MimoOutageSimulator}). */
-    public static OutageEstimate mimoOutage(double snrDb, int mt, int nr, double spectralEfficiency,
+    public static OutageEstimate mimoOutage(double snrDb, int nr, int mt, double spectralEfficiency,
                                             int draws, long seed, BooleanSupplier stop) {
         checkDraws(draws);
         if (Math.min(mt, nr) == 1) {
-            return OutageEstimate.exact(stbcOutage(snrDb, mt, nr, 1.0, spectralEfficiency));
+            return OutageEstimate.exact(stbcOutage(snrDb, nr, mt, 1.0, spectralEfficiency));
         }
-        return new MimoOutageSimulator(new RayleighFading(), mt, nr)
+        return new MimoOutageSimulator(new RayleighFading(), nr, mt)
                 .estimate(snrDb, spectralEfficiency, draws, seed, stop);
     }
 
@@ -58,24 +58,24 @@ public final class OutageBounds {
      * Outage probability of an orthogonal space-time block code of rate {@code codeRate} = K/T with
      * Gaussian symbols: P(r·log2(1 + snr·‖H‖²_F/(Mt·r)) < R), in closed form.
      */
-    public static double stbcOutage(double snrDb, int mt, int nr, double codeRate,
+    public static double stbcOutage(double snrDb, int nr, int mt, double codeRate,
                                     double spectralEfficiency) {
-        return stbcOutage(snrDb, mt, nr, codeRate, spectralEfficiency, rayleighGainCdf(mt, nr));
+        return stbcOutage(snrDb, nr, mt, codeRate, spectralEfficiency, rayleighGainCdf(nr, mt));
     }
 
     /**
      * As {@link #stbcOutage(double, int, int, double, double)} for any fading: {@code gainCdf} is
      * the distribution function of ‖H‖²_F (e.g. {@link ChannelGainSamples#cdf}).
      */
-    public static double stbcOutage(double snrDb, int mt, int nr, double codeRate, double spectralEfficiency,
+    public static double stbcOutage(double snrDb, int nr, int mt, double codeRate, double spectralEfficiency,
                                     DoubleUnaryOperator gainCdf) {
-        checkLink(snrDb, mt, nr, codeRate, spectralEfficiency);
+        checkLink(snrDb, nr, mt, codeRate, spectralEfficiency);
         double thresholdSnr = Math.expm1(spectralEfficiency / codeRate * Math.log(2.0));
         return outage(snrDb, mt, codeRate, thresholdSnr, gainCdf);
     }
 
     /** The distribution function of ‖H‖²_F ~ Gamma(Mt·Nr, 1) under i.i.d. Rayleigh fading. */
-    public static DoubleUnaryOperator rayleighGainCdf(int mt, int nr) {
+    public static DoubleUnaryOperator rayleighGainCdf(int nr, int mt) {
         return x -> Gamma.regularizedGammaP(mt * nr, x);
     }
 
@@ -87,18 +87,18 @@ public final class OutageBounds {
      * The threshold γ_th with r·I(γ_th) = R is found by bisection; the outage is 1 when
      * R ≥ r·maxBitsPerSymbol.
      */
-    public static double stbcOutage(double snrDb, int mt, int nr, double codeRate,
+    public static double stbcOutage(double snrDb, int nr, int mt, double codeRate,
                                     double spectralEfficiency, DoubleUnaryOperator bitsPerSymbol,
                                     double maxBitsPerSymbol) {
-        return stbcOutage(snrDb, mt, nr, codeRate, spectralEfficiency, bitsPerSymbol, maxBitsPerSymbol,
-                rayleighGainCdf(mt, nr));
+        return stbcOutage(snrDb, nr, mt, codeRate, spectralEfficiency, bitsPerSymbol, maxBitsPerSymbol,
+                rayleighGainCdf(nr, mt));
     }
 
     /** As the finite-alphabet outage above for any fading, with {@code gainCdf} the distribution of ‖H‖²_F. */
-    public static double stbcOutage(double snrDb, int mt, int nr, double codeRate,
+    public static double stbcOutage(double snrDb, int nr, int mt, double codeRate,
                                     double spectralEfficiency, DoubleUnaryOperator bitsPerSymbol,
                                     double maxBitsPerSymbol, DoubleUnaryOperator gainCdf) {
-        checkLink(snrDb, mt, nr, codeRate, spectralEfficiency);
+        checkLink(snrDb, nr, mt, codeRate, spectralEfficiency);
         if (!(maxBitsPerSymbol > 0.0)) {
             throw new IllegalArgumentException("maxBitsPerSymbol must be > 0, got " + maxBitsPerSymbol);
         }
@@ -111,7 +111,7 @@ public final class OutageBounds {
 
     /**
      * The SNR in dB at which {@code outageOfSnrDb}, a closed-form outage decreasing in SNR (e.g.
-     * {@code s -> stbcOutage(s, 2, 1, 1.0, 2.0)}), equals {@code targetProbability}; by bisection
+     * {@code s -> stbcOutage(s, 1, 2, 1.0, 2.0)}), equals {@code targetProbability}; by bisection
      * to 1e-10 dB. Not for Monte Carlo estimates, which are not smooth in SNR.
      *
      * @throws IllegalArgumentException if the target is outside (0, 1) or not reached within ±500 dB
@@ -181,7 +181,7 @@ public final class OutageBounds {
         return Math.pow(10.0, 0.1 * db);
     }
 
-    private static void checkLink(double snrDb, int mt, int nr, double codeRate, double spectralEfficiency) {
+    private static void checkLink(double snrDb, int nr, int mt, double codeRate, double spectralEfficiency) {
         checkSnrDb(snrDb);
         Antennas.check(nr, mt);
         if (!(codeRate > 0.0 && codeRate <= 1.0)) {

@@ -71,7 +71,7 @@ class BlockFadingOutageTest {
     @Test
     void alphabetBoundIsAboveTheGaussianOneOnTheSameDraws() {
         DoubleUnaryOperator bpsk = g -> Math.min(1.0, Math.log1p(g) / Math.log(2)) * 0.9;
-        BlockFadingOutage outage = new BlockFadingOutage(new RayleighFading(), 2, 1, 16, 4);
+        BlockFadingOutage outage = new BlockFadingOutage(new RayleighFading(), 1, 2, 16, 4);
         BlockFadingOutage.Estimates e = outage.estimate(6, 0.5, 1.0, bpsk, 1.0, 20_000, 3, () -> false);
         assertTrue(e.qam().outages() >= e.stbc().outages(), e.toString());
         assertTrue(outage.estimate(6, 1.0, 1.0, bpsk, 1.0, 10, 3, () -> false).qam().isExact());

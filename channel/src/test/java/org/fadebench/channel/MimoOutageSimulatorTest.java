@@ -103,7 +103,7 @@ class MimoOutageSimulatorTest {
                     sum += x * x;
                 }
                 double simo = Math.log1p(snr / mt * sum) / LN2;
-                assertEquals(simo, new MimoOutageSimulator(new RayleighFading(), mt, nr).bits(v, snr),
+                assertEquals(simo, new MimoOutageSimulator(new RayleighFading(), nr, mt).bits(v, snr),
                         1e-12 * Math.max(1, simo));
             }
             for (int[] shape : new int[][] {{3, 3}, {4, 4}, {3, 2}, {2, 4}}) {
@@ -111,10 +111,10 @@ class MimoOutageSimulatorTest {
                 int mt = shape[1];
                 double[] v = randomChannel(random, nr, mt);
                 double reference = bitsByRealEmbedding(v, nr, mt, snr);
-                double actual = new MimoOutageSimulator(new RayleighFading(), mt, nr).bits(v, snr);
+                double actual = new MimoOutageSimulator(new RayleighFading(), nr, mt).bits(v, snr);
                 assertEquals(reference, actual, 1e-10 * Math.max(1, reference), nr + "x" + mt);
                 // Sylvester: det(I + c H Hᴴ) = det(I + c Hᴴ H), and Hᴴ as a channel has Nr transmit antennas
-                double transposed = new MimoOutageSimulator(new RayleighFading(), nr, mt)
+                double transposed = new MimoOutageSimulator(new RayleighFading(), mt, nr)
                         .bits(conjugateTranspose(v, nr, mt), snr * nr / mt);
                 assertEquals(actual, transposed, 1e-12 * Math.max(1, actual), nr + "x" + mt + " transposed");
             }
@@ -129,10 +129,10 @@ class MimoOutageSimulatorTest {
         for (int[] shape : shapes) {
             int mt = shape[0];
             int nr = shape[1];
-            MimoOutageSimulator sim = new MimoOutageSimulator(new RayleighFading(), mt, nr);
+            MimoOutageSimulator sim = new MimoOutageSimulator(new RayleighFading(), nr, mt);
             for (double db : new double[] {0, 5, 10}) {
                 OutageEstimate count = sim.estimate(db, 2, draws, 11);
-                double closed = OutageBounds.stbcOutage(db, mt, nr, 1.0, 2);
+                double closed = OutageBounds.stbcOutage(db, nr, mt, 1.0, 2);
                 assertTrue(count.lower(CONFIDENCE) <= closed && closed <= count.upper(CONFIDENCE),
                         mt + "x" + nr + " at " + db + " dB: " + count + " vs " + closed);
             }
@@ -168,7 +168,7 @@ class MimoOutageSimulatorTest {
         // (SNR dB, R) with outage between about 0.05 and 0.3 for each receiver count
         double[][][] pointsByShape = {{{5, 2}, {10, 4}, {15, 6}}, {{5, 3}, {10, 5}, {15, 7.5}}};
         for (int nr : new int[] {2, 3}) {
-            MimoOutageSimulator sim = new MimoOutageSimulator(new RayleighFading(), 2, nr);
+            MimoOutageSimulator sim = new MimoOutageSimulator(new RayleighFading(), nr, 2);
             for (double[] point : pointsByShape[nr - 2]) {
                 double reference = twoEigenvalueOutage(nr, fromDb(point[0]) / 2, point[1]);
                 OutageEstimate count = sim.estimate(point[0], point[1], draws, 3);
@@ -187,13 +187,13 @@ class MimoOutageSimulatorTest {
     void alamoutiAgainstMimo() {
         for (double db = 0; db <= 30; db += 5) {
             for (double bits : new double[] {1, 4}) {
-                assertEquals(OutageBounds.stbcOutage(db, 2, 1, 1.0, bits),
-                        OutageBounds.mimoOutage(db, 2, 1, bits, 1, 0).probability(), 0.0);
+                assertEquals(OutageBounds.stbcOutage(db, 1, 2, 1.0, bits),
+                        OutageBounds.mimoOutage(db, 1, 2, bits, 1, 0).probability(), 0.0);
             }
         }
-        MimoOutageSimulator miso = new MimoOutageSimulator(new RayleighFading(), 2, 1);
+        MimoOutageSimulator miso = new MimoOutageSimulator(new RayleighFading(), 1, 2);
         OutageEstimate count = miso.estimate(8, 2, 40_000, 5);
-        double closed = OutageBounds.stbcOutage(8, 2, 1, 1.0, 2);
+        double closed = OutageBounds.stbcOutage(8, 1, 2, 1.0, 2);
         assertTrue(count.lower(CONFIDENCE) <= closed && closed <= count.upper(CONFIDENCE), count + " vs " + closed);
 
         double[][] points = {{10, 4}, {15, 6}, {20, 8}};
@@ -265,7 +265,7 @@ class MimoOutageSimulatorTest {
         assertRejects(() -> sim.estimate(10, 2, 0, 1), "draws");
         assertRejects(() -> sim.bits(new double[4], 1), "2·Nr·Mt = 8");
         assertRejects(() -> sim.bits(new double[8], -1), ">= 0");
-        assertRejects(() -> new MimoOutageSimulator(new RayleighFading(), 0, 2), "1..64");
+        assertRejects(() -> new MimoOutageSimulator(new RayleighFading(), 2, 0), "1..64");
         assertRejects(() -> OutageEstimate.counted(5, 4), "outages <= draws");
         assertRejects(() -> OutageEstimate.counted(1, 4).lower(1.0), "(0, 1)");
         assertRejects(() -> OutageEstimate.exact(1.5), "[0, 1]");

@@ -80,7 +80,7 @@ class OutageBoundsTest {
                 for (double db = -5; db <= 40; db += 5) {
                     double x = Math.expm1(bits / rate * LN2) * mt * rate / fromDb(db);
                     double expected = erlangCdf(mt * nr, x);
-                    double actual = OutageBounds.stbcOutage(db, mt, nr, rate, bits);
+                    double actual = OutageBounds.stbcOutage(db, nr, mt, rate, bits);
                     assertEquals(expected, actual, 1e-11 * expected, mt + "x" + nr + " r=" + rate + " R=" + bits
                             + " at " + db + " dB");
                 }
@@ -104,13 +104,13 @@ class OutageBoundsTest {
             int l = mt * shape[1];
             for (double db = 20; db <= 60; db += 10) {
                 double x = (Math.pow(2, bits) - 1) * mt / fromDb(db);
-                double ratio = OutageBounds.stbcOutage(db, mt, shape[1], 1.0, bits)
+                double ratio = OutageBounds.stbcOutage(db, shape[1], mt, 1.0, bits)
                         * CombinatoricsUtils.factorialDouble(l) / Math.pow(x, l);
                 assertTrue(ratio <= 1 + 1e-12 && ratio >= Math.exp(-x) - 1e-12,
                         mt + "x" + shape[1] + " at " + db + " dB: ratio " + ratio);
             }
-            double slope = Math.log10(OutageBounds.stbcOutage(50, mt, shape[1], 1.0, bits))
-                    - Math.log10(OutageBounds.stbcOutage(40, mt, shape[1], 1.0, bits));
+            double slope = Math.log10(OutageBounds.stbcOutage(50, shape[1], mt, 1.0, bits))
+                    - Math.log10(OutageBounds.stbcOutage(40, shape[1], mt, 1.0, bits));
             assertEquals(-l, slope, 1e-3, "decades per 10 dB for L = " + l);
         }
     }
@@ -142,7 +142,7 @@ class OutageBoundsTest {
                 }
             }
             OutageEstimate count = OutageEstimate.counted(outages, draws);
-            double closed = OutageBounds.stbcOutage(db, mt, nr, rate, bits);
+            double closed = OutageBounds.stbcOutage(db, nr, mt, rate, bits);
             assertTrue(count.lower(0.999) <= closed && closed <= count.upper(0.999), count + " vs " + closed);
         }
     }
@@ -186,13 +186,13 @@ class OutageBoundsTest {
     void alphabetOutageAboveGaussianOutage() {
         for (double db = 0; db <= 20; db += 5) {
             for (double bits : new double[] {0.2, 0.5, 0.9}) {
-                double gaussian = OutageBounds.stbcOutage(db, 2, 1, 1.0, bits);
-                double bpsk = OutageBounds.stbcOutage(db, 2, 1, 1.0, bits, OutageBoundsTest::bpskBits, 1.0);
+                double gaussian = OutageBounds.stbcOutage(db, 1, 2, 1.0, bits);
+                double bpsk = OutageBounds.stbcOutage(db, 1, 2, 1.0, bits, OutageBoundsTest::bpskBits, 1.0);
                 assertTrue(bpsk >= gaussian, "R=" + bits + " at " + db + " dB: " + bpsk + " < " + gaussian);
             }
-            assertEquals(1.0, OutageBounds.stbcOutage(db, 2, 1, 1.0, 1.0, OutageBoundsTest::bpskBits, 1.0), 0.0);
-            assertEquals(1.0, OutageBounds.stbcOutage(db, 4, 1, 0.5, 0.5, OutageBoundsTest::bpskBits, 1.0), 0.0);
-            double p = OutageBounds.stbcOutage(db, 2, 1, 1.0, 0.5, OutageBoundsTest::bpskBits, 1.0);
+            assertEquals(1.0, OutageBounds.stbcOutage(db, 1, 2, 1.0, 1.0, OutageBoundsTest::bpskBits, 1.0), 0.0);
+            assertEquals(1.0, OutageBounds.stbcOutage(db, 1, 4, 0.5, 0.5, OutageBoundsTest::bpskBits, 1.0), 0.0);
+            double p = OutageBounds.stbcOutage(db, 1, 2, 1.0, 0.5, OutageBoundsTest::bpskBits, 1.0);
             double snr = fromDb(db);
             double low = erlangCdf(2, fromDb(0.1865 - 10 * Math.log10(2)) * 2 / snr);
             double high = erlangCdf(2, fromDb(0.1875 - 10 * Math.log10(2)) * 2 / snr);
@@ -221,13 +221,13 @@ class OutageBoundsTest {
     @Test
     void rejectsBadInput() {
         assertRejects(() -> OutageBounds.stbcOutage(Double.NaN, 1, 1, 1, 1), "snrDb");
-        assertRejects(() -> OutageBounds.stbcOutage(10, 0, 1, 1, 1), "1..64");
-        assertRejects(() -> OutageBounds.stbcOutage(10, 1, 65, 1, 1), "1..64");
-        assertRejects(() -> OutageBounds.stbcOutage(10, 2, 1, 0, 1), "(0, 1]");
-        assertRejects(() -> OutageBounds.stbcOutage(10, 2, 1, 1.5, 1), "(0, 1]");
-        assertRejects(() -> OutageBounds.stbcOutage(10, 2, 1, 1, 0), "> 0");
-        assertRejects(() -> OutageBounds.stbcOutage(10, 2, 1, 1, Double.POSITIVE_INFINITY), "> 0");
-        assertRejects(() -> OutageBounds.stbcOutage(10, 2, 1, 1, 1, g -> g, 0), "maxBitsPerSymbol");
+        assertRejects(() -> OutageBounds.stbcOutage(10, 1, 0, 1, 1), "1..64");
+        assertRejects(() -> OutageBounds.stbcOutage(10, 65, 1, 1, 1), "1..64");
+        assertRejects(() -> OutageBounds.stbcOutage(10, 1, 2, 0, 1), "(0, 1]");
+        assertRejects(() -> OutageBounds.stbcOutage(10, 1, 2, 1.5, 1), "(0, 1]");
+        assertRejects(() -> OutageBounds.stbcOutage(10, 1, 2, 1, 0), "> 0");
+        assertRejects(() -> OutageBounds.stbcOutage(10, 1, 2, 1, Double.POSITIVE_INFINITY), "> 0");
+        assertRejects(() -> OutageBounds.stbcOutage(10, 1, 2, 1, 1, g -> g, 0), "maxBitsPerSymbol");
         assertRejects(() -> OutageBounds.mimoOutage(10, 2, 2, 1, 0, 1), "draws");
     }
 

@@ -285,15 +285,7 @@ public final class QamConstellation {
      */
     public void demapMaxLog(double[] estimates, double[] gain, int symOffset, double n0,
                             double[] llr, int llrOffset, int count) {
-        int l = llrOffset;
-        for (int n = 0; n < count; n++) {
-            int k = symOffset + n;
-            double w = gain[k] / n0;
-            l = axisLlr(estimates[2 * k], w, false, llr, l);
-            if (twoAxes) {
-                l = axisLlr(estimates[2 * k + 1], w, false, llr, l);
-            }
-        }
+        demap(estimates, gain, symOffset, n0, llr, llrOffset, count, false);
     }
 
     /**
@@ -305,13 +297,18 @@ public final class QamConstellation {
      */
     public void demapExact(double[] estimates, double[] gain, int symOffset, double n0,
                            double[] llr, int llrOffset, int count) {
+        demap(estimates, gain, symOffset, n0, llr, llrOffset, count, true);
+    }
+
+    private void demap(double[] estimates, double[] gain, int symOffset, double n0, double[] llr, int llrOffset,
+                       int count, boolean exact) {
         int l = llrOffset;
         for (int n = 0; n < count; n++) {
             int k = symOffset + n;
             double w = gain[k] / n0;
-            l = axisLlr(estimates[2 * k], w, true, llr, l);
+            l = axisLlr(estimates[2 * k], w, exact, llr, l);
             if (twoAxes) {
-                l = axisLlr(estimates[2 * k + 1], w, true, llr, l);
+                l = axisLlr(estimates[2 * k + 1], w, exact, llr, l);
             }
         }
     }

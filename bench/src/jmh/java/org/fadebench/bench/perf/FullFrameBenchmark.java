@@ -35,7 +35,7 @@ public class FullFrameBenchmark extends ThroughputBenchmark {
         final double n0 = Math.pow(10, -1.5);
 
         void set(Modulation mod, SpaceTimeCode code, int rx) {
-            chain = new LinkChain(new LinkSettings(mod, code, code.transmitAntennas(), rx, Fading.RAYLEIGH,
+            chain = new LinkChain(new LinkSettings(mod, code, rx, code.transmitAntennas(), Fading.RAYLEIGH,
                     SYMBOLS * mod.bitsPerSymbol(), 0));
             draws = Draws.of(1, 0, 0);
             counters = new FrameCounters();

@@ -30,7 +30,7 @@ public class OutagePointBenchmark extends ThroughputBenchmark {
         settings = new BoundSettings(4, 4, 1.0, Modulation.QAM16, 8.0, MutualInformation.Kind.CODED_MODULATION,
                 DRAWS, 1L, null, null);
         // Alamouti 2x1 QPSK, 264 slots in blocks of 8 (33 per frame), all three bounds at once
-        blockFading = new BoundSettings(2, 1, 1.0, Modulation.QPSK, 0.98, MutualInformation.Kind.CODED_MODULATION,
+        blockFading = new BoundSettings(1, 2, 1.0, Modulation.QPSK, 0.98, MutualInformation.Kind.CODED_MODULATION,
                 FRAMES, 1L, null, null, 264, 8);
     }
 

@@ -42,7 +42,7 @@ import org.fadebench.modem.MutualInformation;
  * @param blockSlots channel uses per fading block (the last block of a frame may be shorter);
  *                   equal to {@code frameSlots} for one block per frame
  */
-public record BoundSettings(int transmitAntennas, int receiveAntennas, double codeRate, Modulation modulation,
+public record BoundSettings(int receiveAntennas, int transmitAntennas, double codeRate, Modulation modulation,
                             double spectralEfficiency, MutualInformation.Kind information, int mimoDraws,
                             long mimoSeed, ChannelSpec channel, ChannelGainSamples gains, int frameSlots,
                             int blockSlots) {
@@ -84,10 +84,10 @@ public record BoundSettings(int transmitAntennas, int receiveAntennas, double co
     }
 
     /** Settings with one fading block per frame. */
-    public BoundSettings(int transmitAntennas, int receiveAntennas, double codeRate, Modulation modulation,
+    public BoundSettings(int receiveAntennas, int transmitAntennas, double codeRate, Modulation modulation,
                          double spectralEfficiency, MutualInformation.Kind information, int mimoDraws, long mimoSeed,
                          ChannelSpec channel, ChannelGainSamples gains) {
-        this(transmitAntennas, receiveAntennas, codeRate, modulation, spectralEfficiency, information, mimoDraws,
+        this(receiveAntennas, transmitAntennas, codeRate, modulation, spectralEfficiency, information, mimoDraws,
                 mimoSeed, channel, gains, 1, 1);
     }
 
@@ -99,7 +99,7 @@ public record BoundSettings(int transmitAntennas, int receiveAntennas, double co
      * QAM bound is 1 there; give the rate of the outer code with {@link #withSpectralEfficiency}.
      */
     public static BoundSettings of(LinkSettings link) {
-        return new BoundSettings(link.transmitAntennas(), link.receiveAntennas(), link.code().rate(),
+        return new BoundSettings(link.receiveAntennas(), link.transmitAntennas(), link.code().rate(),
                 link.modulation(), link.bitsPerChannelUse(), MutualInformation.Kind.CODED_MODULATION,
                 DEFAULT_MIMO_DRAWS, DEFAULT_MIMO_SEED, null, null, link.slotsPerFrame(),
                 link.effectiveCoherenceSlots());
@@ -121,12 +121,12 @@ public record BoundSettings(int transmitAntennas, int receiveAntennas, double co
     }
 
     public BoundSettings withSpectralEfficiency(double bitsPerChannelUse) {
-        return new BoundSettings(transmitAntennas, receiveAntennas, codeRate, modulation, bitsPerChannelUse,
+        return new BoundSettings(receiveAntennas, transmitAntennas, codeRate, modulation, bitsPerChannelUse,
                 information, mimoDraws, mimoSeed, channel, gains, frameSlots, blockSlots);
     }
 
     public BoundSettings withInformation(MutualInformation.Kind kind) {
-        return new BoundSettings(transmitAntennas, receiveAntennas, codeRate, modulation, spectralEfficiency,
+        return new BoundSettings(receiveAntennas, transmitAntennas, codeRate, modulation, spectralEfficiency,
                 kind, mimoDraws, mimoSeed, channel, gains, frameSlots, blockSlots);
     }
 
@@ -139,7 +139,7 @@ public record BoundSettings(int transmitAntennas, int receiveAntennas, double co
         ChannelGainSamples g = spec == null || fadingBlocks() > 1 ? null
                 : ChannelGainSamples.draw(spec.newModel(receiveAntennas, transmitAntennas), receiveAntennas,
                         transmitAntennas, draws, seed);
-        return new BoundSettings(transmitAntennas, receiveAntennas, codeRate, modulation, spectralEfficiency,
+        return new BoundSettings(receiveAntennas, transmitAntennas, codeRate, modulation, spectralEfficiency,
                 information, draws, seed, spec, g, frameSlots, blockSlots);
     }
 
@@ -207,7 +207,7 @@ public record BoundSettings(int transmitAntennas, int receiveAntennas, double co
     public BoundPoint point(double snrDb, BooleanSupplier stop) {
         if (fadingBlocks() > 1) {
             MutualInformation info = MutualInformation.of(modulation, information);
-            BlockFadingOutage.Estimates e = new BlockFadingOutage(model(), transmitAntennas, receiveAntennas,
+            BlockFadingOutage.Estimates e = new BlockFadingOutage(model(), receiveAntennas, transmitAntennas,
                     frameSlots, blockSlots).estimate(snrDb, spectralEfficiency, codeRate, info::bits, info.maxBits(),
                     frames(), mimoSeed, stop);
             return new BoundPoint(snrDb, e.mimo(), e.stbc(), e.qam());
@@ -253,17 +253,17 @@ public record BoundSettings(int transmitAntennas, int receiveAntennas, double co
         switch (bound) {
             case MIMO:
                 if (channel != null) {
-                    return new MimoOutageSimulator(model(), transmitAntennas, receiveAntennas)
+                    return new MimoOutageSimulator(model(), receiveAntennas, transmitAntennas)
                             .estimate(snrDb, spectralEfficiency, mimoDraws, mimoSeed, stop);
                 }
-                return OutageBounds.mimoOutage(snrDb, transmitAntennas, receiveAntennas, spectralEfficiency,
+                return OutageBounds.mimoOutage(snrDb, receiveAntennas, transmitAntennas, spectralEfficiency,
                         mimoDraws, mimoSeed, stop);
             case STBC:
-                return codeOutage(OutageBounds.stbcOutage(snrDb, transmitAntennas, receiveAntennas, codeRate,
+                return codeOutage(OutageBounds.stbcOutage(snrDb, receiveAntennas, transmitAntennas, codeRate,
                         spectralEfficiency, gainCdf()));
             default:
                 MutualInformation info = MutualInformation.of(modulation, information);
-                return codeOutage(OutageBounds.stbcOutage(snrDb, transmitAntennas, receiveAntennas, codeRate,
+                return codeOutage(OutageBounds.stbcOutage(snrDb, receiveAntennas, transmitAntennas, codeRate,
                         spectralEfficiency, info::bits, info.maxBits(), gainCdf()));
         }
     }
@@ -282,6 +282,6 @@ public record BoundSettings(int transmitAntennas, int receiveAntennas, double co
 
     /** The distribution function of ‖H‖²_F: the Gamma law, or the empirical one of the draws. */
     private DoubleUnaryOperator gainCdf() {
-        return gains == null ? OutageBounds.rayleighGainCdf(transmitAntennas, receiveAntennas) : gains::cdf;
+        return gains == null ? OutageBounds.rayleighGainCdf(receiveAntennas, transmitAntennas) : gains::cdf;
     }
 }

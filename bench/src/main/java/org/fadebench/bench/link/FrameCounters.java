@@ -1,6 +1,8 @@
 package org.fadebench.bench.link;
 
 import java.io.Serializable;
+import java.util.LinkedHashMap;
+import java.util.Map;
 
 /** Error counts over a number of frames. Mutable; one per batch, merged in batch order. */
 public final class FrameCounters implements Serializable {
@@ -53,7 +55,7 @@ public final class FrameCounters implements Serializable {
         undetectedErrors += o.undetectedErrors;
     }
 
-    /** Restores counts saved in a checkpoint. */
+    /** Counts given one by one. */
     public static FrameCounters of(long frames, long frameErrors, long bits, long bitErrors, long symbols,
                                    long symbolErrors, double bitErrorsSquared, long crcFailures, long undetectedErrors) {
         FrameCounters c = new FrameCounters();
@@ -67,6 +69,34 @@ public final class FrameCounters implements Serializable {
         c.crcFailures = crcFailures;
         c.undetectedErrors = undetectedErrors;
         return c;
+    }
+
+    /**
+     * Every count by name, in one fixed order: the names results.json and checkpoint.json give them
+     * and the order of the checkpoint's checksum. Whole counts are {@link Long}s, the one sum of
+     * squares a {@link Double}; {@link #of(Map)} reads them back.
+     */
+    public Map<String, Number> byName() {
+        Map<String, Number> m = new LinkedHashMap<>();
+        m.put("frames", frames);
+        m.put("frame_errors", frameErrors);
+        m.put("bits", bits);
+        m.put("bit_errors", bitErrors);
+        m.put("symbols", symbols);
+        m.put("symbol_errors", symbolErrors);
+        m.put("bit_errors_squared", bitErrorsSquared);
+        m.put("crc_failures", crcFailures);
+        m.put("undetected_errors", undetectedErrors);
+        return m;
+    }
+
+    /** The counts of {@link #byName()}'s map (every name must be there). */
+    public static FrameCounters of(Map<String, ? extends Number> byName) {
+        return of(byName.get("frames").longValue(), byName.get("frame_errors").longValue(),
+                byName.get("bits").longValue(), byName.get("bit_errors").longValue(),
+                byName.get("symbols").longValue(), byName.get("symbol_errors").longValue(),
+                byName.get("bit_errors_squared").doubleValue(), byName.get("crc_failures").longValue(),
+                byName.get("undetected_errors").longValue());
     }
 
     /** A copy of these counts. */

@@ -22,31 +22,31 @@ import org.fadebench.modem.Modulation;
  * @param channel         fading model, correlation, Doppler, receiver CSI, or a recorded trace
  * @param coding          CRC, channel code, interleaver and LLRs; {@link FrameCoding#NONE} for uncoded
  */
-public record LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas,
-                           int receiveAntennas, ChannelSpec channel, int frameBits, int coherenceSlots,
+public record LinkSettings(Modulation modulation, SpaceTimeCode code, int receiveAntennas,
+                           int transmitAntennas, ChannelSpec channel, int frameBits, int coherenceSlots,
                            Equaliser equaliser, FrameCoding coding) implements Serializable {
 
     /** Frame length used when the user gives none, rounded up to whole code blocks. */
     public static final int DEFAULT_FRAME_BITS = 1024;
 
     /** A link equalised by the matched filter. */
-    public LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas, int receiveAntennas,
+    public LinkSettings(Modulation modulation, SpaceTimeCode code, int receiveAntennas, int transmitAntennas,
                         Fading fading, int frameBits, int coherenceSlots) {
-        this(modulation, code, transmitAntennas, receiveAntennas, ChannelSpec.of(fading), frameBits, coherenceSlots,
+        this(modulation, code, receiveAntennas, transmitAntennas, ChannelSpec.of(fading), frameBits, coherenceSlots,
                 Equaliser.MF, FrameCoding.NONE);
     }
 
     /** A link over a plain fading model with perfect CSI. */
-    public LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas, int receiveAntennas,
+    public LinkSettings(Modulation modulation, SpaceTimeCode code, int receiveAntennas, int transmitAntennas,
                         Fading fading, int frameBits, int coherenceSlots, Equaliser equaliser, FrameCoding coding) {
-        this(modulation, code, transmitAntennas, receiveAntennas, ChannelSpec.of(fading), frameBits, coherenceSlots,
+        this(modulation, code, receiveAntennas, transmitAntennas, ChannelSpec.of(fading), frameBits, coherenceSlots,
                 equaliser, coding);
     }
 
     /** An uncoded link. */
-    public LinkSettings(Modulation modulation, SpaceTimeCode code, int transmitAntennas, int receiveAntennas,
+    public LinkSettings(Modulation modulation, SpaceTimeCode code, int receiveAntennas, int transmitAntennas,
                         Fading fading, int frameBits, int coherenceSlots, Equaliser equaliser) {
-        this(modulation, code, transmitAntennas, receiveAntennas, ChannelSpec.of(fading), frameBits, coherenceSlots,
+        this(modulation, code, receiveAntennas, transmitAntennas, ChannelSpec.of(fading), frameBits, coherenceSlots,
                 equaliser, FrameCoding.NONE);
     }
 

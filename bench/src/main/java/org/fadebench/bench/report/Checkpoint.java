@@ -13,7 +13,9 @@ import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.HexFormat;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.sweep.PointState;
 
@@ -55,15 +57,7 @@ public final class Checkpoint {
             ObjectNode p = points.addObject();
             p.put("merged_batches", s.mergedBatches());
             p.put("done", s.done());
-            p.put("frames", c.frames());
-            p.put("frame_errors", c.frameErrors());
-            p.put("bits", c.bits());
-            p.put("bit_errors", c.bitErrors());
-            p.put("symbols", c.symbols());
-            p.put("symbol_errors", c.symbolErrors());
-            p.put("bit_errors_squared", c.bitErrorsSquared());
-            p.put("crc_failures", c.crcFailures());
-            p.put("undetected_errors", c.undetectedErrors());
+            CountsJson.put(p, c);
         }
         byte[] bytes = JSON.writerWithDefaultPrettyPrinter().writeValueAsBytes(root);
         AtomicFiles.write(dir.resolve(FILE_NAME), out -> out.write(bytes));
@@ -104,12 +98,12 @@ public final class Checkpoint {
         List<PointState> states = new ArrayList<>();
         for (JsonNode p : list) {
             long merged = whole(p, "merged_batches", where);
-            FrameCounters c = FrameCounters.of(whole(p, "frames", where), whole(p, "frame_errors", where),
-                    whole(p, "bits", where), whole(p, "bit_errors", where), whole(p, "symbols", where),
-                    whole(p, "symbol_errors", where), p.path("bit_errors_squared").asDouble(-1),
-                    whole(p, "crc_failures", where), whole(p, "undetected_errors", where));
-            if (c.bitErrorsSquared() < 0 || !p.path("done").isBoolean()) {
-                throw new IllegalArgumentException(where + "damaged checkpoint (bit_errors_squared or done)");
+            Map<String, Number> counts = new LinkedHashMap<>();
+            new FrameCounters().byName().forEach((name, zero) ->
+                    counts.put(name, zero instanceof Long ? whole(p, name, where) : real(p, name, where)));
+            FrameCounters c = FrameCounters.of(counts);
+            if (!p.path("done").isBoolean()) {
+                throw new IllegalArgumentException(where + "damaged checkpoint (done)");
             }
             states.add(new PointState(merged, c, p.path("done").asBoolean()));
         }
@@ -125,11 +119,10 @@ public final class Checkpoint {
         StringBuilder t = new StringBuilder(FORMAT).append('|').append(fingerprint);
         for (PointState s : states) {
             FrameCounters c = s.counts();
-            t.append('|').append(s.mergedBatches()).append(',').append(s.done()).append(',').append(c.frames())
-                    .append(',').append(c.frameErrors()).append(',').append(c.bits()).append(',').append(c.bitErrors())
-                    .append(',').append(c.symbols()).append(',').append(c.symbolErrors()).append(',')
-                    .append(Double.toString(c.bitErrorsSquared())).append(',').append(c.crcFailures()).append(',')
-                    .append(c.undetectedErrors());
+            t.append('|').append(s.mergedBatches()).append(',').append(s.done());
+            for (Number n : c.byName().values()) {
+                t.append(',').append(n);
+            }
         }
         return fingerprint(t.toString());
     }
@@ -140,6 +133,14 @@ public final class Checkpoint {
             throw new IllegalArgumentException(where + "damaged checkpoint (" + field + ")");
         }
         return n.asLong();
+    }
+
+    private static double real(JsonNode p, String field, String where) {
+        JsonNode n = p.path(field);
+        if (!n.isNumber() || !(n.asDouble() >= 0)) {
+            throw new IllegalArgumentException(where + "damaged checkpoint (" + field + ")");
+        }
+        return n.asDouble();
     }
 
     public static void delete(Path dir) throws IOException {

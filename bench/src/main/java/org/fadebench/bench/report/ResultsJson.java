@@ -63,21 +63,14 @@ public final class ResultsJson {
             p.put("snr_db", r.snrDb());
             p.put("ebn0_db", r.ebN0Db());
             p.put("complete", r.complete());
-            p.put("frames", c.frames());
-            p.put("frame_errors", c.frameErrors());
+            CountsJson.put(p, c);
             p.put("fer", finite(c.fer()));
             p.put("fer_ci_low", r.ferLow());
             p.put("fer_ci_high", r.ferHigh());
-            p.put("bits", c.bits());
-            p.put("bit_errors", c.bitErrors());
             p.put("ber", finite(c.ber()));
             p.put("ber_ci_low", r.berLow());
             p.put("ber_ci_high", r.berHigh());
-            p.put("symbols", c.symbols());
-            p.put("symbol_errors", c.symbolErrors());
             p.put("ser", finite(c.ser()));
-            p.put("crc_failures", c.crcFailures());
-            p.put("undetected_errors", c.undetectedErrors());
             p.put("seconds", r.seconds());
         }
         root.set("summary", JSON.valueToTree(run.summary().toJson()));

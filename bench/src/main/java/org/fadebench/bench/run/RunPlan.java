@@ -146,14 +146,14 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
         Equaliser dec = v.isSet(DECODER) ? parse(DECODER, () -> Equaliser.fromCliName(v.text(DECODER)))
                 : stbc.isOrthogonal() ? Equaliser.MF : Equaliser.MMSE;
         int nr = v.integer(RX);
-        int nTx = v.isSet(TX) ? v.integer(TX) : stbc.transmitAntennas();
-        ChannelSpec channel = withCorrelationMatrices(channelSpec(v), v, nr, nTx);
+        int mt = v.isSet(TX) ? v.integer(TX) : stbc.transmitAntennas();
+        ChannelSpec channel = withCorrelationMatrices(channelSpec(v), v, nr, mt);
         FrameCoding coding = frameCoding(v);
         int bits = v.isSet(FRAME_BITS) ? v.integer(FRAME_BITS)
                 : coding.coded() ? LinkSettings.DEFAULT_FRAME_BITS
                 : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
         int coherence = v.integer(COHERENCE);
-        return parse(null, () -> new LinkSettings(mod, stbc, nTx, nr, channel, bits, coherence, dec, coding));
+        return parse(null, () -> new LinkSettings(mod, stbc, nr, mt, channel, bits, coherence, dec, coding));
     }
 
     /**

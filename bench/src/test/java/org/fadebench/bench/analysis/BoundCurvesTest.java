@@ -19,8 +19,8 @@ import org.junit.jupiter.api.Test;
 
 class BoundCurvesTest {
 
-    private static BoundSettings settings(int mt, int nr, double codeRate, Modulation mod, double rate) {
-        return new BoundSettings(mt, nr, codeRate, mod, rate, Kind.CODED_MODULATION, 20_000, 5L, null, null);
+    private static BoundSettings settings(int nr, int mt, double codeRate, Modulation mod, double rate) {
+        return new BoundSettings(nr, mt, codeRate, mod, rate, Kind.CODED_MODULATION, 20_000, 5L, null, null);
     }
 
     private static double linear(double snrDb) {
@@ -63,7 +63,7 @@ class BoundCurvesTest {
             int mt = l[0];
             int nr = l[1];
             int order = mt * nr;
-            BoundSettings s = settings(mt, nr, 1.0, Modulation.QPSK, rate);
+            BoundSettings s = settings(nr, mt, 1.0, Modulation.QPSK, rate);
             double x = mt * (Math.pow(2, rate) - 1) / linear(snrDb);
             double asymptote = Math.pow(x, order) / CombinatoricsUtils.factorialDouble(order);
             double ratio = s.stbcOutage(snrDb) / asymptote;
@@ -83,7 +83,7 @@ class BoundCurvesTest {
         double rate = 2.0;
         double snrDb = 10.0;
         BoundSettings alamouti = BoundSettings.of(link(Modulation.QPSK, 1)).withSpectralEfficiency(rate);
-        OutageEstimate miso = new MimoOutageSimulator(new RayleighFading(), 2, 1).estimate(snrDb, rate, 200_000, 11L);
+        OutageEstimate miso = new MimoOutageSimulator(new RayleighFading(), 1, 2).estimate(snrDb, rate, 200_000, 11L);
         double stbc = alamouti.stbcOutage(snrDb);
         assertTrue(stbc >= miso.lower(0.999) && stbc <= miso.upper(0.999), "Alamouti " + stbc + " vs " + miso);
 
@@ -102,7 +102,7 @@ class BoundCurvesTest {
      */
     @Test
     void qamBoundOrdering() {
-        BoundSettings cm = settings(2, 1, 1.0, Modulation.QAM16, 3.0);
+        BoundSettings cm = settings(1, 2, 1.0, Modulation.QAM16, 3.0);
         BoundSettings bicm = cm.withInformation(Kind.BICM);
         for (double snrDb : new double[] {5, 10, 15, 20, 25}) {
             double gauss = cm.stbcOutage(snrDb);
@@ -148,8 +148,8 @@ class BoundCurvesTest {
 
     @Test
     void badInputIsNamed() {
-        assertMessage(() -> settings(0, 1, 1.0, Modulation.QPSK, 1.0), "transmit antennas must be in 1..64, got 0");
-        assertMessage(() -> settings(1, 65, 1.0, Modulation.QPSK, 1.0), "receive antennas must be in 1..64, got 65");
+        assertMessage(() -> settings(1, 0, 1.0, Modulation.QPSK, 1.0), "transmit antennas must be in 1..64, got 0");
+        assertMessage(() -> settings(65, 1, 1.0, Modulation.QPSK, 1.0), "receive antennas must be in 1..64, got 65");
         assertMessage(() -> settings(1, 1, 1.5, Modulation.QPSK, 1.0), "code rate K/T must be in (0, 1], got 1.5");
         assertMessage(() -> settings(1, 1, 1.0, Modulation.QPSK, 0.0), "spectral efficiency R must be");
         assertMessage(() -> settings(1, 1, 1.0, Modulation.QPSK, Double.NaN), "got NaN");
@@ -168,7 +168,7 @@ class BoundCurvesTest {
     }
 
     static LinkSettings link(Modulation mod, int nr) {
-        return new LinkSettings(mod, SpaceTimeCodes.ALAMOUTI, 2, nr, Fading.RAYLEIGH, 64 * mod.bitsPerSymbol(), 0);
+        return new LinkSettings(mod, SpaceTimeCodes.ALAMOUTI, nr, 2, Fading.RAYLEIGH, 64 * mod.bitsPerSymbol(), 0);
     }
 
     /**
@@ -180,7 +180,7 @@ class BoundCurvesTest {
      */
     @Test
     void boundsOverOtherChannels() {
-        BoundSettings rayleigh = settings(2, 1, 1.0, Modulation.QPSK, 2.0);
+        BoundSettings rayleigh = settings(1, 2, 1.0, Modulation.QPSK, 2.0);
         BoundSettings nakagami = rayleigh.withChannel(
                 org.fadebench.channel.ChannelSpec.of(org.fadebench.channel.Fading.NAKAGAMI).withNakagamiM(1));
         assertFalse(nakagami.mimoExact());

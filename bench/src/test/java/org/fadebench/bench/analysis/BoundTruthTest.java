@@ -31,7 +31,7 @@ import org.junit.jupiter.api.Test;
 class BoundTruthTest {
 
     private static LinkSettings alamouti(int rx, int coherence) {
-        return new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, rx, ChannelSpec.of(Fading.RAYLEIGH), 256,
+        return new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, rx, 2, ChannelSpec.of(Fading.RAYLEIGH), 256,
                 coherence, Equaliser.MF, new FrameCoding(new FecScheme(Crc.NONE, PuncturedCode.CONV_R12),
                         Interleaving.RANDOM, 0, LlrMethod.MAXLOG));
     }
@@ -116,7 +116,7 @@ class BoundTruthTest {
      */
     @Test
     void diversityOffItsAsymptoteIsFlagged() {
-        LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, Fading.RAYLEIGH, 128, 0);
+        LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2, Fading.RAYLEIGH, 128, 0);
         AsymptoticDiversity expected = AsymptoticDiversity.of(link).orElseThrow();
         assertEquals(2.0, expected.order());
         // a decade per 10 dB (order 1) at FER 1e-1 .. 1e-3
@@ -137,10 +137,10 @@ class BoundTruthTest {
         RunSummary e = RunSummary.of(link, early, null, 0.01, RunSummary.NO_BOUNDS);
         assertTrue(e.warning().orElseThrow().contains("FER is above 0.01"), e.warning().toString());
         // no fading: no asymptote to compare with
-        LinkSettings awgn = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, Fading.NONE, 128, 0);
+        LinkSettings awgn = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2, Fading.NONE, 128, 0);
         assertTrue(AsymptoticDiversity.of(awgn).isEmpty());
         // Nakagami m = 2: m·Mt·Nr = 4
-        LinkSettings nakagami = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1,
+        LinkSettings nakagami = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2,
                 ChannelSpec.of(Fading.NAKAGAMI).withNakagamiM(2), 128, 0, Equaliser.MF, FrameCoding.NONE);
         assertEquals(4.0, AsymptoticDiversity.of(nakagami).orElseThrow().order());
     }

@@ -44,7 +44,7 @@ class CsiAgeingTest {
         if (doppler > 0) {
             channel = channel.withDoppler(doppler);
         }
-        return new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, channel, 1024, coherence, Equaliser.MF,
+        return new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2, channel, 1024, coherence, Equaliser.MF,
                 FrameCoding.NONE);
     }
 

@@ -33,7 +33,7 @@ class DiversityFitTest {
         int[][] links = {{1, 1}, {1, 3}, {2, 1}, {2, 2}, {4, 1}};
         for (int[] l : links) {
             double codeRate = l[0] == 4 ? 0.75 : 1.0;
-            BoundSettings s = new BoundSettings(l[0], l[1], codeRate, Modulation.QPSK, 1.0, Kind.CODED_MODULATION,
+            BoundSettings s = new BoundSettings(l[1], l[0], codeRate, Modulation.QPSK, 1.0, Kind.CODED_MODULATION,
                     1, 1L, null, null);
             double[] values = new double[HIGH_SNR_DB.length];
             for (int i = 0; i < values.length; i++) {

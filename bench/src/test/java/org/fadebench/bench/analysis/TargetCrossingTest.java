@@ -52,7 +52,7 @@ class TargetCrossingTest {
         assertEquals(OptionalDouble.empty(), TargetCrossing.interpolate(snrDb, new double[] {0.5, 0.1, 0.0}, 0.01),
                 "a point with no errors has no logarithm");
         assertEquals(OptionalDouble.empty(), TargetCrossing.interpolate(new double[] {3}, new double[] {0.5}, 0.01));
-        BoundSettings full = new BoundSettings(2, 1, 1.0, Modulation.QPSK, 2.0, Kind.CODED_MODULATION, 1, 1L, null, null);
+        BoundSettings full = new BoundSettings(1, 2, 1.0, Modulation.QPSK, 2.0, Kind.CODED_MODULATION, 1, 1L, null, null);
         assertEquals(OptionalDouble.empty(), TargetCrossing.ofClosedForm(full::qamOutage, 0.01),
                 "QAM bound is 1 at R = r·log2 M");
     }

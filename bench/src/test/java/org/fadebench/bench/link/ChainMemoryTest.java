@@ -31,17 +31,17 @@ class ChainMemoryTest {
         FrameCoding coded = new FrameCoding(new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                 LlrMethod.MAXLOG);
         return Stream.of(
-            Arguments.of("simo 1x64 qpsk", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.NONE, 1, 64, rayleigh,
+            Arguments.of("simo 1x64 qpsk", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.NONE, 64, 1, rayleigh,
                     1 << 18, 0, Equaliser.MF, FrameCoding.NONE)),
             Arguments.of("alamouti 2x2 16qam, planar", new LinkSettings(Modulation.QAM16, SpaceTimeCodes.ALAMOUTI, 2, 2,
                     rayleigh, 1 << 20, 0, Equaliser.MF, FrameCoding.NONE)),
-            Arguments.of("g4 4x2 qpsk, 64-slot blocks", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.G4, 4, 2,
+            Arguments.of("g4 4x2 qpsk, 64-slot blocks", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.G4, 2, 4,
                     rayleigh, 1 << 20, 64, Equaliser.MF, FrameCoding.NONE)),
-            Arguments.of("alamouti 2x4 doppler", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 4,
+            Arguments.of("alamouti 2x4 doppler", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 4, 2,
                     rayleigh.withDoppler(0.01), 1 << 18, 0, Equaliser.MF, FrameCoding.NONE)),
             Arguments.of("conv-r12 crc16, 128 lanes", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2,
                     rayleigh, 8192, 0, Equaliser.MF, coded)),
-            Arguments.of("conv-r12 crc16, long frames", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.NONE, 1, 2,
+            Arguments.of("conv-r12 crc16, long frames", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.NONE, 2, 1,
                     rayleigh, 1 << 20, 0, Equaliser.MF, coded)));
     }
 

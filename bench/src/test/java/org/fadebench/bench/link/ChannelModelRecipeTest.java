@@ -82,7 +82,7 @@ class ChannelModelRecipeTest {
     @Test
     void aModelKnownOnlyToItsRegistryRunsThroughTheLink() {
         ChannelSpec channel = ChannelSpec.of(MODELS, "rotated").withSetting(PHASE, 1.0);
-        LinkSettings link = new LinkSettings(Modulation.BPSK, SpaceTimeCodes.NONE, 1, 2, channel, 512, 0, Equaliser.MF,
+        LinkSettings link = new LinkSettings(Modulation.BPSK, SpaceTimeCodes.NONE, 2, 1, channel, 512, 0, Equaliser.MF,
                 FrameCoding.NONE);
         assertEquals("rotated", link.fading());
         assertTrue(link.describe().contains("rotated phase 1.0"), link.describe());

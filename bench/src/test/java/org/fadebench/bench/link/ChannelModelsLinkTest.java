@@ -29,7 +29,7 @@ class ChannelModelsLinkTest {
     Path tmp;
 
     private static LinkSettings simo(ChannelSpec channel, int rx, int coherence) {
-        return new LinkSettings(Modulation.BPSK, SpaceTimeCodes.NONE, 1, rx, channel, 512, coherence, Equaliser.MF,
+        return new LinkSettings(Modulation.BPSK, SpaceTimeCodes.NONE, rx, 1, channel, 512, coherence, Equaliser.MF,
                 FrameCoding.NONE);
     }
 
@@ -105,7 +105,7 @@ class ChannelModelsLinkTest {
      */
     @Test
     void dopplerMakesAnErrorFloorForAlamouti() {
-        LinkSettings moving = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1,
+        LinkSettings moving = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2,
                 ChannelSpec.of(Fading.RAYLEIGH).withDoppler(0.05), 256, 0, Equaliser.MF, FrameCoding.NONE);
         List<PointResult> r = run(moving, new double[] {30, 40}, 3000, 2);
         double ratio = r.get(0).counts().ber() / r.get(1).counts().ber();

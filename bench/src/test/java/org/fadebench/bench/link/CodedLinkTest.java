@@ -29,7 +29,7 @@ class CodedLinkTest {
     private static LinkSettings alamoutiQpsk(int rx, int frameBits, int coherence, ChannelCode code, Crc crc,
                                              LlrMethod llr) {
         FrameCoding coding = new FrameCoding(new FecScheme(crc, code), Interleaving.RANDOM, 0, llr);
-        return new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, rx, Fading.RAYLEIGH, frameBits, coherence,
+        return new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, rx, 2, Fading.RAYLEIGH, frameBits, coherence,
                 Equaliser.MF, coding);
     }
 

@@ -73,7 +73,7 @@ class KnownAnswerTest {
 
     private static LinkSettings uncoded(Modulation m, SpaceTimeCode code, int rx, ChannelSpec channel, int frameBits,
                                         int coherence) {
-        return new LinkSettings(m, code, code.transmitAntennas(), rx, channel, frameBits, coherence, Equaliser.MF,
+        return new LinkSettings(m, code, rx, code.transmitAntennas(), channel, frameBits, coherence, Equaliser.MF,
                 FrameCoding.NONE);
     }
 
@@ -104,7 +104,7 @@ class KnownAnswerTest {
     void codedAlamoutiLaneDecoder() {
         FrameCoding coding = new FrameCoding(new FecScheme(Crc.CRC24, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                 LlrMethod.MAXLOG);
-        LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, RAYLEIGH, 200, 0,
+        LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2, RAYLEIGH, 200, 0,
                 Equaliser.MF, coding);
         assertPinned(new long[][] {
             {300, 83, 60000, 4406, 69000, 11901, 84, 0, 334580},

@@ -41,7 +41,7 @@ class LinkTheoryTest {
 
     private static LinkSettings link(Modulation mod, SpaceTimeCode code, int rx, Fading fading, int frameBits,
                                      int coherence) {
-        return new LinkSettings(mod, code, code.transmitAntennas(), rx, fading, frameBits, coherence);
+        return new LinkSettings(mod, code, rx, code.transmitAntennas(), fading, frameBits, coherence);
     }
 
     /** BPSK in AWGN: P_b = Q(√(2 Eb/N0)) (Proakis and Salehi, Digital Communications, 5th ed., Sec. 4.2). */
@@ -137,11 +137,11 @@ class LinkTheoryTest {
      * form from Proakis and Salehi, 5th ed., Sec. 13.4). BPSK, one channel per code block
      * (--coherence T); the K symbols of a block share it: clusters of K.
      */
-    @org.junit.jupiter.params.ParameterizedTest(name = "{0} {1}x{2} at {3} dB")
+    @org.junit.jupiter.params.ParameterizedTest(name = "{0} {2}x{1} at {3} dB")
     @org.junit.jupiter.params.provider.CsvSource({
-        "g3, 3, 1, 3", "g3, 3, 1, 6", "g4, 4, 1, 3", "g4, 4, 1, 6", "h3, 3, 1, 6", "h4, 4, 1, 6",
-        "r12-8, 8, 1, 3", "g4, 4, 2, 0", "h3, 3, 2, 3"})
-    void orthogonalDesignsEqualMrc(String name, int mt, int nr, double snrDb) {
+        "g3, 1, 3, 3", "g3, 1, 3, 6", "g4, 1, 4, 3", "g4, 1, 4, 6", "h3, 1, 3, 6", "h4, 1, 4, 6",
+        "r12-8, 1, 8, 3", "g4, 2, 4, 0", "h3, 2, 3, 3"})
+    void orthogonalDesignsEqualMrc(String name, int nr, int mt, double snrDb) {
         SpaceTimeCode code = SpaceTimeCodes.byName(name);
         LinkSettings s = link(Modulation.BPSK, code, nr, Fading.RAYLEIGH,
                 code.symbolsPerBlock() * 64, code.slotsPerBlock());

@@ -35,7 +35,7 @@ class PlanarPathTest {
 
     private static LinkSettings alamouti(Modulation mod, int rx, ChannelSpec channel, int frameBits, int coherence,
                                          Equaliser decoder) {
-        return new LinkSettings(mod, SpaceTimeCodes.ALAMOUTI, 2, rx, channel, frameBits, coherence, decoder,
+        return new LinkSettings(mod, SpaceTimeCodes.ALAMOUTI, rx, 2, channel, frameBits, coherence, decoder,
                 FrameCoding.NONE);
     }
 
@@ -99,7 +99,7 @@ class PlanarPathTest {
         assertFalse(new LinkChain(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2, rayleigh, 256, 0,
                 Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                 LlrMethod.MAXLOG))).planar());
-        assertFalse(new LinkChain(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.G4, 4, 1, Fading.RAYLEIGH, 256, 0))
+        assertFalse(new LinkChain(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.G4, 1, 4, Fading.RAYLEIGH, 256, 0))
                 .planar());
     }
 }

@@ -288,7 +288,7 @@ class FerPlotTest {
     void titleNamesTheLink() {
         assertEquals("Alamouti 2×2, QPSK, Rayleigh fading", FerPlot.title(LINK));
         assertEquals("1×3, 16QAM, Rayleigh fading, no space-time code", FerPlot.title(new LinkSettings(Modulation.QAM16,
-                SpaceTimeCodes.NONE, 1, 3, Fading.RAYLEIGH, 128, 0)));
+                SpaceTimeCodes.NONE, 3, 1, Fading.RAYLEIGH, 128, 0)));
     }
 
     /**

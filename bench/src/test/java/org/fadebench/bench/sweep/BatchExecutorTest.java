@@ -123,7 +123,7 @@ class BatchExecutorTest {
     @Test
     void codedLinkOverCorrelatedRicianFading() {
         ChannelSpec channel = ChannelSpec.of(Fading.RICIAN).withKFactor(3).withTxCorr(0.5).withPilots(2);
-        LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, channel, 256, 32,
+        LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2, channel, 256, 32,
                 Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                         LlrMethod.MAXLOG));
         assertSameOutcome(link, new StopRules(20, 3000, 0, 0), new double[] {2, 6});
@@ -143,7 +143,7 @@ class BatchExecutorTest {
             ChannelSpec.of(Fading.RAYLEIGH).withTrace(trace),
         };
         for (ChannelSpec channel : channels) {
-            LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, channel, 256, 0,
+            LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2, channel, 256, 0,
                     Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC24, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                             LlrMethod.MAXLOG));
             SweepPlan plan = new SweepPlan(link, new double[] {4, 8}, new StopRules(0, 500), 3, 50);
@@ -163,7 +163,7 @@ class BatchExecutorTest {
     /** An executor that stops taking batches before the sweep is over is an error, not a short result. */
     @Test
     void anExecutorThatDropsBatchesIsCaught() {
-        LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, Fading.RAYLEIGH, 256, 0);
+        LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2, Fading.RAYLEIGH, 256, 0);
         BatchExecutor lazy = (plan, feed) -> feed.done(new BatchWorker(plan).compute(feed.next()));
         IllegalStateException e = assertThrows(IllegalStateException.class,
                 () -> new SweepEngine(link, new StopRules(0, 2000), 1, lazy, 0.95).run(new double[] {5}, p -> { }));

@@ -16,7 +16,7 @@ import org.junit.jupiter.api.Test;
 /** An interrupted sweep resumed from its states ends exactly like an uninterrupted one. */
 class ResumeTest {
 
-    private static final LinkSettings LINK = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1,
+    private static final LinkSettings LINK = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2,
             Fading.RAYLEIGH, 128, 0);
     private static final double[] SNR = {0, 4, 8, 12, 16};
     private static final StopRules RULES = new StopRules(300, 2_000_000);

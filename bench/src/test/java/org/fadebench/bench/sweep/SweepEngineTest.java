@@ -20,7 +20,7 @@ import org.junit.jupiter.api.Test;
 
 class SweepEngineTest {
 
-    private static final LinkSettings LINK = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1,
+    private static final LinkSettings LINK = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2,
             Fading.RAYLEIGH, 256, 0);
 
     private static List<PointResult> run(int threads, StopRules rules) {
@@ -53,7 +53,7 @@ class SweepEngineTest {
      */
     @Test
     void codedBatchesAreWholeDecodeGroups() {
-        LinkSettings coded = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1, Fading.RAYLEIGH, 1024, 0,
+        LinkSettings coded = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2, Fading.RAYLEIGH, 1024, 0,
                 Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
                         LlrMethod.MAXLOG));
         assertEquals(128, coded.lanes());

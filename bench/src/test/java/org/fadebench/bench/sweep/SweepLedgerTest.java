@@ -23,7 +23,7 @@ import org.junit.jupiter.api.Test;
 class SweepLedgerTest {
 
     /** Alamouti 2x1 QPSK, 256-bit frames: 128 symbols, so 256 frames per batch. */
-    private static final LinkSettings LINK = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 1,
+    private static final LinkSettings LINK = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2,
             Fading.RAYLEIGH, 256, 0);
     private static final double[] SNR = {0, 5, 10};
     private static final long SECOND = 1_000_000_000L;

@@ -157,7 +157,7 @@ class CombinerAgreementTest {
             double[] x = new double[2 * t * mt];
             code.newEncoder().encode(s, 0, 1, x, 0);
             double[] h = TestCodes.gaussians(rnd, 2 * nr * mt, 1);
-            double[] y = TestCodes.receive(x, h, mt, nr, t);
+            double[] y = TestCodes.receive(x, h, nr, mt, t);
             Combiner comb = code.newCombiner(nr);
             comb.setChannel(h);
             double[] est = new double[2 * k];

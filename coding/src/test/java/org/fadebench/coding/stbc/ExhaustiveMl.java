@@ -49,7 +49,7 @@ final class ExhaustiveMl {
                 s[2 * i + 1] = points[m][1];
                 double[] x = new double[2 * t * mt];
                 code.encodeGeneral(s, 0, 1, x, 0);
-                images[i][m] = TestCodes.receive(x, h, mt, nr, t);
+                images[i][m] = TestCodes.receive(x, h, nr, mt, t);
             }
         }
         bestMetric = Double.POSITIVE_INFINITY;

@@ -85,7 +85,7 @@ class LinearEqualiserTest {
                 double[] x = new double[2 * t * mt * blocks];
                 code.newEncoder().encode(s, 0, blocks, x, 0);
                 double[] h = TestCodes.gaussians(rnd, 2 * nr * mt, Math.sqrt(0.5));
-                double[] y = TestCodes.receive(x, h, mt, nr, t * blocks);
+                double[] y = TestCodes.receive(x, h, nr, mt, t * blocks);
                 for (Combiner c : new Combiner[] {LinearEqualiser.zeroForcing(code, nr),
                                                   LinearEqualiser.mmse(code, nr, 0.0)}) {
                     assertArrayEquals(s, combine(c, h, y, k, blocks, new double[k * blocks]), 1e-10, code.name());
@@ -108,7 +108,7 @@ class LinearEqualiserTest {
             v[j] = 1;
             double[] x = new double[2 * t * mt];
             code.newEncoder().encode(v, 0, 1, x, 0);
-            double[] col = TestCodes.receive(x, h, mt, nr, t);
+            double[] col = TestCodes.receive(x, h, nr, mt, t);
             for (int row = 0; row < col.length; row++) {
                 f.set(row, j, col[row]);
             }
@@ -248,7 +248,7 @@ class LinearEqualiserTest {
             }
             double[] x = new double[2 * t * mt * blocks];
             code.newEncoder().encode(s, 0, blocks, x, 0);
-            double[] y = TestCodes.receive(x, h, mt, nr, t * blocks);
+            double[] y = TestCodes.receive(x, h, nr, mt, t * blocks);
             for (int i = 0; i < y.length; i++) {
                 y[i] += Math.sqrt(n0 / 2) * rnd.nextGaussian();
             }

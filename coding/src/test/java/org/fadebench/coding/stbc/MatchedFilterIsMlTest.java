@@ -64,7 +64,7 @@ class MatchedFilterIsMlTest {
             double[] x = new double[2 * t * mt];
             code.newEncoder().encode(s, 0, 1, x, 0);
             double[] h = TestCodes.gaussians(rnd, 2 * nr * mt, Math.sqrt(0.5));
-            double[] y = TestCodes.receive(x, h, mt, nr, t);
+            double[] y = TestCodes.receive(x, h, nr, mt, t);
             for (int i = 0; i < y.length; i++) {
                 y[i] += Math.sqrt(n0 / 2) * rnd.nextGaussian();
             }

@@ -51,7 +51,7 @@ final class TestCodes {
      * The noiseless receive grid Y = X Hᵀ of {@code blocks} code blocks: x holds T·blocks rows of
      * Mt entries, h is Nr x Mt; returns T·blocks rows of Nr entries (interleaved complex).
      */
-    static double[] receive(double[] x, double[] h, int mt, int nr, int rows) {
+    static double[] receive(double[] x, double[] h, int nr, int mt, int rows) {
         double[] y = new double[2 * rows * nr];
         for (int slot = 0; slot < rows; slot++) {
             for (int r = 0; r < nr; r++) {
