@@ -64,7 +64,7 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
         for (Bound b : Bound.values()) {
             OptionalDouble g = gapDb(b);
             gaps.put(b.key(), g.isPresent() ? g.getAsDouble() : null);
-            notes.put(b.key(), analysis == null ? noBounds : g.isPresent() ? null : analysis.gapReach(b).words());
+            notes.put(b.key(), analysis == null ? noBounds : analysis.gapNote(b));
         }
         m.put("gap_db", gaps);
         m.put("gap_note", notes);
@@ -93,7 +93,7 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
             OptionalDouble g = gapDb(b);
             String at = ba.snrDbAtTarget().isPresent()
                     ? String.format(Locale.ROOT, "%.2f dB", ba.snrDbAtTarget().getAsDouble()) : "none";
-            String note = ba.reach() == Reach.IN_RANGE ? "" : " (" + ba.reach().words() + ")";
+            String note = ba.reach() == Reach.IN_RANGE ? "" : " (" + ba.note() + ")";
             Reach missing = analysis.gapReach(b);
             String gap = g.isPresent() ? String.format(Locale.ROOT, ", gap %.2f dB", g.getAsDouble())
                     : missing == ba.reach() ? "" : "; no gap: " + missing.words();
