@@ -48,6 +48,9 @@ final class SweepJob {
 
     /** Checks that the output folder can be used, before any simulation starts. */
     static Path checkOutDir(String out) {
+        if (out == null || out.isBlank()) {
+            throw new InvalidInputException("--out needs a file or folder name, got nothing");
+        }
         Path dir = Path.of(out);
         if (Files.exists(dir) && !Files.isDirectory(dir)) {
             throw new InvalidInputException("--out " + out + " exists and is not a folder");

@@ -191,6 +191,11 @@ class RunOutputsTest {
     @Test
     void destinationsAreCheckedBeforeTheSweep() throws IOException {
         assertRefused(CliTest.run(small("--out=")), "--out needs a file or folder name, got nothing");
+        for (String command : new String[] {"demo", "bounds"}) {
+            CliTest.Outcome o = CliTest.run(command, "--out=");
+            assertEquals(2, o.code(), o.err());
+            assertEquals("fadebench " + command + ": --out needs a file or folder name, got nothing", o.err().trim());
+        }
         Path blocker = Files.writeString(tmp.resolve("blocker"), "a file, not a folder");
         String[][] cases = {
             {"--out", blocker.resolve("o").toString()},
