@@ -1,11 +1,5 @@
 package org.fadebench.bench.report;
 
-import org.fadebench.channel.OutageEstimate;
-
-import org.fadebench.bench.analysis.Reach;
-
-import org.fadebench.bench.analysis.RunSummary;
-
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -26,6 +20,8 @@ import javax.xml.parsers.DocumentBuilderFactory;
 import org.fadebench.bench.analysis.Bound;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.analysis.Reach;
+import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
@@ -33,6 +29,7 @@ import org.fadebench.bench.sweep.BinomialInterval;
 import org.fadebench.bench.sweep.PointResult;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
+import org.fadebench.channel.OutageEstimate;
 import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
