@@ -401,7 +401,7 @@ public final class FerPlot {
                 OutageEstimate e = p.estimate(b);
                 double v = p.shown(b);
                 if (v > 0.0) {
-                    series.add(x.applyAsDouble(p.snrDb()), v, Math.max(e.lower(), floor), e.upper());
+                    series.add(x.applyAsDouble(p.snrDb()), v, Math.min(v, Math.max(e.lower(), floor)), e.upper());
                 }
             }
             addSeries(outage, renderer, series, boundColour(b), boundStroke(b), null);

@@ -274,6 +274,19 @@ class FerPlotTest {
         }
     }
 
+    /** An exact bound has no band, also where it falls below a fixed floor of the axis. */
+    @Test
+    void exactBoundsHaveNoBandEvenBelowTheFloor() {
+        List<XYPlot> panels = panels(chart(sweep(), new FerPlot.Axes(FerPlot.XQuantity.SNR, 0.5)));
+        YIntervalSeriesCollection outage = (YIntervalSeriesCollection) panels.get(0).getDataset(2);
+        int stbc = Bound.STBC.ordinal();
+        assertTrue(outage.getItemCount(stbc) > 0);
+        for (int i = 0; i < outage.getItemCount(stbc); i++) {
+            assertEquals(outage.getYValue(stbc, i), outage.getStartYValue(stbc, i), "no band at " + i);
+            assertEquals(outage.getYValue(stbc, i), outage.getEndYValue(stbc, i), "no band at " + i);
+        }
+    }
+
     @Test
     void titleNamesTheLink() {
         assertEquals("Alamouti 2×2, QPSK, Rayleigh fading", FerPlot.title(LINK));
