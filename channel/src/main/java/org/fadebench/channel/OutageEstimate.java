@@ -65,6 +65,25 @@ public final class OutageEstimate {
         return isExact() || upper() - lower() <= probability;
     }
 
+    /**
+     * About how many draws a count needs to resolve (see {@link #resolved()}) a probability
+     * {@code p} in (0, 1): n = ⌈k/p⌉ for the smallest count k whose 95 % Wilson interval over n
+     * draws is no wider than k/n (k is about 16 for small p). For p below 1e-6, k is taken at 1e-6
+     * (it hardly changes with p there) so that the draws fit an int.
+     */
+    public static long drawsToResolve(double p) {
+        if (!(p > 0.0 && p < 1.0)) {
+            throw new IllegalArgumentException("probability must be in (0, 1), got " + p);
+        }
+        double q = Math.max(p, 1e-6);
+        for (int k = 1; ; k++) {
+            int n = (int) Math.ceil(k / q);
+            if (counted(k, n).resolved()) {
+                return (long) Math.ceil(k / p);
+            }
+        }
+    }
+
     /** Lower end of the 95 % interval. */
     public double lower() {
         return lower(0.95);

@@ -33,12 +33,25 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
      * One bound against the target.
      *
      * @param snrDbAtTarget closed forms: exact crossing by bisection, inside or outside the swept
-     *                      range; Monte Carlo counts: interpolated between resolved swept points
+     *                      range; Monte Carlo counts: interpolated between resolved points, swept
+     *                      or extra (see {@link BoundCurves#reaching})
      * @param reach         where it crosses, or why it has no crossing
      * @param diversity     equal-weight fit of the bound's tail (for a Monte Carlo count, over
-     *                      points with at least {@code minErrors} outages)
+     *                      swept points with at least {@code minErrors} outages)
+     * @param outageDraws   with {@link Reach#UNRESOLVED}: the {@code --outage-draws} that would
+     *                      resolve the target; 0 otherwise
      */
-    public record BoundAnalysis(OptionalDouble snrDbAtTarget, Reach reach, Optional<DiversityFit> diversity) {
+    public record BoundAnalysis(OptionalDouble snrDbAtTarget, Reach reach, Optional<DiversityFit> diversity,
+                                long outageDraws) {
+
+        public BoundAnalysis(OptionalDouble snrDbAtTarget, Reach reach, Optional<DiversityFit> diversity) {
+            this(snrDbAtTarget, reach, diversity, 0);
+        }
+
+        /** The words of {@link #reach} (see {@link Reach#note}). */
+        public String note() {
+            return reach.note(outageDraws);
+        }
     }
 
     public LinkAnalysis {
@@ -55,7 +68,9 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
     }
 
     /**
-     * Analyses a sweep against bounds evaluated over the same SNR points.
+     * Analyses a sweep against bounds evaluated over the same SNR points; a Monte Carlo bound
+     * without a crossing among them is followed beyond them ({@link BoundCurves#reaching}, already
+     * done when {@code curves} reach this target).
      *
      * @throws IllegalArgumentException if targetFer is outside (0, 1), minErrors < 1 or tailPoints < 2
      */
@@ -65,6 +80,7 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
         OptionalDouble snrDbAtTarget = TargetCrossing.ofPoints(points, targetFer);
         BoundSettings s = curves.settings();
         double[] snrDb = curves.snrDb();
+        curves = curves.reaching(targetFer, () -> false);
         Map<Bound, BoundAnalysis> bounds = new EnumMap<>(Bound.class);
         for (Bound b : Bound.values()) {
             bounds.put(b, s.exact(b) ? closedForm(s, b, snrDb, targetFer, tailPoints)
@@ -93,24 +109,35 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
         return new BoundAnalysis(crossing, reach, fit);
     }
 
-    /** A Monte Carlo bound: crossing and fit only where its count resolves it. */
+    /**
+     * A Monte Carlo bound: crossing from the resolved points, swept and extra; fit on the swept
+     * points only.
+     */
     private static BoundAnalysis counted(BoundCurves curves, Bound b, double targetFer, int minErrors,
                                          int tailPoints) {
         double[] snrDb = curves.snrDb();
         double[] shown = curves.shown(b);
-        OptionalDouble crossing = TargetCrossing.interpolate(snrDb, shown, targetFer);
+        List<BoundPoint> all = curves.allPoints();
+        OptionalDouble crossing = TargetCrossing.interpolate(all.stream().mapToDouble(BoundPoint::snrDb).toArray(),
+                all.stream().mapToDouble(p -> p.shown(b)).toArray(), targetFer);
         double[] fitted = new double[snrDb.length];
         for (int i = 0; i < fitted.length; i++) {
             fitted[i] = curves.points().get(i).estimate(b).outages() < minErrors ? Double.NaN : shown[i];
         }
-        Reach reach = Reach.IN_RANGE;
-        if (crossing.isEmpty()) {
-            int[] order = SnrOrder.ascending(snrDb);
-            double first = shown[order[0]];
-            double last = shown[order[order.length - 1]];
-            reach = first <= targetFer ? Reach.BELOW_RANGE : last > targetFer ? Reach.ABOVE_RANGE : Reach.UNRESOLVED;
+        Optional<DiversityFit> fit = DiversityFit.ofCurve(snrDb, fitted, tailPoints);
+        double low = Arrays.stream(snrDb).min().orElseThrow();
+        double high = Arrays.stream(snrDb).max().orElseThrow();
+        if (crossing.isPresent()) {
+            double at = crossing.getAsDouble();
+            return new BoundAnalysis(crossing, at >= low && at <= high ? Reach.IN_RANGE : Reach.OUTSIDE_RANGE, fit);
         }
-        return new BoundAnalysis(crossing, reach, DiversityFit.ofCurve(snrDb, fitted, tailPoints));
+        double first = all.get(0).shown(b);
+        double last = all.get(all.size() - 1).shown(b);
+        Reach reach = !curves.resolvable(b, targetFer) ? Reach.UNRESOLVED : first <= targetFer ? Reach.BELOW_RANGE
+                : last > targetFer ? Reach.ABOVE_RANGE : Reach.UNRESOLVED;
+        // with F blocks per frame the count is over frames, about --outage-draws / F of them
+        return new BoundAnalysis(crossing, reach, fit, reach == Reach.UNRESOLVED
+                ? OutageEstimate.drawsToResolve(targetFer) * curves.settings().fadingBlocks() : 0);
     }
 
     /** The settings of the bounds. */
@@ -132,14 +159,23 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
         return gapDb(bound).isPresent() ? null : !r.hasSnr() ? r : linkReach;
     }
 
+    /** The words of {@link #gapReach} (with the draws that would resolve an unresolved bound); null when there is a gap. */
+    public String gapNote(Bound bound) {
+        Reach r = gapReach(bound);
+        return r == null ? null : r == bounds.get(bound).reach() ? bounds.get(bound).note() : r.words();
+    }
+
     /**
      * The bounds for results.json as plain maps, lists, numbers and nulls, in a fixed key order
      * (e.g. {@code objectMapper.valueToTree(analysis.toJson())}):
      * <pre>
      * spectral_efficiency, information, fading_blocks, seed, fit {min_errors, tail_points},
      * mimo|stbc|qam {method, draws, snr_db_at_target, reach, note, diversity_order},
-     * points [{snr_db, mimo|stbc|qam {value, ci_low, ci_high, outages, draws, resolved}}]
+     * points [{snr_db, mimo|stbc|qam {value, ci_low, ci_high, outages, draws, resolved}}],
+     * extra_points [the same]
      * </pre>
+     * {@code extra_points} are the SNRs computed beyond or between the swept ones only to find a
+     * Monte Carlo bound's crossing ({@link BoundCurves#reaching}), in increasing SNR.
      * {@code method} is {@code exact} or {@code monte_carlo}; {@code value} is null where a count
      * does not resolve the bound ({@code resolved} false), and the interval and counts are null for
      * a closed form. The simulated curve's own numbers are in the run's {@code summary}.
@@ -162,12 +198,18 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
             one.put("draws", s.exact(bound) ? null : curves.points().get(0).estimate(bound).draws());
             one.put("snr_db_at_target", orNull(a.snrDbAtTarget()));
             one.put("reach", a.reach().key());
-            one.put("note", a.reach() == Reach.IN_RANGE ? null : a.reach().words());
+            one.put("note", a.reach() == Reach.IN_RANGE ? null : a.note());
             one.put("diversity_order", json(a.diversity()));
             root.put(bound.key(), one);
         }
+        root.put("points", json(curves.points()));
+        root.put("extra_points", json(curves.extra()));
+        return root;
+    }
+
+    private static List<Object> json(List<BoundPoint> boundPoints) {
         List<Object> points = new ArrayList<>();
-        for (BoundPoint p : curves.points()) {
+        for (BoundPoint p : boundPoints) {
             Map<String, Object> one = new LinkedHashMap<>();
             one.put("snr_db", p.snrDb());
             for (Bound bound : Bound.values()) {
@@ -183,8 +225,7 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
             }
             points.add(one);
         }
-        root.put("points", points);
-        return root;
+        return points;
     }
 
     /** A fit as a map, or null. */

@@ -9,16 +9,21 @@ import java.util.Locale;
 public enum Reach {
     /** The curve crosses the target within the swept SNR range. */
     IN_RANGE("within the swept range"),
-    /** A closed-form bound crosses the target outside the swept range; the SNR is still given. */
-    OUTSIDE_RANGE("outside the swept range, from the closed form"),
+    /**
+     * A bound crosses the target outside the swept range; the SNR is still given (closed form:
+     * bisection; Monte Carlo: extra points beyond the sweep, see {@link BoundCurves#reaching}).
+     */
+    OUTSIDE_RANGE("outside the swept range; the bound was computed beyond it"),
     /** The simulated link did not fall to the target FER at any swept SNR. */
     LINK_NOT_REACHED("the link did not reach the target FER in the swept range"),
-    /** A Monte Carlo bound is still above the target at the highest swept SNR (it is counted only there). */
-    ABOVE_RANGE("the Monte Carlo bound is still above the target at the highest swept SNR"),
-    /** A Monte Carlo bound is already below the target at the lowest swept SNR. */
-    BELOW_RANGE("the Monte Carlo bound is already below the target at the lowest swept SNR"),
-    /** A Monte Carlo bound falls below what its draws resolve before it reaches the target. */
-    UNRESOLVED("the Monte Carlo bound is too small for its channel draws to resolve; raise --outage-draws"),
+    /** A Monte Carlo bound is still above the target {@link BoundCurves#REACH_LIMIT_DB} dB above the highest swept SNR. */
+    ABOVE_RANGE("the Monte Carlo bound is still above the target " + (int) BoundCurves.REACH_LIMIT_DB
+            + " dB above the highest swept SNR"),
+    /** A Monte Carlo bound is already below the target {@link BoundCurves#REACH_LIMIT_DB} dB below the lowest swept SNR. */
+    BELOW_RANGE("the Monte Carlo bound is already below the target " + (int) BoundCurves.REACH_LIMIT_DB
+            + " dB below the lowest swept SNR"),
+    /** The target is below what a Monte Carlo bound's draws resolve (see {@link #note}). */
+    UNRESOLVED("the target FER is below what the Monte Carlo bound's draws resolve"),
     /** The rate equals the constellation's entropy r·log2 M: the QAM-constrained bound is 1. */
     FULL_RATE("uncoded link at the constellation's full rate: the QAM-constrained bound is 1 at every SNR"),
     /** The rate exceeds r·log2 M (given with --rate): the QAM-constrained bound is 1. */
@@ -39,6 +44,15 @@ public enum Reach {
     /** Plain words for the terminal, the JSON and the plot. */
     public String words() {
         return words;
+    }
+
+    /**
+     * The words, and for {@link #UNRESOLVED} the effort that would resolve the target:
+     * {@code outageDraws} is the {@code --outage-draws} value needed (see
+     * {@link BoundCurves#resolvable}), ignored for the other cases.
+     */
+    public String note(long outageDraws) {
+        return this == UNRESOLVED ? words + "; --outage-draws " + outageDraws + " or more would resolve it" : words;
     }
 
     /** Why the QAM bound of {@code s} is 1 at every SNR: {@link #FULL_RATE} or {@link #ABOVE_ALPHABET}. */

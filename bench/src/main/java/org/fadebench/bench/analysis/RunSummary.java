@@ -64,7 +64,7 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
         for (Bound b : Bound.values()) {
             OptionalDouble g = gapDb(b);
             gaps.put(b.key(), g.isPresent() ? g.getAsDouble() : null);
-            notes.put(b.key(), analysis == null ? noBounds : g.isPresent() ? null : analysis.gapReach(b).words());
+            notes.put(b.key(), analysis == null ? noBounds : analysis.gapNote(b));
         }
         m.put("gap_db", gaps);
         m.put("gap_note", notes);
@@ -80,26 +80,52 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
                 : String.format(Locale.ROOT, "diversity order %.2f, fitted on %s dB", f.order(), f.snrDbUsed()))
                 + warning.map(w -> "; " + w).orElse(""))
                 .orElse("diversity order: not enough points with errors to fit"));
-        String target = String.format(Locale.ROOT, "SNR at FER %s: %s", targetFer,
-                snrDbAtTarget.isPresent() ? String.format(Locale.ROOT, "%.2f dB", snrDbAtTarget.getAsDouble())
-                        : "none: " + Reach.LINK_NOT_REACHED.words());
         if (analysis == null) {
-            lines.add(target + "; " + noBounds);
+            lines.add(targetLine() + "; " + noBounds);
             return lines;
         }
-        lines.add(target);
+        lines.add(targetLine());
         for (Bound b : Bound.values()) {
-            LinkAnalysis.BoundAnalysis ba = analysis.bounds().get(b);
-            OptionalDouble g = gapDb(b);
-            String at = ba.snrDbAtTarget().isPresent()
-                    ? String.format(Locale.ROOT, "%.2f dB", ba.snrDbAtTarget().getAsDouble()) : "none";
-            String note = ba.reach() == Reach.IN_RANGE ? "" : " (" + ba.reach().words() + ")";
-            Reach missing = analysis.gapReach(b);
-            String gap = g.isPresent() ? String.format(Locale.ROOT, ", gap %.2f dB", g.getAsDouble())
-                    : missing == ba.reach() ? "" : "; no gap: " + missing.words();
-            lines.add(String.format(Locale.ROOT, "  %s outage bound at FER %s: %s%s%s", b.key(), targetFer, at, note,
-                    gap));
+            lines.add("  " + boundLine(b));
         }
         return lines;
+    }
+
+    /**
+     * The lines of {@link #lines} that the plot repeats under its title, in the same words: the
+     * link's when it did not reach the target, and each bound's that does not cross the target
+     * within the swept range, except a bound that is 1 at every SNR (the plot's legend says that).
+     */
+    public List<String> reachLines() {
+        List<String> lines = new ArrayList<>();
+        if (snrDbAtTarget.isEmpty()) {
+            lines.add(targetLine());
+        }
+        for (Bound b : analysis == null ? new Bound[0] : Bound.values()) {
+            Reach r = analysis.bounds().get(b).reach();
+            if (r != Reach.IN_RANGE && r != Reach.FULL_RATE && r != Reach.ABOVE_ALPHABET) {
+                lines.add(boundLine(b));
+            }
+        }
+        return lines;
+    }
+
+    private String targetLine() {
+        return String.format(Locale.ROOT, "SNR at FER %s: %s", targetFer,
+                snrDbAtTarget.isPresent() ? String.format(Locale.ROOT, "%.2f dB", snrDbAtTarget.getAsDouble())
+                        : "none: " + Reach.LINK_NOT_REACHED.words());
+    }
+
+    /** E.g. {@code mimo outage bound at FER 0.01: 9.80 dB (outside the swept range; …), gap 14.20 dB}. */
+    private String boundLine(Bound b) {
+        LinkAnalysis.BoundAnalysis ba = analysis.bounds().get(b);
+        OptionalDouble g = gapDb(b);
+        String at = ba.snrDbAtTarget().isPresent()
+                ? String.format(Locale.ROOT, "%.2f dB", ba.snrDbAtTarget().getAsDouble()) : "none";
+        String note = ba.reach() == Reach.IN_RANGE ? "" : " (" + ba.note() + ")";
+        Reach missing = analysis.gapReach(b);
+        String gap = g.isPresent() ? String.format(Locale.ROOT, ", gap %.2f dB", g.getAsDouble())
+                : missing == ba.reach() ? "" : "; no gap: " + missing.words();
+        return String.format(Locale.ROOT, "%s outage bound at FER %s: %s%s%s", b.key(), targetFer, at, note, gap);
     }
 }

@@ -160,7 +160,7 @@ final class SweepJob {
         if (boundsApply() && !results.isEmpty()) {
             try {
                 curves = BoundCurves.compute(plan.bounds(), results.stream().mapToDouble(PointResult::snrDb).toArray(),
-                        signals::requested);
+                        signals::requested).reaching(plan.targetFer(), signals::requested);
             } catch (CancellationException e) {
                 if (!interrupted) {
                     return stoppedInBounds(outcome, fingerprint, signals);

@@ -24,6 +24,7 @@ import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundPoint;
 import org.fadebench.bench.analysis.BoundSettings;
 import org.fadebench.bench.analysis.Reach;
+import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.channel.OutageEstimate;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
@@ -68,7 +69,9 @@ import org.jfree.svg.SVGGraphics2D;
  *
  * <p>The title names the link, and the lines under it everything else that defines the run, in the
  * words of the terminal's {@code link:} line ({@link LinkSettings#describe}) and the seed, wrapped
- * between list items, never inside a word.
+ * between list items, never inside a word. Under the style line, the terminal's lines on where the
+ * link or a bound has no SNR at the target FER or crosses it outside the swept range
+ * ({@link RunSummary#reachLines}), wrapped the same way.
  *
  * <p>Look: white background, faint decade grid, colours from the Okabe–Ito colour-blind-safe set
  * (M. Okabe and K. Ito, "Color Universal Design (CUD): how to make figures and presentations that
@@ -239,6 +242,13 @@ public final class FerPlot {
                         Numbers.db(100 * confidence));
         chart.addSubtitle(textLine(sub, RUN_FONT, new Color(0x444444), 6));
         chart.addSubtitle(textLine(STYLE_WORDS, RUN_FONT, new Color(0x444444), 0));
+        double above = 6;
+        for (String note : RunSummary.of(link, points, bounds, targetFer, RunSummary.NO_BOUNDS).reachLines()) {
+            for (String line : wrap(note, RUN_FONT)) {
+                chart.addSubtitle(textLine(line, RUN_FONT, new Color(0x444444), above));
+                above = 0;
+            }
+        }
         // items flow in rows as their widths allow, so a long label never runs into its neighbour
         LegendTitle legend = new LegendTitle(plot);
         legend.setPosition(RectangleEdge.BOTTOM);

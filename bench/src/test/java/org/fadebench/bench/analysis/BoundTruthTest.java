@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import java.util.Map;
 import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
@@ -96,18 +97,60 @@ class BoundTruthTest {
         RunSummary summary = RunSummary.of(bpsk, high, siso, 0.01, RunSummary.NO_BOUNDS);
         String text = String.join("\n", summary.lines());
         assertTrue(text.contains("none: the link did not reach the target FER in the swept range"), text);
-        assertTrue(text.contains("stbc outage bound at FER 0.01: 19.98 dB (outside the swept range, from the closed form); no gap: "
+        assertTrue(text.contains("stbc outage bound at FER 0.01: 19.98 dB (outside the swept range; the bound was computed beyond it); no gap: "
                 + "the link did not reach the target FER in the swept range"), text);
         assertTrue(text.contains("uncoded link at the constellation's full rate: the QAM-constrained bound is 1"), text);
 
-        // a Monte Carlo bound (2x2) still above the target at the top of a low sweep
+        // a Monte Carlo bound whose 200 draws cannot resolve 1e-2 (it needs about 16 outages, so
+        // --outage-draws 1500 or more; see OutageEstimate.drawsToResolve)
         LinkSettings twoByTwo = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2, Fading.RAYLEIGH, 128, 0);
-        BoundCurves mc = BoundCurves.compute(BoundSettings.of(twoByTwo).withMimoDraws(5000, 1L), new double[] {0, 1, 2});
-        assertEquals(Reach.ABOVE_RANGE, LinkAnalysis.of(high, mc).bounds().get(Bound.MIMO).reach());
-        // and one that drops from above the target to an unresolved 0 between two points
         BoundCurves steep = BoundCurves.compute(BoundSettings.of(twoByTwo).withMimoDraws(200, 1L),
                 new double[] {0, 30});
-        assertEquals(Reach.UNRESOLVED, LinkAnalysis.of(high, steep).bounds().get(Bound.MIMO).reach());
+        LinkAnalysis.BoundAnalysis unresolved = LinkAnalysis.of(high, steep).bounds().get(Bound.MIMO);
+        assertEquals(Reach.UNRESOLVED, unresolved.reach());
+        long needed = OutageEstimate.drawsToResolve(0.01);
+        assertTrue(needed > 1000 && needed < 2500, "needed " + needed);
+        assertEquals(Reach.UNRESOLVED.words() + "; --outage-draws " + needed + " or more would resolve it",
+                unresolved.note());
+    }
+
+    /**
+     * A Monte Carlo bound (MIMO 2x2) that crosses the target outside the swept range, or between
+     * a resolved and an unresolved swept point, is followed there on the same draws: the gap is
+     * given, and the crossing agrees, within the counts' 95 % intervals, with the bound computed
+     * directly around it.
+     */
+    @Test
+    void monteCarloBoundIsFollowedToItsCrossing() {
+        LinkSettings twoByTwo = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2, Fading.RAYLEIGH, 128, 0);
+        BoundSettings s = BoundSettings.of(twoByTwo).withMimoDraws(20_000, 1L);
+        // the link crosses 1e-2 between 24 and 26 dB; the MIMO bound at R = 2 crosses below 20 dB
+        List<PointResult> link = List.of(point(0, 20, 5000, 100_000), point(1, 22, 2000, 100_000),
+                point(2, 24, 1100, 100_000), point(3, 26, 500, 100_000));
+        BoundCurves curves = BoundCurves.compute(s, new double[] {20, 22, 24, 26});
+        assertTrue(curves.points().get(0).value(Bound.MIMO) < 0.01, "the MIMO bound is below 1e-2 at 20 dB");
+        RunSummary summary = RunSummary.of(twoByTwo, link, curves, 0.01, RunSummary.NO_BOUNDS);
+        LinkAnalysis.BoundAnalysis mimo = summary.analysis().bounds().get(Bound.MIMO);
+        assertEquals(Reach.OUTSIDE_RANGE, mimo.reach());
+        double crossing = mimo.snrDbAtTarget().getAsDouble();
+        assertTrue(crossing < 20, "crossing " + crossing);
+        assertEquals(summary.snrDbAtTarget().getAsDouble() - crossing, summary.gapDb(Bound.MIMO).getAsDouble(), 1e-12);
+        assertEquals(summary.gapDb(Bound.MIMO).getAsDouble(),
+                ((Map<?, ?>) summary.toJson().get("gap_db")).get("mimo"));
+        // the bound computed directly at that SNR, on the same draws: its 95 % Wilson interval holds the target
+        OutageEstimate direct = s.mimoOutage(crossing);
+        assertTrue(direct.lower() <= 0.01 && 0.01 <= direct.upper(), direct.toString());
+        // the extra points are listed apart from the swept ones
+        assertTrue(curves.extra().isEmpty());
+        assertFalse(summary.analysis().curves().extra().isEmpty());
+        assertEquals(4, summary.analysis().curves().points().size());
+
+        // from above the target at a resolved point to an unresolved 0 at the next: halved until resolved
+        BoundCurves coarse = BoundCurves.compute(s, new double[] {0, 30});
+        LinkAnalysis.BoundAnalysis between = LinkAnalysis.of(link, coarse).bounds().get(Bound.MIMO);
+        assertEquals(Reach.IN_RANGE, between.reach());
+        OutageEstimate atBetween = s.mimoOutage(between.snrDbAtTarget().getAsDouble());
+        assertTrue(atBetween.lower() <= 0.01 && 0.01 <= atBetween.upper(), atBetween.toString());
     }
 
     /**

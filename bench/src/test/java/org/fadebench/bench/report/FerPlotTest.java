@@ -20,6 +20,8 @@ import javax.xml.parsers.DocumentBuilderFactory;
 import org.fadebench.bench.analysis.Bound;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.analysis.Reach;
+import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
@@ -27,6 +29,7 @@ import org.fadebench.bench.sweep.BinomialInterval;
 import org.fadebench.bench.sweep.PointResult;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
+import org.fadebench.channel.OutageEstimate;
 import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
@@ -319,6 +322,46 @@ class FerPlotTest {
         List<String> svgLines = svgTextElements(dir.resolve(FerPlot.SVG_FILE));
         for (String line : lines) {
             assertTrue(svgLines.contains(line), "SVG lacks the line '" + line + "'");
+        }
+    }
+
+    /**
+     * Where the link or a bound has no SNR at the target, or crosses it outside the swept range,
+     * the plot says so under the title in the terminal's words ({@link RunSummary#reachLines}),
+     * each note wrapped only between list items: a link that never reaches 1e-2 in 0..4 dB, bounds
+     * that cross beyond the sweep (the MIMO one a Monte Carlo count followed there), and a count too
+     * short to resolve the target.
+     */
+    @Test
+    void reachNotesAreOnThePlot(@TempDir Path dir) throws Exception {
+        double[] snrDb = {0, 2, 4};
+        List<PointResult> high = new java.util.ArrayList<>();
+        for (int i = 0; i < snrDb.length; i++) {
+            long errors = 900 - 200 * i;
+            FrameCounters c = FrameCounters.of(1000, errors, 128_000, errors, 64_000, errors, errors, 0, 0);
+            double[] fer = BinomialInterval.clopperPearson(errors, 1000, 0.95);
+            double[] ber = BinomialInterval.clusteredBer(1000, 128, errors, errors, 0.95);
+            high.add(new PointResult(i, snrDb[i], LINK.ebN0Db(snrDb[i]), c, fer[0], fer[1], ber[0], ber[1], true, 0.1));
+        }
+        Font font = new Font(Font.SANS_SERIF, Font.PLAIN, 14);
+        for (int draws : new int[] {5000, 200}) {
+            BoundCurves curves = BoundCurves.compute(BoundSettings.of(LINK).withSpectralEfficiency(1.5)
+                    .withMimoDraws(draws, 2L), snrDb);
+            List<String> notes = RunSummary.of(LINK, high, curves, TARGET_FER, RunSummary.NO_BOUNDS).reachLines();
+            String all = String.join("\n", notes);
+            assertTrue(all.contains(Reach.LINK_NOT_REACHED.words()), all);
+            assertTrue(all.contains("stbc outage bound at FER 0.01: ") && all.contains(Reach.OUTSIDE_RANGE.words()), all);
+            assertTrue(all.contains(draws == 200 ? Reach.UNRESOLVED.note(OutageEstimate.drawsToResolve(TARGET_FER))
+                    : "mimo outage bound at FER 0.01: "), all);
+            FerPlot.write(dir, LINK, SEED, high, 0.95, curves, TARGET_FER, FerPlot.Axes.AUTOMATIC);
+            List<String> svgLines = svgTextElements(dir.resolve(FerPlot.SVG_FILE));
+            for (String note : notes) {
+                List<String> lines = FerPlot.wrap(note, font);
+                assertEquals(note, String.join(" ", lines), "wrapped between items only");
+                for (String line : lines) {
+                    assertTrue(svgLines.contains(line), "SVG lacks the line '" + line + "' of " + svgLines);
+                }
+            }
         }
     }
 
