@@ -21,7 +21,7 @@ import org.fadebench.channel.OutageEstimate;
  *
  * @param diversity      weighted fit of the simulated FER tail (see {@link DiversityFit#ofPoints})
  * @param snrDbAtTarget  where the simulated FER falls to the target (see {@link TargetCrossing#ofPoints})
- * @param linkReach      {@link Reach#IN_RANGE} or {@link Reach#LINK_NOT_REACHED}
+ * @param linkReach      {@link Reach#IN_RANGE}, {@link Reach#LINK_BELOW_RANGE} or {@link Reach#LINK_NOT_REACHED}
  * @param curves         the bounds at the swept SNR points
  * @param bounds         the same for each outage bound
  */
@@ -87,7 +87,7 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
                     : counted(curves, b, targetFer, minErrors, tailPoints));
         }
         return new LinkAnalysis(targetFer, minErrors, tailPoints, diversity, snrDbAtTarget,
-                snrDbAtTarget.isPresent() ? Reach.IN_RANGE : Reach.LINK_NOT_REACHED, curves, bounds);
+                Reach.ofLink(points, targetFer, snrDbAtTarget), curves, bounds);
     }
 
     private static BoundAnalysis closedForm(BoundSettings s, Bound b, double[] snrDb, double targetFer,

@@ -1,6 +1,10 @@
 package org.fadebench.bench.analysis;
 
+import java.util.Comparator;
+import java.util.List;
 import java.util.Locale;
+import java.util.OptionalDouble;
+import org.fadebench.bench.sweep.PointResult;
 
 /**
  * Where a curve meets the target FER, or why it has no such SNR: each case has its own words, so
@@ -16,6 +20,9 @@ public enum Reach {
     OUTSIDE_RANGE("outside the swept range; the bound was computed beyond it"),
     /** The simulated link did not fall to the target FER at any swept SNR. */
     LINK_NOT_REACHED("the link did not reach the target FER in the swept range"),
+    /** The simulated FER is already at or below the target at the lowest swept SNR. */
+    LINK_BELOW_RANGE("the link's FER is already below the target at the lowest swept SNR: its crossing lies below"
+            + " the swept range"),
     /** A Monte Carlo bound is still above the target {@link BoundCurves#REACH_LIMIT_DB} dB above the highest swept SNR. */
     ABOVE_RANGE("the Monte Carlo bound is still above the target " + (int) BoundCurves.REACH_LIMIT_DB
             + " dB above the highest swept SNR"),
@@ -58,6 +65,20 @@ public enum Reach {
     /** Why the QAM bound of {@code s} is 1 at every SNR: {@link #FULL_RATE} or {@link #ABOVE_ALPHABET}. */
     public static Reach ofFullRate(BoundSettings s) {
         return s.spectralEfficiency() > s.qamLimit() * (1 + 1e-12) ? ABOVE_ALPHABET : FULL_RATE;
+    }
+
+    /**
+     * Where the simulated curve meets the target: {@link #IN_RANGE} when {@code crossing} is
+     * there, {@link #LINK_BELOW_RANGE} when the point of lowest SNR is already at or below the
+     * target, else {@link #LINK_NOT_REACHED}.
+     */
+    public static Reach ofLink(List<PointResult> points, double targetFer, OptionalDouble crossing) {
+        if (crossing.isPresent()) {
+            return IN_RANGE;
+        }
+        return points.stream().min(Comparator.comparingDouble(PointResult::snrDb))
+                .filter(p -> p.counts().frames() > 0 && p.counts().fer() <= targetFer)
+                .map(p -> LINK_BELOW_RANGE).orElse(LINK_NOT_REACHED);
     }
 
     /** True when the curve has an SNR at the target. */

@@ -15,13 +15,14 @@ import org.fadebench.bench.sweep.PointResult;
  * on its asymptote), the SNR at the target FER and, where the outage bounds apply, the gap to each
  * of them. The {@code summary} object of results.json and the lines printed after the table.
  *
+ * @param linkReach  where the simulated FER meets the target, or why it does not (see {@link Reach#ofLink})
  * @param asymptote  the diversity order the link tends to, where it can be said
  * @param warning    why the fitted order is not to be quoted yet, or empty
  * @param analysis   the comparison with the bounds, or null where there are none
  * @param noBounds   with no analysis: why (e.g. "no outage bounds for this channel")
  */
 public record RunSummary(double targetFer, Optional<DiversityFit> diversity, OptionalDouble snrDbAtTarget,
-                         Optional<AsymptoticDiversity> asymptote, Optional<String> warning, LinkAnalysis analysis,
+                         Reach linkReach, Optional<AsymptoticDiversity> asymptote, Optional<String> warning, LinkAnalysis analysis,
                          String noBounds) {
 
     /** The words when a channel has no outage bounds. */
@@ -37,8 +38,9 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
         Optional<AsymptoticDiversity> asymptote = AsymptoticDiversity.of(link);
         Optional<String> warning = diversity.flatMap(f -> asymptote.isPresent()
                 ? asymptote.get().warning(f, points) : AsymptoticDiversity.warningWithoutAsymptote(f, points));
-        return new RunSummary(targetFer, diversity, a != null ? a.snrDbAtTarget() : TargetCrossing.ofPoints(points,
-                targetFer), asymptote, warning, a, a == null ? noBounds : null);
+        OptionalDouble crossing = a != null ? a.snrDbAtTarget() : TargetCrossing.ofPoints(points, targetFer);
+        return new RunSummary(targetFer, diversity, crossing, Reach.ofLink(points, targetFer, crossing), asymptote,
+                warning, a, a == null ? noBounds : null);
     }
 
     /** The gap in dB to a bound, empty when either side has no SNR at the target or no bounds apply. */
@@ -58,7 +60,7 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
         m.put("diversity_warning", warning.orElse(null));
         m.put("target_fer", targetFer);
         m.put("snr_db_at_target", snrDbAtTarget.isPresent() ? snrDbAtTarget.getAsDouble() : null);
-        m.put("target_note", snrDbAtTarget.isPresent() ? null : Reach.LINK_NOT_REACHED.words());
+        m.put("target_note", snrDbAtTarget.isPresent() ? null : linkReach.words());
         Map<String, Object> gaps = new LinkedHashMap<>();
         Map<String, Object> notes = new LinkedHashMap<>();
         for (Bound b : Bound.values()) {
@@ -113,7 +115,7 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
     private String targetLine() {
         return String.format(Locale.ROOT, "SNR at FER %s: %s", targetFer,
                 snrDbAtTarget.isPresent() ? String.format(Locale.ROOT, "%.2f dB", snrDbAtTarget.getAsDouble())
-                        : "none: " + Reach.LINK_NOT_REACHED.words());
+                        : "none: " + linkReach.words());
     }
 
     /** E.g. {@code mimo outage bound at FER 0.01: 9.80 dB (outside the swept range; …), gap 14.20 dB}. */

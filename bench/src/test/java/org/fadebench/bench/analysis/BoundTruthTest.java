@@ -74,6 +74,26 @@ class BoundTruthTest {
         assertEquals(0.0, high.value(Bound.STBC));
     }
 
+    /**
+     * A link already below the target at its lowest SNR did reach it, below the sweep: it is told
+     * apart from one that never falls to it, in the terminal's and the JSON's words.
+     */
+    @Test
+    void linkBelowTheTargetFromTheStartIsNotALinkThatNeverReachedIt() {
+        LinkSettings bpsk = new LinkSettings(Modulation.BPSK, SpaceTimeCodes.NONE, 1, 1, Fading.RAYLEIGH, 100, 0);
+        // descending order on purpose: the lowest SNR decides, not the first point
+        List<PointResult> low = List.of(point(1, 30, 2, 1000), point(0, 20, 5, 1000));
+        RunSummary below = RunSummary.of(bpsk, low, null, 0.01, RunSummary.NO_BOUNDS);
+        assertEquals(Reach.LINK_BELOW_RANGE, below.linkReach());
+        assertEquals(Reach.LINK_BELOW_RANGE.words(), below.toJson().get("target_note"));
+        assertTrue(below.lines().get(1).contains("already below the target at the lowest swept SNR"),
+                below.lines().toString());
+        List<PointResult> high = List.of(point(0, 0, 900, 1000), point(1, 5, 500, 1000));
+        RunSummary never = RunSummary.of(bpsk, high, null, 0.01, RunSummary.NO_BOUNDS);
+        assertEquals(Reach.LINK_NOT_REACHED, never.linkReach());
+        assertEquals(Reach.LINK_NOT_REACHED.words(), never.toJson().get("target_note"));
+    }
+
     /** Each way of not reaching the target has its own words. */
     @Test
     void notReachedMeansOneThingEach() {
