@@ -95,6 +95,11 @@ class MatrixMarketReaderTest {
         assertTrue(missing.endsWith("none.mtx: no such file; valid: a Matrix Market file"), missing);
         String folder = assertThrows(IllegalArgumentException.class, () -> MatrixMarketReader.read(dir)).getMessage();
         assertTrue(folder.contains(": is a folder"), folder);
+        Path device = Path.of("/dev/null");
+        if (Files.exists(device)) {
+            String special = assertThrows(IllegalArgumentException.class, () -> MatrixMarketReader.read(device)).getMessage();
+            assertTrue(special.endsWith(": not a regular file (a pipe or a device?); valid: a Matrix Market file"), special);
+        }
         Path file = write("%%MatrixMarket matrix coordinate pattern general\n1 1 1\n1 1\n");
         assertEquals(1, MatrixMarketReader.read(file, new MatrixMarketReader.Limits(Files.size(file), 1, 1)).edges());
         String large = assertThrows(IllegalArgumentException.class,
