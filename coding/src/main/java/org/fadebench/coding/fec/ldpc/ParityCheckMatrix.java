@@ -1,5 +1,6 @@
 package org.fadebench.coding.fec.ldpc;
 
+import java.io.Serializable;
 import java.util.Arrays;
 import java.util.OptionalInt;
 
@@ -7,9 +8,12 @@ import java.util.OptionalInt;
  * A sparse binary parity-check matrix H (m rows = check nodes, n columns = variable nodes), held
  * both by rows and by columns in compressed form: {@code rowStart[i] .. rowStart[i + 1]} index the
  * ascending columns of row i in {@code rowColumns}, and likewise {@code columnStart} and
- * {@code columnRows} by column. No entry is an object. Immutable.
+ * {@code columnRows} by column. No entry is an object. Immutable and serialisable (a run plan may hold one).
  */
-public final class ParityCheckMatrix {
+public final class ParityCheckMatrix implements Serializable {
+
+    private static final long serialVersionUID = 1L;
+
 
     private final int rows;
     private final int columns;

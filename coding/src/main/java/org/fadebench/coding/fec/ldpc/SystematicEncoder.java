@@ -13,7 +13,7 @@ import java.util.Arrays;
  * written. A reduced pivot row i reads c[pivot_i] + Σ_j R_ij·c[info_j] = 0, so each parity bit is
  * the parity of R_i masked by the information bits. Encoding allocates nothing; not thread-safe.
  */
-public final class SystematicEncoder {
+public final class SystematicEncoder implements LdpcEncoder {
 
     private final int n;
     private final int[] infoColumns;
@@ -86,6 +86,7 @@ public final class SystematicEncoder {
      * code bits at {@code coded[codedOff ..]}, in H's column order: information bit t goes to
      * column {@code columnOrder()[t]}, and H·c = 0.
      */
+    @Override
     public void encode(byte[] info, int off, byte[] coded, int codedOff) {
         Arrays.fill(packedInfo, 0L);
         for (int t = 0; t < infoColumns.length; t++) {
