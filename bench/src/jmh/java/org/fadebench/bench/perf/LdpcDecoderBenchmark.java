@@ -25,7 +25,7 @@ import org.openjdk.jmh.annotations.State;
 public class LdpcDecoderBenchmark extends ThroughputBenchmark {
 
     private static final int ITERATIONS = 10;
-    private static final int LANES = 64;
+    private static final int LANES = 128;
     private static final int INFO_BITS = 1024;
 
     /**

@@ -20,10 +20,12 @@ import org.fadebench.coding.fec.Lanes;
  * <p>Layout: every quantity is a row over lanes, lane index innermost ({@code check[e][lane]} per
  * edge e in row order, {@code posterior[j][lane]} per column j), and the check update is a few
  * short loops over lanes with branch-free selects (sign masks from arithmetic shifts), the form the
- * JIT's loop vectoriser takes (see the Viterbi decoder). Per check row: the first loop over its
- * edges computes Q = P − R into the message row and tracks per lane the least and second least |Q|,
- * the edge of the least and the sign parity; one loop corrects the two minima; the second loop over
- * the edges writes R = ±(min of the others) and P = Q + R.
+ * JIT's loop vectoriser takes (see the Viterbi decoder; C2 in Java 17 vectorises only short loop
+ * bodies, and no 16-bit min, so the messages are ints and each step its own loop). Per check row
+ * and edge: Q = P − R into the message row with the sign parity, then the least and second least
+ * |Q| per lane; one loop corrects the two minima; then per edge R = ±(the corrected least of the
+ * others) and P = Q + R. The edge of the least is not kept: an edge whose |Q| equals the least takes
+ * the second least, which on a tie is the same value.
  *
  * <p>Early stop: after each iteration every lane's syndrome is computed from the signs of P (one
  * exclusive-or per edge and lane). A lane whose checks all hold is done: its hard decisions are
@@ -52,7 +54,8 @@ final class FixedPointDecoder extends LayeredDecoder {
     private final int[][] decided;
     private final int[] least;
     private final int[] second;
-    private final int[] leastEdge;
+    private final int[] leastOut;
+    private final int[] gap;
     private final int[] parity;
     private final int[] syndrome;
     private final int[] failed;
@@ -73,7 +76,8 @@ final class FixedPointDecoder extends LayeredDecoder {
         decided = new int[columns][lanes];
         least = new int[lanes];
         second = new int[lanes];
-        leastEdge = new int[lanes];
+        leastOut = new int[lanes];
+        gap = new int[lanes];
         parity = new int[lanes];
         syndrome = new int[lanes];
         failed = new int[lanes];
@@ -85,7 +89,7 @@ final class FixedPointDecoder extends LayeredDecoder {
     static long bytes(ParityCheckMatrix h, int lanes) {
         long row = 4L * lanes;
         return sharedBytes(h, lanes) + 3 * tableBytes(h.columns(), row) + tableBytes(h.edges(), row)
-                + 7 * Lanes.rowBytes(row) + Lanes.rowBytes(lanes);
+                + 8 * Lanes.rowBytes(row) + Lanes.rowBytes(lanes);
     }
 
     /** The quantised value of a channel LLR. */
@@ -202,17 +206,15 @@ final class FixedPointDecoder extends LayeredDecoder {
         for (int e = from; e < to; e++) {
             int[] r = check[e];
             subtract(posterior[edgeColumn[e]], r, n);
-            minima(r, e - from, n);
+            minima(r, n);
         }
         if (normalised) {
-            scale(least, n);
-            scale(second, n);
+            scale(n);
         } else {
-            lessOffset(least, n);
-            lessOffset(second, n);
+            lessOffset(n);
         }
         for (int e = from; e < to; e++) {
-            scatter(posterior[edgeColumn[e]], check[e], e - from, n);
+            scatter(posterior[edgeColumn[e]], check[e], n);
         }
     }
 
@@ -230,55 +232,71 @@ final class FixedPointDecoder extends LayeredDecoder {
      * Edge k of a row, its Q in {@code q}: the least and second least |Q| and the edge of the
      * least updated (kept apart from {@link #subtract}: the JIT vectorises only short loop bodies).
      */
-    private void minima(int[] q, int k, int n) {
+    private void minima(int[] q, int n) {
         final int[] m1 = least;
         final int[] m2 = second;
-        final int[] at = leastEdge;
         for (int l = 0; l < n; l++) {
             int v = q[l];
             int s = v >> 31;
             int a = (v ^ s) - s;
             int low = m1[l];
             int d = a - low;
-            int below = d >> 31;
-            int cut = d & below;
+            int cut = d & (d >> 31);
             m1[l] = low + cut;
             int high = a - cut - m2[l];
             m2[l] += high & (high >> 31);
-            at[l] = (at[l] & ~below) | (k & below);
         }
     }
 
-    /** m = ⌊min(m, MESSAGE_LIMIT)·factor/16⌋. */
-    private void scale(int[] m, int n) {
-        final int f = factor;
-        for (int l = 0; l < n; l++) {
-            int d = m[l] - MESSAGE_LIMIT;
-            m[l] = ((m[l] - (d & ~(d >> 31))) * f) >> 4;
-        }
-    }
-
-    /** m = max(min(m, MESSAGE_LIMIT) − offset, 0). */
-    private void lessOffset(int[] m, int n) {
-        final int b = offset;
-        for (int l = 0; l < n; l++) {
-            int d = m[l] - MESSAGE_LIMIT;
-            int v = m[l] - (d & ~(d >> 31)) - b;
-            m[l] = v & ~(v >> 31);
-        }
-    }
-
-    /** Edge k of a row: R = ±(the corrected least |Q| of the others), P = Q + R. */
-    private void scatter(int[] p, int[] r, int k, int n) {
+    /**
+     * The minima corrected, m ↦ ⌊min(m, MESSAGE_LIMIT)·factor/16⌋, and {@code second} made the
+     * difference of the corrected second and least.
+     */
+    private void scale(int n) {
         final int[] m1 = least;
         final int[] m2 = second;
-        final int[] at = leastEdge;
+        final int[] c1 = leastOut;
+        final int[] c2 = gap;
+        final int f = factor;
+        for (int l = 0; l < n; l++) {
+            int low = ((m1[l] - MESSAGE_LIMIT >> 31 & m1[l] - MESSAGE_LIMIT) + MESSAGE_LIMIT) * f >> 4;
+            int high = ((m2[l] - MESSAGE_LIMIT >> 31 & m2[l] - MESSAGE_LIMIT) + MESSAGE_LIMIT) * f >> 4;
+            c1[l] = low;
+            c2[l] = high - low;
+        }
+    }
+
+    /**
+     * The minima corrected, m ↦ max(min(m, MESSAGE_LIMIT) − offset, 0), and {@code second} made
+     * the difference of the corrected second and least.
+     */
+    private void lessOffset(int n) {
+        final int[] m1 = least;
+        final int[] m2 = second;
+        final int[] c1 = leastOut;
+        final int[] c2 = gap;
+        final int b = MESSAGE_LIMIT - offset;
+        for (int l = 0; l < n; l++) {
+            int low = (m1[l] - MESSAGE_LIMIT >> 31 & m1[l] - MESSAGE_LIMIT) + b;
+            int high = (m2[l] - MESSAGE_LIMIT >> 31 & m2[l] - MESSAGE_LIMIT) + b;
+            low &= ~(low >> 31);
+            high &= ~(high >> 31);
+            c1[l] = low;
+            c2[l] = high - low;
+        }
+    }
+
+    /** Edge k of a row: R = ±(the corrected least |Q| of the others), P = Q + R; m2 holds the difference. */
+    private void scatter(int[] p, int[] r, int n) {
+        final int[] m1 = least;
+        final int[] c1 = leastOut;
+        final int[] c2 = gap;
         final int[] sign = parity;
         for (int l = 0; l < n; l++) {
             int q = r[l];
-            int own = ((at[l] ^ k) - 1) >> 31;
-            int low = m1[l];
-            int mag = low + ((m2[l] - low) & own);
+            int s0 = q >> 31;
+            int own = (((q ^ s0) - s0 ^ m1[l]) - 1) >> 31;
+            int mag = c1[l] + (c2[l] & own);
             int s = (sign[l] ^ q) >> 31;
             int v = (mag ^ s) - s;
             r[l] = v;
