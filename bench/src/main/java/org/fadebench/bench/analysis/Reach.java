@@ -18,6 +18,11 @@ public enum Reach {
      * bisection; Monte Carlo: extra points beyond the sweep, see {@link BoundCurves#reaching}).
      */
     OUTSIDE_RANGE("outside the swept range; the bound was computed beyond it"),
+    /**
+     * A closed-form curve stays above the target at every SNR (the normal approximation of a frame
+     * of a few bits, whose limit at high SNR lies above the target).
+     */
+    NEVER_REACHED("the curve stays above the target FER at every SNR"),
     /** The simulated link did not fall to the target FER at any swept SNR. */
     LINK_NOT_REACHED("the link did not reach the target FER in the swept range"),
     /** The simulated FER is already at or below the target at the lowest swept SNR. */
