@@ -50,6 +50,9 @@ public record NormalApproximation(Modulation modulation, int symbols, int payloa
     /** Finest step of that grid, dB. */
     static final double GRID_STEP_DB = 0.02;
 
+    /** The value at which the drawn curve starts, coming down from the top of the plot. */
+    static final double GRID_TOP = 0.99;
+
     public NormalApproximation {
         if (modulation == null) {
             throw new IllegalArgumentException("modulation must be given");
@@ -107,20 +110,28 @@ public record NormalApproximation(Modulation modulation, int symbols, int payloa
     }
 
     /**
-     * The SNRs at which the plot draws the curve: from the lowest to the highest swept SNR, in
+     * The SNRs at which the plot draws the curve: over the swept range, widened to where the curve
+     * falls from {@value #GRID_TOP} to {@code floor} (at most {@link BoundCurves#REACH_LIMIT_DB} dB
+     * beyond the swept range), so that a curve far from the simulated one still shows; in
      * {@value #GRID_POINTS} equal steps or steps of {@value #GRID_STEP_DB} dB, whichever is coarser
      * (the curve falls by decades within a dB, so the swept points alone would not show it).
+     *
+     * @param floor the lowest value the plot shows, in (0, 1)
      */
-    public static double[] grid(double[] sweptSnrDb) {
+    public double[] grid(double[] sweptSnrDb, double floor) {
         double low = Arrays.stream(sweptSnrDb).min().orElseThrow();
         double high = Arrays.stream(sweptSnrDb).max().orElseThrow();
-        int steps = (int) Math.min(GRID_POINTS, Math.ceil((high - low) / GRID_STEP_DB));
+        double from = Math.max(low - BoundCurves.REACH_LIMIT_DB,
+                Math.min(low, TargetCrossing.ofClosedForm(this::fer, GRID_TOP).orElse(low)));
+        double to = Math.min(high + BoundCurves.REACH_LIMIT_DB,
+                Math.max(high, TargetCrossing.ofClosedForm(this::fer, floor).orElse(high)));
+        int steps = (int) Math.min(GRID_POINTS, Math.ceil((to - from) / GRID_STEP_DB));
         if (steps < 1) {
-            return new double[] {low};
+            return new double[] {from};
         }
         double[] grid = new double[steps + 1];
         for (int i = 0; i <= steps; i++) {
-            grid[i] = i == steps ? high : low + (high - low) * i / steps;
+            grid[i] = i == steps ? to : from + (to - from) * i / steps;
         }
         return grid;
     }

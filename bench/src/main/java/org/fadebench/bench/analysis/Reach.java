@@ -14,10 +14,11 @@ public enum Reach {
     /** The curve crosses the target within the swept SNR range. */
     IN_RANGE("within the swept range"),
     /**
-     * A bound crosses the target outside the swept range; the SNR is still given (closed form:
-     * bisection; Monte Carlo: extra points beyond the sweep, see {@link BoundCurves#reaching}).
+     * A bound or the normal approximation crosses the target outside the swept range; the SNR is
+     * still given (closed form: bisection; Monte Carlo: extra points beyond the sweep, see
+     * {@link BoundCurves#reaching}).
      */
-    OUTSIDE_RANGE("outside the swept range; the bound was computed beyond it"),
+    OUTSIDE_RANGE("outside the swept range; the curve was computed beyond it"),
     /**
      * A closed-form curve stays above the target at every SNR (the normal approximation of a frame
      * of a few bits, whose limit at high SNR lies above the target).
