@@ -21,7 +21,10 @@ import org.apache.commons.math3.analysis.polynomials.PolynomialSplineFunction;
  * two-dimensional product rule over the full point set gives the same number (tested).
  *
  * <p>Accuracy (measured against adaptive Gauss–Legendre integration for every axis size from −20
- * to 60 dB): the quadrature error is below 3·10⁻⁷ bits per axis. {@link #bits(double)} reads a
+ * to 60 dB): the quadrature error is below 3·10⁻⁷ bits per axis. The dispersion of
+ * {@link #density} (measured the same way, BPSK to 64-QAM, −10 to 50 dB) is within 5·10⁻⁶ bits²
+ * per symbol, worst near the SNR where the information saturates (7 dB for BPSK, 24 dB for
+ * 64-QAM), and within 10⁻⁹ for BPSK up to 0 dB. {@link #bits(double)} reads a
  * natural cubic spline through a table on {@value #TABLE_LOW_DB} .. {@value #TABLE_HIGH_DB} dB in
  * steps of {@value #TABLE_STEP_DB} dB (interpolation error below 10⁻⁷ bits) and computes
  * outside it. Instances are built once per (modulation, kind) and cached; they are immutable.
