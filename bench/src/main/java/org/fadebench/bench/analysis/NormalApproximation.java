@@ -2,6 +2,7 @@ package org.fadebench.bench.analysis;
 
 import java.util.Arrays;
 import java.util.Optional;
+import java.util.stream.DoubleStream;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.modem.ErrorRates;
 import org.fadebench.modem.Modulation;
@@ -110,30 +111,31 @@ public record NormalApproximation(Modulation modulation, int symbols, int payloa
     }
 
     /**
-     * The SNRs at which the plot draws the curve: over the swept range, widened to where the curve
-     * falls from {@value #GRID_TOP} to {@code floor} (at most {@link BoundCurves#REACH_LIMIT_DB} dB
-     * beyond the swept range), so that a curve far from the simulated one still shows; in
-     * {@value #GRID_POINTS} equal steps or steps of {@value #GRID_STEP_DB} dB, whichever is coarser
-     * (the curve falls by decades within a dB, so the swept points alone would not show it).
+     * The SNRs at which the plot draws the curve: where it falls from {@value #GRID_TOP} to
+     * {@code floor}, in {@value #GRID_POINTS} equal steps or steps of {@value #GRID_STEP_DB} dB,
+     * whichever is coarser, preceded by the lowest swept SNR when that lies below (the curve is
+     * flat near 1 there). The fall may lie outside the swept range, up to
+     * {@link BoundCurves#REACH_LIMIT_DB} dB beyond it; the plot then widens to show it, since the
+     * swept points alone would not (the curve falls by decades within a dB).
      *
      * @param floor the lowest value the plot shows, in (0, 1)
      */
     public double[] grid(double[] sweptSnrDb, double floor) {
         double low = Arrays.stream(sweptSnrDb).min().orElseThrow();
         double high = Arrays.stream(sweptSnrDb).max().orElseThrow();
-        double from = Math.max(low - BoundCurves.REACH_LIMIT_DB,
-                Math.min(low, TargetCrossing.ofClosedForm(this::fer, GRID_TOP).orElse(low)));
-        double to = Math.min(high + BoundCurves.REACH_LIMIT_DB,
-                Math.max(high, TargetCrossing.ofClosedForm(this::fer, floor).orElse(high)));
+        double top = TargetCrossing.ofClosedForm(this::fer, GRID_TOP).orElse(low);
+        double bottom = TargetCrossing.ofClosedForm(this::fer, floor).orElse(high);
+        double from = Math.max(low - BoundCurves.REACH_LIMIT_DB, Math.min(top, high + BoundCurves.REACH_LIMIT_DB));
+        double to = Math.max(from, Math.min(bottom, high + BoundCurves.REACH_LIMIT_DB));
         int steps = (int) Math.min(GRID_POINTS, Math.ceil((to - from) / GRID_STEP_DB));
-        if (steps < 1) {
-            return new double[] {from};
+        DoubleStream.Builder grid = DoubleStream.builder();
+        if (low < from) {
+            grid.add(low);
         }
-        double[] grid = new double[steps + 1];
-        for (int i = 0; i <= steps; i++) {
-            grid[i] = i == steps ? to : from + (to - from) * i / steps;
+        for (int i = 0; i < steps; i++) {
+            grid.add(from + (to - from) * i / steps);
         }
-        return grid;
+        return grid.add(to).build().toArray();
     }
 
     /** This curve against the target FER over the swept SNRs: crossing (by bisection) and where it lies. */

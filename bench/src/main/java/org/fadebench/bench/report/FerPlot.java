@@ -423,9 +423,9 @@ public final class FerPlot {
 
     /**
      * Dataset 3: the normal approximation of an AWGN link ({@link NormalApproximation}) as an orange
-     * dash-dot-dot line. Unlike the bounds it is drawn on a fine grid across the swept range, widened
-     * to where it falls through the axis ({@link NormalApproximation#grid}), since it falls by decades
-     * within a dB; it ends at the first value below the axis.
+     * dash-dot-dot line. Unlike the bounds it is drawn on a fine grid over its fall from near 1 to
+     * the axis floor ({@link NormalApproximation#grid}), within the swept range or beyond it, since
+     * it falls by decades within a dB; it ends at the first value below the axis.
      */
     private static void addNormalApproximation(XYPlot plot, NormalApproximation a, List<PointResult> points,
                                                double floor, DoubleUnaryOperator x) {
