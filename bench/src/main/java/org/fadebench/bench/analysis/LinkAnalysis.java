@@ -65,7 +65,10 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
             return gapDb(linkSnrDb).isPresent() ? null : !reach.hasSnr() ? reach : linkReach;
         }
 
-        /** The words of {@link #gapReach} (with the draws that would resolve an unresolved bound); null when there is a gap. */
+        /**
+         * The words of {@link #gapReach} (with the draws that would resolve an unresolved bound);
+         * null when there is a gap.
+         */
         public String gapNote(OptionalDouble linkSnrDb, Reach linkReach) {
             Reach r = gapReach(linkSnrDb, linkReach);
             return r == null ? null : r == reach ? note() : r.words();
@@ -127,7 +130,8 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
         double low = Arrays.stream(snrDb).min().orElseThrow();
         double high = Arrays.stream(snrDb).max().orElseThrow();
         Reach reach = crossing.isEmpty() ? Reach.NEVER_REACHED
-                : crossing.getAsDouble() >= low && crossing.getAsDouble() <= high ? Reach.IN_RANGE : Reach.OUTSIDE_RANGE;
+                : crossing.getAsDouble() >= low && crossing.getAsDouble() <= high ? Reach.IN_RANGE
+                : Reach.OUTSIDE_RANGE;
         return new BoundAnalysis(crossing, reach, fit(f, snrDb, tailPoints));
     }
 

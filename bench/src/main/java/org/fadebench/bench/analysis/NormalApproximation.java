@@ -45,7 +45,7 @@ public record NormalApproximation(Modulation modulation, int symbols, int payloa
     /** Key in results.json. */
     public static final String KEY = "normal_approx";
 
-    /** Most points of the curve drawn across the swept range (see {@link #grid}). */
+    /** Most points of the curve the plot draws (see {@link #grid}). */
     static final int GRID_POINTS = 400;
 
     /** Finest step of that grid, dB. */
@@ -90,11 +90,6 @@ public record NormalApproximation(Modulation modulation, int symbols, int payloa
     public double fer(double snrDb) {
         MutualInformation.Density d = density(snrDb);
         return fer(d.bits(), d.dispersion(), symbols, payloadBits);
-    }
-
-    /** {@link #fer(double)} at every SNR of {@code snrDb}. */
-    public double[] fer(double[] snrDb) {
-        return Arrays.stream(snrDb).map(this::fer).toArray();
     }
 
     /**

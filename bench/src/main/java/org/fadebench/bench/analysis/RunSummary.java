@@ -73,7 +73,7 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
             gaps.put(b.key(), g.isPresent() ? g.getAsDouble() : null);
             notes.put(b.key(), analysis == null ? noBounds : analysis.gapNote(b));
         }
-        gaps.put(NormalApproximation.KEY, LinkAnalysis.orNull(normal == null ? OptionalDouble.empty() : normal.gapDb(snrDbAtTarget)));
+        gaps.put(NormalApproximation.KEY, normal == null ? null : LinkAnalysis.orNull(normal.gapDb(snrDbAtTarget)));
         notes.put(NormalApproximation.KEY, normal == null ? NormalApproximation.NOT_APPLICABLE
                 : normal.gapNote(snrDbAtTarget, linkReach));
         m.put("gap_db", gaps);

@@ -104,7 +104,8 @@ public final class FerPlot {
     static final String BER_AXIS_TITLE = "BER (not comparable with outage)";
     static final String STYLE_WORDS = "simulated: solid lines with markers   ·   outage bounds: broken lines"
             + "   ·   grey line: target FER";
-    static final String NORMAL_APPROX_WORDS = "AWGN finite-length limit (normal approximation): orange dash-dot-dot line";
+    static final String NORMAL_APPROX_WORDS =
+            "AWGN finite-length limit (normal approximation): orange dash-dot-dot line";
 
     private static final Color BLUE = new Color(0x0072B2);
     private static final Color VERMILLION = new Color(0xD55E00);
