@@ -33,7 +33,8 @@ class LdpcCodeFileTest {
         return Files.writeString(dir.resolve(name), text, StandardCharsets.UTF_8);
     }
 
-    private static void assertSame(ParityCheckMatrix expected, ParityCheckMatrix actual) {
+    /** The two matrices have the same shape and the same ones. */
+    static void assertSame(ParityCheckMatrix expected, ParityCheckMatrix actual) {
         assertEquals(expected.rows(), actual.rows());
         assertEquals(expected.columns(), actual.columns());
         assertEquals(expected.edges(), actual.edges());
