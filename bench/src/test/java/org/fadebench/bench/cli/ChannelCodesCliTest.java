@@ -175,13 +175,18 @@ class ChannelCodesCliTest {
     }
 
     @Test
-    void refusesFilesThatAreMissingFoldersOrDevices() throws IOException {
+    void refusesFilesThatAreMissingUnreadableFoldersOrDevices() throws IOException {
         Path missing = tmp.resolve("none.mtx");
         assertRefused("--fec-file: parity-check file " + missing + ": no such file; valid: a Matrix Market file",
                 "codes", "--fec-file", missing.toString());
         Path folder = Files.createDirectory(tmp.resolve("folder.yaml"));
         assertRefused("--fec-file: parity-check file " + folder + ": is a folder; valid: a YAML base matrix",
                 "codes", "--fec-file", folder.toString());
+        Path locked = Files.copy(EXAMPLE, tmp.resolve("locked.yaml"));
+        if (locked.toFile().setReadable(false, false) && !Files.isReadable(locked)) { // not for a superuser
+            assertRefused("--fec-file: parity-check file " + locked + ": cannot be read (AccessDeniedException); valid: a"
+                    + " readable UTF-8 YAML file", "codes", "--fec-file", locked.toString());
+        }
         if (Files.exists(Path.of("/dev/null"))) {
             Path device = Files.createSymbolicLink(tmp.resolve("device.mtx"), Path.of("/dev/null"));
             assertRefused("--fec-file: parity-check file " + device + ": not a regular file (a pipe or a device?); valid:"

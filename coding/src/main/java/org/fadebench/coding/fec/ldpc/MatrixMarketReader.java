@@ -22,8 +22,8 @@ import java.util.Locale;
  * skipped. Limits against hostile files ({@link MatrixLimits}, shared with the other formats): a
  * regular file of at most {@code fileBytes} bytes, rows and columns up to {@code dimension}, entry
  * lines up to {@code edges}, a shape within the GF(2) elimination's words (checked at the size
- * line, before any entry is read); an entry given twice or outside the declared size is refused. Arrays grow with the entries actually read,
- * never from the count the file claims. Every problem is an {@link IllegalArgumentException} with
+ * line, before any entry is read); an entry given twice or outside the declared size is refused.
+ * Arrays grow with the entries actually read, never from the count the file claims. Every problem is an {@link IllegalArgumentException} with
  * a one-line message naming the file, the line and what is valid.
  */
 public final class MatrixMarketReader {
