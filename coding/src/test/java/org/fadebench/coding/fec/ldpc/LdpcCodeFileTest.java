@@ -152,6 +152,20 @@ class LdpcCodeFileTest {
                 assertThrows(IllegalArgumentException.class, () -> LdpcCodeFile.read(mtx)).getMessage());
     }
 
+    /**
+     * The elimination's dense copy must fit in three quarters of the free heap: 512 rows of 16 words
+     * take 512 x (16 + 128) bytes = 72 KiB (a long[] of 16 with its 16-byte header).
+     */
+    @Test
+    void refusesAMatrixWhoseEliminationWouldNotFitTheHeap() {
+        ParityCheckMatrix h = new QcBaseMatrix(new int[][] {{0, 0}}, 512).expand(); // [I I]: 512 x 1024, full rank
+        LdpcCodeFile.check(h, "h.mtx", 72 * 1024 / 3 * 4);
+        assertEquals("parity-check file h.mtx: the GF(2) elimination that derives the encoder of its 512 x 1024 matrix"
+                + " needs about 1 MiB, but the Java heap has 1 MiB free; valid: a smaller matrix, or a larger heap (java"
+                + " -Xmx...)", assertThrows(IllegalArgumentException.class,
+                        () -> LdpcCodeFile.check(h, "h.mtx", 72 * 1024 / 3 * 4 - 4)).getMessage());
+    }
+
     @Test
     void refusesOtherExtensionsAndFilesThatAreNotRegular() throws IOException {
         Path text = write("h.txt", "lifting: 1\nbase: [[0]]\n");
