@@ -96,6 +96,18 @@ class LdpcCodeFileTest {
         assertEquals("parity-check file " + file + ": " + expected, message);
     }
 
+    /**
+     * A QC base matrix of two rows and no zero block is rank-deficient: the 7 rows of each block row
+     * add up to the all-ones row, so the two block rows' sums coincide (worked by hand).
+     */
+    @Test
+    void refusesAQcMatrixWithoutZeroBlocks() throws IOException {
+        Path file = write("full.yaml", "lifting: 7\nbase:\n  - [0, 1, 2, 3]\n  - [0, 2, 4, 6]\n");
+        String message = assertThrows(IllegalArgumentException.class, () -> LdpcCodeFile.read(file)).getMessage();
+        assertTrue(message.startsWith("parity-check file " + file + ": rank ") && message.contains(" over GF(2) is below"
+                + " its 14 rows"), message);
+    }
+
     /** Each problem of a YAML file: one line naming the file, the line and what is valid. */
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
