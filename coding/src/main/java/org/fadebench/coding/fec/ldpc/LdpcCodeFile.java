@@ -81,7 +81,7 @@ public final class LdpcCodeFile {
     }
 
     /** Parses YAML text in the layout above; {@code source} names it in messages. Not yet {@link #check checked}. */
-    public static ParityCheckMatrix parseYaml(String text, String source, MatrixLimits limits) {
+    static ParityCheckMatrix parseYaml(String text, String source, MatrixLimits limits) {
         return new YamlParser(source, limits).base(compose(text, source)).expand();
     }
 
