@@ -188,6 +188,24 @@ final class ShiftSearch {
         return shifts;
     }
 
+    /**
+     * Base cycles of length 4 (or 6) whose shift sum is 0 mod Z in the given shifts of this
+     * template, counting those of free entries only (each lifts to Z cycles of that length).
+     */
+    long closedCycles(int[][] shifts, int lifting, int length) {
+        int[] value = new int[entryRow.length];
+        for (int e = 0; e < value.length; e++) {
+            value[e] = shifts[entryRow[e]][entryColumn[e]];
+        }
+        int[] forbidden = new int[lifting];
+        long closed = 0;
+        for (int e = fixed; e < value.length; e++) {
+            forbid(length == 4 ? fourCycles[e] : sixCycles[e], length, value, lifting, forbidden);
+            closed += forbidden[value[e]];
+        }
+        return closed;
+    }
+
     /** Counts, for each value of the entry, the cycles in {@code groups} it would complete. */
     private static void forbid(int[] groups, int length, int[] value, int lifting, int[] forbidden) {
         Arrays.fill(forbidden, 0);
