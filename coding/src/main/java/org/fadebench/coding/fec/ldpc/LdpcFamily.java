@@ -22,7 +22,7 @@ import java.util.concurrent.ConcurrentHashMap;
  *
  * <p>The circulant shifts for each Z come from {@link ShiftSearch} (no 4-cycles wherever the
  * search finds such shifts, as few 6-cycles as it can), computed on first use of a Z and kept
- * (a few milliseconds per Z, at most about 50; the four protographs' cycle lists about 0.4 s at
+ * (a few milliseconds per Z, at most about 25; the four protographs' cycle lists about 0.1 s at
  * class load; wall clock on the development machine, not a benchmark). Girth of H as used
  * ({@code LdpcFamilyTest} pins it):
  * <pre>
