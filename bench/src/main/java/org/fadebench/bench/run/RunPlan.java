@@ -150,7 +150,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
         ChannelSpec channel = withCorrelationMatrices(channelSpec(v), v, nr, mt);
         FrameCoding coding = frameCoding(v);
         int bits = v.isSet(FRAME_BITS) ? v.integer(FRAME_BITS)
-                : coding.coded() ? LinkSettings.DEFAULT_FRAME_BITS
+                : coding.coded() ? coding.scheme().payloadNear(LinkSettings.DEFAULT_FRAME_BITS)
                 : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
         int coherence = v.integer(COHERENCE);
         return parse(null, () -> new LinkSettings(mod, stbc, nr, mt, channel, bits, coherence, dec, coding));
