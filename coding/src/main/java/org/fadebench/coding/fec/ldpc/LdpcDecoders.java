@@ -1,0 +1,31 @@
+package org.fadebench.coding.fec.ldpc;
+
+/**
+ * Makes the LDPC decoders: sum-product always in floating point ({@link FloatingPointDecoder}, the
+ * reference), min-sum and offset min-sum in floating point for now.
+ */
+public final class LdpcDecoders {
+
+    private LdpcDecoders() {
+    }
+
+    /**
+     * A decoder of H by the given settings for up to {@code lanes} frames at once.
+     *
+     * @throws IllegalArgumentException "L lanes; need at least 1" if {@code lanes} is below 1
+     */
+    public static LdpcDecoder create(ParityCheckMatrix h, LdpcDecoding decoding, int lanes) {
+        return new FloatingPointDecoder(h, decoding, lanes);
+    }
+
+    /**
+     * Bytes the buffers of {@link #create}'s decoder take (its arrays with their headers), for a
+     * memory check before a run.
+     *
+     * @throws IllegalArgumentException if {@code lanes} is below 1
+     */
+    public static long bytes(ParityCheckMatrix h, LdpcDecoding decoding, int lanes) {
+        LayeredDecoder.checkLanes(lanes);
+        return FloatingPointDecoder.bytes(h, lanes);
+    }
+}
