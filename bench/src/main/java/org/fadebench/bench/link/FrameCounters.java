@@ -14,7 +14,7 @@ public final class FrameCounters implements Serializable {
      * The name of the decoder iterations' sum in {@link #byName()}, present only when the sum is not
      * 0 (a code whose decoder iterates), so that the files of every other link read as before.
      */
-    public static final String FEC_ITERATIONS = "fec_iterations";
+    public static final String FEC_ITERATIONS = "fec_iterations_sum";
 
     private long frames;
     private long frameErrors;

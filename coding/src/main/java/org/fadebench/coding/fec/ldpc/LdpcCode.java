@@ -87,13 +87,17 @@ public final class LdpcCode implements ChannelCode {
         return source.name();
     }
 
-    /** E.g. "ldpc-r12 (min-sum 0.75, at most 50 iterations)"; "no early stop" when it is off. */
+    /**
+     * E.g. "ldpc-r12, min-sum decoder (factor 0.75), at most 50 iterations", with ", no early stop"
+     * when that is off.
+     */
     @Override
     public String describe() {
-        String correction = decoding.algorithm().corrected()
-                ? " " + BigDecimal.valueOf(decoding.correction()).stripTrailingZeros().toPlainString() : "";
-        return source.describe() + " (" + decoding.algorithm().cliName() + correction + ", at most "
-                + decoding.iterations() + " iterations" + (decoding.earlyStop() ? "" : ", no early stop") + ")";
+        LdpcAlgorithm a = decoding.algorithm();
+        String correction = a.corrected() ? " (" + (a == LdpcAlgorithm.MIN_SUM ? "factor " : "offset ")
+                + BigDecimal.valueOf(decoding.correction()).stripTrailingZeros().toPlainString() + ")" : "";
+        return source.describe() + ", " + a.cliName() + " decoder" + correction + ", at most " + decoding.iterations()
+                + " iterations" + (decoding.earlyStop() ? "" : ", no early stop");
     }
 
     @Override
