@@ -1,0 +1,115 @@
+package org.fadebench.coding.fec.ldpc;
+
+import java.util.concurrent.ConcurrentHashMap;
+
+/**
+ * The built-in quasi-cyclic LDPC family: four protographs of our own design with {@value #BASE_COLUMNS}
+ * base columns each (kb information, mb parity; see {@link Protograph}), lifted, shortened and
+ * punctured to serve any information size k from {@value #MIN_INFO_BITS} to {@value #MAX_INFO_BITS}
+ * (a payload of 64 to 8192 bits with a CRC of up to 32 bits) at exactly the nominal rate:
+ * Z = ⌈k / kb⌉, and round(k / R) bits are sent ({@link LiftedLayout}).
+ *
+ * <p>Information degree profiles, chosen by {@link Protograph#search} (high degrees 4 to 8; lifts
+ * without 4-cycles at k = 256), and
+ * their Gaussian-approximation thresholds on the BI-AWGN channel (Eb/N0 at the design rate):
+ * <ul>
+ * <li>rate 1/2: 12 + 12 columns, 4 of degree 8, 8 of degree 3; σ* = 0.9298, 0.633 dB
+ * <li>rate 2/3: 16 + 8 columns, 4 of degree 8, 12 of degree 3; σ* = 0.7294, 1.492 dB
+ * <li>rate 3/4: 18 + 6 columns, 5 of degree 6, 13 of degree 3; σ* = 0.6406, 2.107 dB
+ * <li>rate 5/6: 20 + 4 columns, 1 of degree 4, 19 of degree 3; σ* = 0.5551, 2.894 dB
+ * </ul>
+ * (BPSK-constrained capacity at these rates is about 0.19, 1.06, 1.63 and 2.36 dB; from memory.)
+ *
+ * <p>The circulant shifts for each Z come from {@link ShiftSearch} (no 4-cycles wherever the
+ * search finds such shifts, as few 6-cycles as it can), computed on first use of a Z and kept.
+ * Constants are serialisable (by name); layouts are not.
+ */
+public enum LdpcFamily {
+
+    R12("ldpc-r12", 12, 12, 8, 4),
+    R23("ldpc-r23", 16, 8, 8, 4),
+    R34("ldpc-r34", 18, 6, 6, 5),
+    R56("ldpc-r56", 20, 4, 4, 1);
+
+    /** Base columns of every protograph of the family. */
+    public static final int BASE_COLUMNS = 24;
+    /** Fewest information bits per codeword. */
+    public static final int MIN_INFO_BITS = 64;
+    /** Most information bits per codeword: 8192 payload bits and a 32-bit CRC. */
+    public static final int MAX_INFO_BITS = 8192 + 32;
+
+    private final String cliName;
+    private final transient Protograph protograph;
+    private final transient ShiftSearch search;
+    private final transient ConcurrentHashMap<Integer, QcBaseMatrix> lifted = new ConcurrentHashMap<>();
+
+    LdpcFamily(String cliName, int infoColumns, int parityColumns, int highDegree, int highCount) {
+        this.cliName = cliName;
+        this.protograph = new Protograph(infoColumns, parityColumns, highDegree, highCount);
+        this.search = new ShiftSearch(protograph.template());
+    }
+
+    /** The name on the command line. */
+    public String cliName() {
+        return cliName;
+    }
+
+    /** The nominal rate kb / {@value #BASE_COLUMNS}, which is also the rate sent. */
+    public double rate() {
+        return (double) protograph.infoColumns() / BASE_COLUMNS;
+    }
+
+    /** Information columns kb of the base matrix. */
+    public int infoColumns() {
+        return protograph.infoColumns();
+    }
+
+    /** The degree distribution of the protograph (edge perspective), the ensemble it was designed as. */
+    public DegreeDistribution ensemble() {
+        return protograph.ensemble();
+    }
+
+    Protograph protograph() {
+        return protograph;
+    }
+
+    /**
+     * The base matrix of shifts for lifting size Z (searched on the first call for a Z, then kept).
+     *
+     * @throws IllegalArgumentException if Z is below 2
+     */
+    public QcBaseMatrix baseMatrix(int lifting) {
+        if (lifting < 2) {
+            throw new IllegalArgumentException("lifting size " + lifting + "; valid: at least 2");
+        }
+        return lifted.computeIfAbsent(lifting, z -> new QcBaseMatrix(search.shifts(z), z));
+    }
+
+    /** The lifting size for k information bits, ⌈k / kb⌉. */
+    public int lifting(int infoBits) {
+        check(infoBits);
+        return (infoBits + protograph.infoColumns() - 1) / protograph.infoColumns();
+    }
+
+    /** Bits sent per codeword of k information bits, round(k / R). */
+    public int sentBits(int infoBits) {
+        check(infoBits);
+        return (int) Math.round((double) infoBits * BASE_COLUMNS / protograph.infoColumns());
+    }
+
+    /**
+     * The code for k information bits, at rate k / round(k / R).
+     *
+     * @throws IllegalArgumentException if k is outside {@value #MIN_INFO_BITS} to {@value #MAX_INFO_BITS}
+     */
+    public CodeLayout layout(int infoBits) {
+        return new LiftedLayout(baseMatrix(lifting(infoBits)), protograph.middleRow(), infoBits, sentBits(infoBits));
+    }
+
+    private void check(int infoBits) {
+        if (infoBits < MIN_INFO_BITS || infoBits > MAX_INFO_BITS) {
+            throw new IllegalArgumentException(cliName + " takes " + MIN_INFO_BITS + " to " + MAX_INFO_BITS
+                    + " information bits per codeword (payload and CRC), got " + infoBits);
+        }
+    }
+}
