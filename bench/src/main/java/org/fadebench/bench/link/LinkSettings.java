@@ -32,6 +32,9 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int receiv
      */
     public static final int DEFAULT_FRAME_BITS = 1024;
 
+    /** Most information bits per frame. */
+    public static final int MAX_FRAME_BITS = 1 << 24;
+
     /** A link equalised by the matched filter. */
     public LinkSettings(Modulation modulation, SpaceTimeCode code, int receiveAntennas, int transmitAntennas,
                         Fading fading, int frameBits, int coherenceSlots) {
@@ -86,7 +89,7 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int receiv
                     + " bits per block, so use a positive multiple of " + blockBits + " (e.g. "
                     + roundUpToBlocks(DEFAULT_FRAME_BITS, modulation, code) + ")");
         }
-        if (frameBits > 1 << 24) {
+        if (frameBits > MAX_FRAME_BITS) {
             throw new InvalidSettingException(RunSettings.FRAME_BITS, frameBits + " is more than the 16777216 supported");
         }
         coding.check(frameBits);

@@ -23,11 +23,11 @@ public final class Gf2Elimination {
      * @throws IllegalArgumentException if the dense copy would exceed {@link #MAX_WORDS}
      */
     static long[][] pack(ParityCheckMatrix h) {
-        int words = (h.columns() + 63) >>> 6;
-        if ((long) words * h.rows() > MAX_WORDS) {
-            throw new IllegalArgumentException("parity-check matrix of " + h.rows() + " x " + h.columns()
-                    + " too large for GF(2) elimination; valid: rows x columns up to " + (MAX_WORDS << 6));
+        String problem = MatrixLimits.denseProblem(h.rows(), h.columns());
+        if (problem != null) {
+            throw new IllegalArgumentException(problem);
         }
+        int words = (h.columns() + 63) >>> 6;
         long[][] rows = new long[h.rows()][words];
         for (int i = 0; i < h.rows(); i++) {
             for (int p = 0; p < h.rowDegree(i); p++) {

@@ -19,27 +19,14 @@ import java.util.Locale;
  * </pre>
  * The banner's words are read without regard to case. Blank lines may stand among the comments and
  * after the last entry, not among the entries. An {@code integer} value must be 0 or 1; a 0 entry is
- * skipped. Limits against hostile files: a regular file of at most {@link Limits#fileBytes} bytes,
- * rows and columns up to {@link Limits#dimension}, entries up to {@link Limits#entries}; an entry
- * given twice or outside the declared size is refused. Arrays grow with the entries actually read,
- * never from the count the file claims. Every problem is an {@link IllegalArgumentException} with
+ * skipped. Limits against hostile files ({@link MatrixLimits}, shared with the other formats): a
+ * regular file of at most {@code fileBytes} bytes, rows and columns up to {@code dimension}, entry
+ * lines up to {@code edges}, a shape within the GF(2) elimination's words (checked at the size
+ * line, before any entry is read); an entry given twice or outside the declared size is refused.
+ * Arrays grow with the entries actually read, never from the count the file claims. Every problem is an {@link IllegalArgumentException} with
  * a one-line message naming the file, the line and what is valid.
  */
 public final class MatrixMarketReader {
-
-    /** The limits a file is held to. */
-    public record Limits(long fileBytes, int dimension, int entries) {
-
-        /** 256 MiB, 2^20 rows and columns, 2^24 entries. */
-        public static final Limits DEFAULT = new Limits(1L << 28, 1 << 20, 1 << 24);
-
-        public Limits {
-            if (fileBytes < 1 || dimension < 1 || dimension > 1 << 20 || entries < 1 || entries > 1 << 24) {
-                throw new IllegalArgumentException("limits " + fileBytes + ", " + dimension + ", " + entries
-                        + "; valid: positive, dimension up to 2^20, entries up to 2^24");
-            }
-        }
-    }
 
     private static final String BANNER_FORM = "%%MatrixMarket matrix coordinate pattern|integer general";
     private static final int KEY_BITS = 20; // a 0-based row or column index below 2^20
@@ -48,25 +35,16 @@ public final class MatrixMarketReader {
     private MatrixMarketReader() {
     }
 
-    /** Reads {@code file} within the {@link Limits#DEFAULT default limits}. */
+    /** Reads {@code file} within the {@link MatrixLimits#DEFAULT default limits}. */
     public static ParityCheckMatrix read(Path file) {
-        return read(file, Limits.DEFAULT);
+        return read(file, MatrixLimits.DEFAULT);
     }
 
     /** Reads {@code file} within {@code limits}. */
-    public static ParityCheckMatrix read(Path file, Limits limits) {
+    public static ParityCheckMatrix read(Path file, MatrixLimits limits) {
         String name = file.toString();
         try {
-            if (!Files.isRegularFile(file)) {
-                throw new IllegalArgumentException("parity-check file " + name + ": "
-                        + (Files.isDirectory(file) ? "is a folder"
-                                : Files.exists(file) ? "not a regular file (a pipe or a device?)" : "no such file")
-                        + "; valid: a Matrix Market file");
-            }
-            if (Files.size(file) > limits.fileBytes()) {
-                throw new IllegalArgumentException("parity-check file " + name + ": larger than the limit of "
-                        + limits.fileBytes() + " bytes; valid: a smaller file");
-            }
+            checkFile(file, limits.fileBytes(), "a Matrix Market file");
             try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.US_ASCII)) {
                 return new Parser(name, limits, in).matrix();
             }
@@ -76,14 +54,33 @@ public final class MatrixMarketReader {
         }
     }
 
+    /**
+     * Refuses, in one line naming the file, a path that is not a regular file (missing, a folder, a
+     * pipe or a device: such a file is never opened) or is larger than {@code maxBytes}.
+     *
+     * @param valid what the file should be, for the message
+     */
+    static void checkFile(Path file, long maxBytes, String valid) throws IOException {
+        if (!Files.isRegularFile(file)) {
+            throw new IllegalArgumentException("parity-check file " + file + ": "
+                    + (Files.isDirectory(file) ? "is a folder"
+                            : Files.exists(file) ? "not a regular file (a pipe or a device?)" : "no such file")
+                    + "; valid: " + valid);
+        }
+        if (Files.size(file) > maxBytes) {
+            throw new IllegalArgumentException("parity-check file " + file + ": larger than the limit of "
+                    + maxBytes + " bytes; valid: a smaller file");
+        }
+    }
+
     private static final class Parser {
 
         private final String name;
-        private final Limits limits;
+        private final MatrixLimits limits;
         private final BufferedReader in;
         private int lineNumber;
 
-        Parser(String name, Limits limits, BufferedReader in) {
+        Parser(String name, MatrixLimits limits, BufferedReader in) {
             this.name = name;
             this.limits = limits;
             this.in = in;
@@ -104,7 +101,11 @@ public final class MatrixMarketReader {
             }
             int rows = whole(dims[0], "rows", limits.dimension());
             int columns = whole(dims[1], "columns", limits.dimension());
-            int entries = whole(dims[2], "entries", limits.entries());
+            int entries = whole(dims[2], "entries", limits.edges());
+            String dense = MatrixLimits.denseProblem(rows, columns);
+            if (dense != null) {
+                throw error(dense);
+            }
             int sizeLine = lineNumber;
             long[] keys = new long[Math.min(entries, 1 << 12)];
             int kept = 0;

@@ -81,7 +81,7 @@ class MatrixMarketReaderTest {
     })
     void refusesEachProblemWithTheLine(String text, String expected) throws IOException {
         Path file = write(text.replace("\\n", "\n"));
-        MatrixMarketReader.Limits limits = new MatrixMarketReader.Limits(1000, 32, 64);
+        MatrixLimits limits = new MatrixLimits(1000, 32, 64);
         String message = assertThrows(IllegalArgumentException.class, () -> MatrixMarketReader.read(file, limits))
                 .getMessage();
         assertTrue(message.startsWith("parity-check file " + file + " " + expected), message);
@@ -101,9 +101,9 @@ class MatrixMarketReaderTest {
             assertTrue(special.endsWith(": not a regular file (a pipe or a device?); valid: a Matrix Market file"), special);
         }
         Path file = write("%%MatrixMarket matrix coordinate pattern general\n1 1 1\n1 1\n");
-        assertEquals(1, MatrixMarketReader.read(file, new MatrixMarketReader.Limits(Files.size(file), 1, 1)).edges());
+        assertEquals(1, MatrixMarketReader.read(file, new MatrixLimits(Files.size(file), 1, 1)).edges());
         String large = assertThrows(IllegalArgumentException.class,
-                () -> MatrixMarketReader.read(file, new MatrixMarketReader.Limits(Files.size(file) - 1, 1, 1))).getMessage();
+                () -> MatrixMarketReader.read(file, new MatrixLimits(Files.size(file) - 1, 1, 1))).getMessage();
         assertTrue(large.contains(": larger than the limit of " + (Files.size(file) - 1) + " bytes"), large);
     }
 }
