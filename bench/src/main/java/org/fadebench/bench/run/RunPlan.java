@@ -40,8 +40,8 @@ import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
 import org.fadebench.coding.fec.ldpc.LdpcAlgorithm;
 import org.fadebench.coding.fec.ldpc.LdpcCode;
+import org.fadebench.coding.fec.ldpc.LdpcCodeFile;
 import org.fadebench.coding.fec.ldpc.LdpcDecoding;
-import org.fadebench.coding.fec.ldpc.MatrixMarketReader;
 import org.fadebench.coding.fec.ldpc.ParityCheckMatrix;
 import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCode;
@@ -419,7 +419,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
         }
         if (v.isSet(FEC_FILE)) {
             Path file = Path.of(v.text(FEC_FILE)).toAbsolutePath().normalize();
-            ParityCheckMatrix h = parse(FEC_FILE, () -> parityCheckFile(file));
+            ParityCheckMatrix h = parse(FEC_FILE, () -> LdpcCodeFile.read(file));
             LdpcDecoding decoding = ldpcDecoding(v);
             return parse(FEC_FILE, () -> LdpcCode.ofMatrix(file.getFileName().toString(), h, decoding));
         }
@@ -433,18 +433,6 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
             }
         }
         return named;
-    }
-
-    /**
-     * The parity-check matrix of an LDPC code file: the one place that knows the file types. Matrix
-     * Market ({@code .mtx}) today; the QC base-matrix YAML reader is to be called from here.
-     */
-    private static ParityCheckMatrix parityCheckFile(Path file) {
-        String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
-        if (name.endsWith(".mtx")) {
-            return MatrixMarketReader.read(file);
-        }
-        throw new IllegalArgumentException(file + ": unknown code file type; valid ending: .mtx (Matrix Market)");
     }
 
     /** How an LDPC code is decoded: the algorithm, the most iterations, the correction and early stop. */

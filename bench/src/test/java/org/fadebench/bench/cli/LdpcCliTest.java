@@ -119,15 +119,16 @@ class LdpcCliTest {
         HostileInputCliTest.assertRefused(CliTest.run("run", "--fec-full-iterations", "--out", out.toString()),
                 "--fec-full-iterations goes with an LDPC code (--fec-file, or an ldpc code of --fec); --fec none has "
                         + "no such decoder", out);
-        Path yaml = Files.writeString(tmp.resolve("code.txt"), "not a code");
-        HostileInputCliTest.assertRefused(CliTest.run("run", "--fec-file", yaml.toString(), "--out", out.toString()),
-                "--fec-file: " + yaml.toAbsolutePath() + ": unknown code file type; valid ending: .mtx", out);
+        Path text = Files.writeString(tmp.resolve("code.txt"), "not a code");
+        HostileInputCliTest.assertRefused(CliTest.run("run", "--fec-file", text.toString(), "--out", out.toString()),
+                "--fec-file: parity-check file " + text.toAbsolutePath() + ": unknown extension; valid: .mtx, .yaml, "
+                        + ".yml", out);
         Path broken = Files.writeString(tmp.resolve("broken.mtx"), "%%MatrixMarket matrix coordinate real general\n");
         HostileInputCliTest.assertRefused(CliTest.run("run", "--fec-file", broken.toString(), "--out", out.toString()),
                 "--fec-file: parity-check file " + broken.toAbsolutePath() + " line 1: field 'real'", out);
         Path full = Files.writeString(tmp.resolve("full.mtx"),
                 "%%MatrixMarket matrix coordinate pattern general\n2 2 2\n1 1\n2 2\n");
         HostileInputCliTest.assertRefused(CliTest.run("run", "--fec-file", full.toString(), "--out", out.toString()),
-                "--fec-file: parity-check matrix of 2 x 2 has rank 2 and so no codeword but zero", out);
+                "--fec-file: parity-check file " + full.toAbsolutePath() + ": rank 2 over GF(2) equals its 2 columns", out);
     }
 }

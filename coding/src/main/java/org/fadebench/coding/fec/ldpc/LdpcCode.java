@@ -69,6 +69,11 @@ public final class LdpcCode implements ChannelCode {
         return new LdpcCode(new MatrixSource(name, new SystematicLayout(h)), decoding);
     }
 
+    /** A member of the built-in family ({@code ldpc-r12} …), decoded as {@code decoding} says. */
+    public static LdpcCode of(LdpcFamily family, LdpcDecoding decoding) {
+        return new LdpcCode(new FamilySource(family), decoding);
+    }
+
     /** This code decoded another way. */
     public LdpcCode withDecoding(LdpcDecoding other) {
         return new LdpcCode(source, other);
@@ -168,6 +173,48 @@ public final class LdpcCode implements ChannelCode {
     @Override
     public String toString() {
         return describe();
+    }
+
+    /** A member of the built-in family: a layout for every size from 64 to 8224 information bits. */
+    private record FamilySource(LdpcFamily family) implements Source {
+
+        @Override
+        public String name() {
+            return family.cliName();
+        }
+
+        @Override
+        public String describe() {
+            return family.cliName();
+        }
+
+        @Override
+        public double rate() {
+            return family.rate();
+        }
+
+        @Override
+        public int minInfoBits() {
+            return LdpcFamily.MIN_INFO_BITS;
+        }
+
+        @Override
+        public int maxInfoBits() {
+            return LdpcFamily.MAX_INFO_BITS;
+        }
+
+        @Override
+        public CodeLayout layout(int infoBits) {
+            return family.layout(infoBits);
+        }
+
+        /** Its dual-diagonal encoder: the information and syndrome blocks (n bytes), the positions (4k bytes), the block lists. */
+        @Override
+        public long encoderBytes(int infoBits) {
+            int n = family.lifting(infoBits) * LdpcFamily.BASE_COLUMNS;
+            return Lanes.rowBytes(n) + Lanes.rowBytes(4L * infoBits) + 3 * Lanes.rowBytes(4L * LdpcFamily.BASE_COLUMNS
+                    * LdpcFamily.BASE_COLUMNS) + 64;
+        }
     }
 
     /** A user's matrix: one layout, every column sent. */
