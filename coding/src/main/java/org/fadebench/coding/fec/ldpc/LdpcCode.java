@@ -66,7 +66,13 @@ public final class LdpcCode implements ChannelCode {
      * @throws IllegalArgumentException if H has full column rank or is too large for GF(2) elimination
      */
     public static LdpcCode ofMatrix(String name, ParityCheckMatrix h, LdpcDecoding decoding) {
-        return new LdpcCode(new MatrixSource(name, new SystematicLayout(h)), decoding);
+        SystematicLayout layout = new SystematicLayout(h);
+        return ofLayout(name, layout, layout.encoderBytes(), decoding);
+    }
+
+    /** The code of one layout, named {@code name}, whose encoder holds {@code encoderBytes}. */
+    static LdpcCode ofLayout(String name, CodeLayout layout, long encoderBytes, LdpcDecoding decoding) {
+        return new LdpcCode(new OneLayout(name, layout, encoderBytes), decoding);
     }
 
     /** A member of the built-in family ({@code ldpc-r12} …), decoded as {@code decoding} says. */
@@ -217,8 +223,8 @@ public final class LdpcCode implements ChannelCode {
         }
     }
 
-    /** A user's matrix: one layout, every column sent. */
-    private record MatrixSource(String name, SystematicLayout layout) implements Source {
+    /** One layout (a user's matrix: every column sent): one information size. */
+    private record OneLayout(String name, CodeLayout layout, long encoderBytes) implements Source {
 
         @Override
         public String describe() {
@@ -247,7 +253,7 @@ public final class LdpcCode implements ChannelCode {
 
         @Override
         public long encoderBytes(int infoBits) {
-            return layout.encoderBytes();
+            return encoderBytes;
         }
     }
 }

@@ -132,7 +132,7 @@ class LdpcCodeTest {
                 return whole.newEncoder();
             }
         };
-        LdpcCode code = new LdpcCode(new OneLayout(punctured), LdpcDecoding.DEFAULT);
+        LdpcCode code = LdpcCode.ofLayout("punctured", punctured, 0, LdpcDecoding.DEFAULT);
         assertEquals(880, code.codedBits(K));
         LaneCoder coder = code.newCoder(K, 16);
         LdpcEncoder encoder = whole.newEncoder();
@@ -196,44 +196,5 @@ class LdpcCodeTest {
         CODE.newCoder(K, 1).encode(info, 0, a, 0);
         back.newCoder(K, 1).encode(info, 0, b, 0);
         assertArrayEquals(a, b);
-    }
-
-    /** A source of one layout, for the test's own layouts. */
-    private record OneLayout(CodeLayout layout) implements LdpcCode.Source {
-
-        @Override
-        public String name() {
-            return "test";
-        }
-
-        @Override
-        public String describe() {
-            return "test";
-        }
-
-        @Override
-        public double rate() {
-            return (double) layout.infoBits() / layout.sentBits();
-        }
-
-        @Override
-        public int minInfoBits() {
-            return layout.infoBits();
-        }
-
-        @Override
-        public int maxInfoBits() {
-            return layout.infoBits();
-        }
-
-        @Override
-        public CodeLayout layout(int infoBits) {
-            return layout;
-        }
-
-        @Override
-        public long encoderBytes(int infoBits) {
-            return 0;
-        }
     }
 }
