@@ -39,9 +39,9 @@ public enum LdpcFamily {
     public static final int MAX_INFO_BITS = 8192 + 32;
 
     private final String cliName;
-    private final transient Protograph protograph;
-    private final transient ShiftSearch search;
-    private final transient ConcurrentHashMap<Integer, QcBaseMatrix> lifted = new ConcurrentHashMap<>();
+    private final Protograph protograph;
+    private final ShiftSearch search;
+    private final ConcurrentHashMap<Integer, QcBaseMatrix> lifted = new ConcurrentHashMap<>();
 
     LdpcFamily(String cliName, int infoColumns, int parityColumns, int highDegree, int highCount) {
         this.cliName = cliName;

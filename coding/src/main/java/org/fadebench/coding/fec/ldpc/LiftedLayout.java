@@ -72,31 +72,24 @@ final class LiftedLayout implements CodeLayout {
         matrix = build(column, n);
     }
 
+    /** The expanded base matrix with its columns renumbered (information, then parity) and the fillers left out. */
     private ParityCheckMatrix build(int[] column, int n) {
-        int z = base.lifting();
-        int count = 0;
-        for (int i = 0; i < base.baseRows(); i++) {
-            for (int j = 0; j < base.baseColumns(); j++) {
-                count += base.shift(i, j) >= 0 ? z : 0;
-            }
-        }
-        int[] r = new int[count];
-        int[] c = new int[count];
+        ParityCheckMatrix full = base.expand();
+        int lifted = column.length;
+        int[] r = new int[full.edges()];
+        int[] c = new int[full.edges()];
         int e = 0;
-        for (int i = 0; i < base.baseRows(); i++) {
-            for (int j = 0; j < base.baseColumns(); j++) {
-                int s = base.shift(i, j);
-                for (int x = 0; s >= 0 && x < z; x++) {
-                    int lifted = (x + s) % z;
-                    int col = j < kb ? column[j * z + lifted] : infoBits + (j - kb) * z + lifted;
-                    if (col >= 0) {
-                        r[e] = i * z + x;
-                        c[e++] = col;
-                    }
+        for (int i = 0; i < full.rows(); i++) {
+            for (int p = 0; p < full.rowDegree(i); p++) {
+                int j = full.rowEntry(i, p);
+                int col = j < lifted ? column[j] : infoBits + j - lifted;
+                if (col >= 0) {
+                    r[e] = i;
+                    c[e++] = col;
                 }
             }
         }
-        return ParityCheckMatrix.of(base.baseRows() * z, n, r, c, e);
+        return ParityCheckMatrix.of(full.rows(), n, r, c, e);
     }
 
     /** The lifted base matrix. */

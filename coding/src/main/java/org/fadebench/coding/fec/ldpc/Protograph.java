@@ -142,28 +142,15 @@ final class Protograph {
 
     /** The ensemble of the protograph: λ and ρ from its column and row degrees (edge perspective). */
     DegreeDistribution ensemble() {
-        int nb = kb + mb;
-        int[] columnDegree = new int[nb];
-        int[] rowDegree = new int[mb];
+        int[][] ones = new int[mb][kb + mb];
         for (int i = 0; i < mb; i++) {
-            for (int j = 0; j < nb; j++) {
-                if (template[i][j] != ZERO) {
-                    columnDegree[j]++;
-                    rowDegree[i]++;
-                }
+            for (int j = 0; j < kb + mb; j++) {
+                ones[i][j] = template[i][j] == ZERO ? 0 : 1;
             }
         }
-        return DegreeDistribution.ofEdges(edgeFractions(columnDegree), edgeFractions(rowDegree));
-    }
-
-    private static double[] edgeFractions(int[] degrees) {
-        int max = Arrays.stream(degrees).max().orElse(0);
-        double edges = Arrays.stream(degrees).sum();
-        double[] f = new double[max + 1];
-        for (int d : degrees) {
-            f[d] += d / edges;
-        }
-        return f;
+        ParityCheckMatrix pattern = ParityCheckMatrix.of(ones);
+        return DegreeDistribution.ofEdges(pattern.variableDegrees().edgeFractions(),
+                pattern.checkDegrees().edgeFractions());
     }
 
     /** The ensemble's Gaussian-approximation threshold σ* on the BI-AWGN channel. */
