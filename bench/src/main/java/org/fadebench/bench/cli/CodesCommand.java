@@ -92,17 +92,18 @@ final class CodesCommand implements Callable<Integer> {
             }
         }
         List<Listed> channel = channelCodes();
+        Listed chosen = channel.get(channel.size() - 1); // with --export-h: the one --fec lists, or --fec-file's (last)
         if (exportH != null) {
-            export(channel.get(channel.size() - 1));
+            export(chosen);
         }
         PrintWriter w = spec.commandLine().getOut();
         printSpaceTimeCodes(w, spaceTime);
         w.println();
         printChannelCodes(w, channel);
         if (exportH != null) {
-            ParityCheckMatrix h = channel.get(channel.size() - 1).matrix();
+            ParityCheckMatrix h = chosen.matrix();
             w.printf(Locale.ROOT, "%nwrote %s: the %d x %d parity-check matrix of %s (%d ones)%n", exportH, h.rows(),
-                    h.columns(), channel.get(channel.size() - 1).name(), h.edges());
+                    h.columns(), chosen.name(), h.edges());
         }
         w.flush();
         return ExitCodes.OK;

@@ -75,26 +75,35 @@ public final class LdpcCodeFile {
             throw new IllegalArgumentException("parity-check file " + file + ": unknown extension; valid: "
                     + String.join(", ", EXTENSIONS) + " (Matrix Market, or a quasi-cyclic base matrix in YAML)");
         }
-        check(h, file.toString());
+        Runtime rt = Runtime.getRuntime();
+        check(h, file.toString(), rt.maxMemory() - (rt.totalMemory() - rt.freeMemory()));
         return h;
     }
 
     /** Parses YAML text in the layout above; {@code source} names it in messages. Not yet {@link #check checked}. */
-    public static ParityCheckMatrix parseYaml(String text, String source, MatrixLimits limits) {
+    static ParityCheckMatrix parseYaml(String text, String source, MatrixLimits limits) {
         return new YamlParser(source, limits).base(compose(text, source)).expand();
     }
 
     /**
-     * Refuses a matrix with a column of no ones, one whose rank over GF(2) is below its rows, and one
-     * whose rank equals its columns (no codeword but zero).
+     * Refuses a matrix with a column of no ones, one whose dense copy for GF(2) elimination would
+     * not fit in three quarters of {@code freeHeapBytes}, one whose rank over GF(2) is below its
+     * rows, and one whose rank equals its columns (no codeword but zero).
      */
-    static void check(ParityCheckMatrix h, String source) {
+    static void check(ParityCheckMatrix h, String source, long freeHeapBytes) {
         for (int j = 0; j < h.columns(); j++) {
             if (h.columnDegree(j) == 0) {
                 throw new IllegalArgumentException("parity-check file " + source + ": column " + (j + 1)
                         + " (counting from 1) has no ones, so no check covers its bit; valid: at least one one in"
                         + " every column");
             }
+        }
+        long denseBytes = h.rows() * (16 + 8L * ((h.columns() + 63) >>> 6)); // one long[] per row, with its header
+        if (denseBytes > freeHeapBytes / 4 * 3) {
+            throw new IllegalArgumentException("parity-check file " + source + ": the GF(2) elimination that derives the"
+                    + " encoder of its " + h.rows() + " x " + h.columns() + " matrix needs about " + mebibytes(denseBytes)
+                    + " MiB, but the Java heap has " + mebibytes(freeHeapBytes) + " MiB free; valid: a smaller matrix,"
+                    + " or a larger heap (java -Xmx...)");
         }
         int rank = Gf2Elimination.rank(h);
         if (rank == h.columns()) {
@@ -106,6 +115,10 @@ public final class LdpcCodeFile {
                     + h.rows() + " rows: " + (h.rows() - rank) + " row(s) are sums of others; valid: a matrix of full row"
                     + " rank (remove the redundant rows)");
         }
+    }
+
+    private static long mebibytes(long bytes) {
+        return (bytes + (1 << 20) - 1) >> 20;
     }
 
     private static ParityCheckMatrix readYaml(Path file, MatrixLimits limits) {

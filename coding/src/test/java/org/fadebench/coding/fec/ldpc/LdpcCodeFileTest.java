@@ -96,6 +96,18 @@ class LdpcCodeFileTest {
         assertEquals("parity-check file " + file + ": " + expected, message);
     }
 
+    /**
+     * A QC base matrix of two rows and no zero block is rank-deficient: the 7 rows of each block row
+     * add up to the all-ones row, so the two block rows' sums coincide (worked by hand).
+     */
+    @Test
+    void refusesAQcMatrixWithoutZeroBlocks() throws IOException {
+        Path file = write("full.yaml", "lifting: 7\nbase:\n  - [0, 1, 2, 3]\n  - [0, 2, 4, 6]\n");
+        String message = assertThrows(IllegalArgumentException.class, () -> LdpcCodeFile.read(file)).getMessage();
+        assertTrue(message.startsWith("parity-check file " + file + ": rank ") && message.contains(" over GF(2) is below"
+                + " its 14 rows"), message);
+    }
+
     /** Each problem of a YAML file: one line naming the file, the line and what is valid. */
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
@@ -150,6 +162,20 @@ class LdpcCodeFileTest {
         Path mtx = write("big.mtx", "%%MatrixMarket matrix coordinate pattern general\n1048576 1048576 1\nx\n");
         assertEquals("parity-check file " + mtx + " line 2: " + expected,
                 assertThrows(IllegalArgumentException.class, () -> LdpcCodeFile.read(mtx)).getMessage());
+    }
+
+    /**
+     * The elimination's dense copy must fit in three quarters of the free heap: 512 rows of 16 words
+     * take 512 x (16 + 128) bytes = 72 KiB (a long[] of 16 with its 16-byte header).
+     */
+    @Test
+    void refusesAMatrixWhoseEliminationWouldNotFitTheHeap() {
+        ParityCheckMatrix h = new QcBaseMatrix(new int[][] {{0, 0}}, 512).expand(); // [I I]: 512 x 1024, full rank
+        LdpcCodeFile.check(h, "h.mtx", 72 * 1024 / 3 * 4);
+        assertEquals("parity-check file h.mtx: the GF(2) elimination that derives the encoder of its 512 x 1024 matrix"
+                + " needs about 1 MiB, but the Java heap has 1 MiB free; valid: a smaller matrix, or a larger heap (java"
+                + " -Xmx...)", assertThrows(IllegalArgumentException.class,
+                        () -> LdpcCodeFile.check(h, "h.mtx", 72 * 1024 / 3 * 4 - 4)).getMessage());
     }
 
     @Test
