@@ -49,8 +49,8 @@ final class BoundsCommand implements Callable<Integer> {
 
     /** The settings {@code bounds} takes. */
     static final List<Setting> SETTINGS = List.of(CODE, CODE_FILE, TX, RX, MODULATION, FEC, FEC_FILE, CRC,
-            FRAME_BITS,
-            COHERENCE, FADING, K_FACTOR, NAKAGAMI_M, TX_CORR, RX_CORR, SNR_DB, RATE, MI, OUTAGE_DRAWS, FOLDER);
+            FRAME_BITS, COHERENCE, FADING, K_FACTOR, NAKAGAMI_M, TX_CORR, RX_CORR, SNR_DB, RATE, MI, OUTAGE_DRAWS,
+            FOLDER);
 
     /** Where {@code bounds} differs from {@code run}'s defaults. */
     static final Map<Setting, String> DEFAULTS = Map.of(SNR_DB, "0..30/2", FOLDER, "fadebench-bounds");

@@ -6,9 +6,9 @@ import java.io.Serializable;
 import java.nio.ByteBuffer;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HexFormat;
 import java.util.List;
@@ -427,7 +427,8 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
             return ldpc.withDecoding(ldpcDecoding(v));
         }
         for (Setting s : List.of(FEC_DECODER, FEC_ITERATIONS, FEC_CORRECTION, FEC_FULL_ITERATIONS)) {
-            if (v.isSet(s) && !(s.kind() == Setting.Kind.FLAG && !v.flag(s))) {
+            boolean given = s.kind() == Setting.Kind.FLAG ? v.flag(s) : v.isSet(s);
+            if (given) {
                 throw new InvalidSettingException(s, "goes with an LDPC code (--fec-file, or an ldpc code of --fec); "
                         + "--fec " + named.cliName() + " has no such decoder");
             }

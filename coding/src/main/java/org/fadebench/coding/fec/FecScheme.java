@@ -40,14 +40,12 @@ public record FecScheme(Crc crc, ChannelCode code) implements Serializable {
         long low = Math.max(1, (long) code.minInfoBits() - crc.bits());
         long high = (long) code.maxInfoBits() - crc.bits();
         String withCrc = crc.bits() == 0 ? "" : " with " + crc.cliName();
-        String serves = code.minInfoBits() == code.maxInfoBits()
-                ? "carries exactly " + code.minInfoBits() + " information bits per frame (payload and CRC)"
-                : "carries " + code.minInfoBits() + " to " + code.maxInfoBits()
-                        + " information bits per frame (payload and CRC)";
+        String sizes = code.minInfoBits() == code.maxInfoBits() ? "exactly " + code.minInfoBits()
+                : code.minInfoBits() + " to " + code.maxInfoBits();
         String valid = high < low ? "no payload" + withCrc + " fits; use a shorter --crc"
                 : "--frame-bits " + (low == high ? Long.toString(low) : low + " to " + high) + withCrc;
         throw new IllegalArgumentException("--frame-bits " + payloadBits + withCrc + ": channel code " + code.cliName()
-                + " " + serves + "; valid: " + valid);
+                + " carries " + sizes + " information bits per frame (payload and CRC); valid: " + valid);
     }
 
     /**
