@@ -167,6 +167,17 @@ class LdpcCodeTest {
                 + " (payload and CRC); valid: --frame-bits 456 with crc24", e.getMessage());
         assertEquals(K - 24, withCrc.payloadNear(1024));
         assertEquals(K, new FecScheme(Crc.NONE, CODE).payloadNear(64));
+        // a code of 4 information bits (H = [I I], every bit repeated once) leaves no room for a CRC-16
+        int[][] twice = new int[4][8];
+        for (int i = 0; i < 4; i++) {
+            twice[i][i] = 1;
+            twice[i][4 + i] = 1;
+        }
+        FecScheme tooSmall = new FecScheme(Crc.CRC16, LdpcCode.ofMatrix("tiny", ParityCheckMatrix.of(twice),
+                LdpcDecoding.DEFAULT));
+        e = assertThrows(IllegalArgumentException.class, () -> tooSmall.checkPayload(tooSmall.payloadNear(1024)));
+        assertEquals("--frame-bits 1 with crc16: channel code tiny carries exactly 4 information bits per frame (payload"
+                + " and CRC); valid: no payload with crc16 fits; use a shorter --crc", e.getMessage());
     }
 
     @Test
