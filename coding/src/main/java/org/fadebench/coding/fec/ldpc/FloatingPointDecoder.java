@@ -16,9 +16,10 @@ import org.fadebench.coding.fec.Lanes;
  * other signs (R. G. Gallager, "Low-density parity-check codes", 1963, Section 4.1, from memory;
  * F. R. Kschischang, B. J. Frey, H.-A. Loeliger, "Factor graphs and the sum-product algorithm",
  * IEEE Trans. Inf. Theory 47(2), 2001). φ is computed as ln(1 + 2/(e^x − 1)) with
- * {@code log1p}/{@code expm1}, accurate at both ends; its argument is held at most
- * {@value #PHI_LIMIT}, so every φ is a positive normal number and every message finite (an LLR of
- * 700 is a probability of e^−700: nothing to double precision). Min-sum: |R_e| = the least
+ * {@code log1p}/{@code expm1}, accurate at both ends. Message magnitudes are held at most
+ * {@value #LIMIT}, and so is φ's argument: every φ is then a positive normal number and every
+ * message finite, also for a check on a single bit, whose message has no other edge to come from
+ * (an LLR of 700 is a probability of e^−700: nothing to double precision). Min-sum: |R_e| = the least
  * |Q_e'| of the other edges, times α (normalised) or less β and at least 0 (offset), after J. Chen,
  * M. P. C. Fossorier, IEEE Trans. Commun. 50(3), 2002. A Q of 0 counts as positive.
  *
@@ -27,14 +28,15 @@ import org.fadebench.coding.fec.Lanes;
  */
 final class FloatingPointDecoder extends LayeredDecoder {
 
-    /** The most |Q| passed to φ. */
-    static final double PHI_LIMIT = 700;
+    /** The most |R| of a message, and the most |Q| passed to φ. */
+    static final double LIMIT = 700;
 
     private final double[][] channel;
     private final double[][] posterior;
     private final double[] check;
     private final double[] q;
-    private final double[] phi;
+    private final double[] terms;
+    private final double[] before;
 
     FloatingPointDecoder(ParityCheckMatrix h, LdpcDecoding decoding, int lanes) {
         super(h, decoding, lanes);
@@ -43,14 +45,15 @@ final class FloatingPointDecoder extends LayeredDecoder {
         check = new double[edgeColumn.length];
         int degree = largestRowDegree(h);
         q = new double[degree];
-        phi = new double[degree];
+        terms = new double[degree];
+        before = new double[degree];
     }
 
     /** Bytes the buffers of a decoder take. */
     static long bytes(ParityCheckMatrix h, int lanes) {
         int degree = largestRowDegree(h);
         return sharedBytes(h, lanes) + 2 * tableBytes(lanes, 8L * h.columns()) + Lanes.rowBytes(8L * h.edges())
-                + 2 * Lanes.rowBytes(8L * degree);
+                + 3 * Lanes.rowBytes(8L * degree);
     }
 
     @Override
@@ -124,25 +127,29 @@ final class FloatingPointDecoder extends LayeredDecoder {
         }
     }
 
-    /** The magnitudes of the row's new messages into {@code check[from ..]}, by sum-product. */
+    /**
+     * The magnitudes of the row's new messages into {@code check[from ..]}, by sum-product. The sum
+     * of the others' φ is a sum before the edge plus a sum after it (running sums from both ends),
+     * not the total less the own term, which would cancel digits (and φ(0) is infinite).
+     */
     private void sumProduct(int from, int degree) {
+        double sum = 0;
         for (int k = 0; k < degree; k++) {
-            phi[k] = phi(Math.abs(q[k]));
+            before[k] = sum;
+            terms[k] = phi(Math.abs(q[k]));
+            sum += terms[k];
         }
-        for (int k = 0; k < degree; k++) {
-            // the others summed term by term, not as the total less the own term (φ(0) is infinite)
-            double sum = 0;
-            for (int j = 0; j < degree; j++) {
-                sum += j == k ? 0 : phi[j];
-            }
-            check[from + k] = phi(sum);
+        double after = 0;
+        for (int k = degree - 1; k >= 0; k--) {
+            check[from + k] = Math.min(phi(before[k] + after), LIMIT);
+            after += terms[k];
         }
     }
 
     /** The magnitudes of the row's new messages into {@code check[from ..]}, by corrected min-sum. */
     private void minSum(int from, int degree) {
-        double least = Double.POSITIVE_INFINITY;
-        double second = Double.POSITIVE_INFINITY;
+        double least = LIMIT;
+        double second = LIMIT;
         int at = -1;
         for (int k = 0; k < degree; k++) {
             double a = Math.abs(q[k]);
@@ -176,8 +183,8 @@ final class FloatingPointDecoder extends LayeredDecoder {
         return true;
     }
 
-    /** φ(x) = ln(1 + 2/(e^x − 1)) for x ≥ 0, with x held at most {@value #PHI_LIMIT}. */
+    /** φ(x) = ln(1 + 2/(e^x − 1)) for x ≥ 0, with x held at most {@value #LIMIT}. */
     static double phi(double x) {
-        return Math.log1p(2 / Math.expm1(Math.min(x, PHI_LIMIT)));
+        return Math.log1p(2 / Math.expm1(Math.min(x, LIMIT)));
     }
 }

@@ -1,8 +1,9 @@
 package org.fadebench.coding.fec.ldpc;
 
 /**
- * Makes the LDPC decoders: sum-product always in floating point ({@link FloatingPointDecoder}, the
- * reference), min-sum and offset min-sum in floating point for now.
+ * Makes the LDPC decoders: min-sum and offset min-sum on the fixed-point lane decoder
+ * ({@link FixedPointDecoder}), sum-product always in floating point ({@link FloatingPointDecoder},
+ * which is also the reference for the other two).
  */
 public final class LdpcDecoders {
 
@@ -15,17 +16,21 @@ public final class LdpcDecoders {
      * @throws IllegalArgumentException "L lanes; need at least 1" if {@code lanes} is below 1
      */
     public static LdpcDecoder create(ParityCheckMatrix h, LdpcDecoding decoding, int lanes) {
-        return new FloatingPointDecoder(h, decoding, lanes);
+        return decoding.algorithm() == LdpcAlgorithm.SUM_PRODUCT
+                ? new FloatingPointDecoder(h, decoding, lanes)
+                : new FixedPointDecoder(h, decoding, lanes);
     }
 
     /**
      * Bytes the buffers of {@link #create}'s decoder take (its arrays with their headers), for a
      * memory check before a run.
      *
-     * @throws IllegalArgumentException if {@code lanes} is below 1
+     * @throws IllegalArgumentException "L lanes; need at least 1" if {@code lanes} is below 1
      */
     public static long bytes(ParityCheckMatrix h, LdpcDecoding decoding, int lanes) {
         LayeredDecoder.checkLanes(lanes);
-        return FloatingPointDecoder.bytes(h, lanes);
+        return decoding.algorithm() == LdpcAlgorithm.SUM_PRODUCT
+                ? FloatingPointDecoder.bytes(h, lanes)
+                : FixedPointDecoder.bytes(h, lanes);
     }
 }
