@@ -69,17 +69,24 @@ final class ShiftSearch {
             for (int i1 = i0 + 1; i1 < rows; i1++) {
                 for (int j0 = 0; j0 < columns; j0++) {
                     for (int j1 = j0 + 1; j1 < columns; j1++) {
-                        // s(i0,j1) − s(i1,j1) + s(i1,j0) − s(i0,j0)
-                        add(four, index, new int[] {i0, j1, i1, j1, i1, j0, i0, j0});
+                        if (both(i0, i1, j0) && both(i0, i1, j1)) { // s(i0,j1) − s(i1,j1) + s(i1,j0) − s(i0,j0)
+                            add(four, index, new int[] {i0, j1, i1, j1, i1, j0, i0, j0});
+                        }
                     }
                 }
                 for (int i2 = i1 + 1; i2 < rows; i2++) {
-                    for (int j0 = 0; j0 < columns; j0++) {
-                        for (int j1 = 0; j1 < columns; j1++) {
-                            for (int j2 = 0; j2 < columns; j2++) {
-                                if (j0 != j1 && j1 != j2 && j0 != j2) {
-                                    // i0 −j1− i1 −j2− i2 −j0− i0; each hexagon once (i0 < i1 < i2 and
-                                    // the three columns in every order give the distinct hexagons)
+                    // i0 −j1− i1 −j2− i2 −j0− i0; each hexagon once (i0 < i1 < i2 fixes the
+                    // orientation, the columns in every order give the distinct hexagons)
+                    for (int j1 = 0; j1 < columns; j1++) {
+                        if (!both(i0, i1, j1)) {
+                            continue;
+                        }
+                        for (int j2 = 0; j2 < columns; j2++) {
+                            if (j2 == j1 || !both(i1, i2, j2)) {
+                                continue;
+                            }
+                            for (int j0 = 0; j0 < columns; j0++) {
+                                if (j0 != j1 && j0 != j2 && both(i2, i0, j0)) {
                                     add(six, index, new int[] {i0, j1, i1, j1, i1, j2, i2, j2, i2, j0, i0, j0});
                                 }
                             }
@@ -100,15 +107,16 @@ final class ShiftSearch {
         return l;
     }
 
-    /** Adds the closed path (row, column pairs; signs alternate +, −) if all its blocks are nonzero. */
+    private boolean both(int rowA, int rowB, int column) {
+        return template[rowA][column] != Protograph.ZERO && template[rowB][column] != Protograph.ZERO;
+    }
+
+    /** Adds the closed path (row, column pairs of nonzero blocks; signs alternate +, −). */
     private void add(List<List<Integer>> cycles, int[][] index, int[] path) {
         int length = path.length / 2;
         int[] entries = new int[length];
         int last = -1;
         for (int p = 0; p < length; p++) {
-            if (template[path[2 * p]][path[2 * p + 1]] == Protograph.ZERO) {
-                return;
-            }
             entries[p] = index[path[2 * p]][path[2 * p + 1]];
             last = Math.max(last, entries[p]);
         }

@@ -2,6 +2,7 @@ package org.fadebench.coding.fec.ldpc;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -131,6 +132,21 @@ class LdpcFamilyTest {
                 if (k >= 256) {
                     assertTrue(measured >= 6, code + " k " + k);
                 }
+            }
+        }
+    }
+
+    /**
+     * No 4-cycles for any k above 220 (Z ≥ 12), at every lifting size the family uses, by the
+     * condition of M. P. C. Fossorier, IEEE Trans. Inf. Theory 50(8), 2004 ({@link
+     * QcBaseMatrix#hasFourCycle}); rate 1/2 has none at any size.
+     */
+    @Test
+    void noFourCyclesAboveTwoHundredTwentyBits() {
+        for (LdpcFamily code : LdpcFamily.values()) {
+            int from = code == LdpcFamily.R12 ? LdpcFamily.MIN_INFO_BITS : 221;
+            for (int z = code.lifting(from); z <= code.lifting(LdpcFamily.MAX_INFO_BITS); z++) {
+                assertFalse(code.baseMatrix(z).hasFourCycle(), code + " Z " + z);
             }
         }
     }
