@@ -252,6 +252,14 @@ public final class ChannelSpec implements Serializable {
     }
 
     /**
+     * Whether the channel is plain AWGN: the model {@code none} (h = 1 on every antenna pair, see
+     * {@link AwgnChannel}), not a trace (whatever the receiver's CSI).
+     */
+    public boolean awgn() {
+        return trace == null && model() instanceof AwgnChannel;
+    }
+
+    /**
      * A short label naming the model with its parameters and the receiver's CSI, e.g.
      * {@code rician K=3.0, rx-corr 0.5, doppler 0.01, pilots 4} or {@code rayleigh, perfect CSI}.
      */

@@ -21,6 +21,9 @@ class MutualInformationTest {
     /** Quadrature error bound per real axis, stated in {@link MutualInformation}: 3e-7 bits. */
     private static final double AXIS_TOLERANCE = 3e-7;
 
+    /** Quadrature error bound of the dispersion, stated in {@link MutualInformation}: 5e-6 bits². */
+    private static final double DISPERSION_TOLERANCE = 5e-6;
+
     private static double fromDb(double db) {
         return Math.pow(10.0, 0.1 * db);
     }
@@ -192,6 +195,102 @@ class MutualInformationTest {
         double esN0Db = new BrentSolver(1e-9).solve(200, db -> bpsk.exactBits(fromDb(db)) - 0.5, -6, 2);
         double ebN0Db = esN0Db - 10 * Math.log10(0.5);
         assertEquals(0.187, ebN0Db, 0.0005 + 1e-4, "Eb/N0 limit of rate-1/2 BPSK (dB)");
+    }
+
+    /**
+     * E[f(Y)] and Var[f(Y)] for Y ~ N(mean, σ²) by adaptive Gauss–Legendre integration (Commons
+     * Math), over ±40σ in 80 pieces.
+     */
+    private static double[] gaussianMoments(UnivariateFunction f, double mean, double sigma) {
+        UnivariateFunction phi = y -> Math.exp(-0.5 * (y - mean) * (y - mean) / (sigma * sigma))
+                / (sigma * Math.sqrt(2 * Math.PI));
+        double m = integrate(y -> phi.value(y) * f.value(y), mean - 40 * sigma, mean + 40 * sigma);
+        double v = integrate(y -> phi.value(y) * (f.value(y) - m) * (f.value(y) - m), mean - 40 * sigma,
+                mean + 40 * sigma);
+        return new double[] {m, v};
+    }
+
+    private static double integrate(UnivariateFunction f, double a, double b) {
+        int pieces = 80;
+        double h = (b - a) / pieces;
+        double sum = 0;
+        for (int i = 0; i < pieces; i++) {
+            sum += new IterativeLegendreGaussIntegrator(16, 1e-14, 1e-16).integrate(10_000_000, f, a + i * h,
+                    a + (i + 1) * h);
+        }
+        return sum;
+    }
+
+    /**
+     * BPSK on the real AWGN channel y = x + n, n ~ N(0, σ² = N0/2): given x = +1 (the channel is
+     * symmetric, so the law of the information density is the same for both inputs) the density is
+     * i = 1 − log2(1 + e^(−2y/σ²)), so C = 1 − E log2(1 + e^(−2Y/σ²)) with Y ~ N(1, σ²) (T.
+     * Richardson and R. Urbanke, "Modern Coding Theory", Cambridge 2008, the BAWGN capacity; from
+     * memory for the section) and V = Var of the same (the dispersion, Polyanskiy, Poor and Verdú
+     * 2010). Integrated here by Commons Math, independently of the Gauss–Hermite rule. Agreement
+     * to 1e-9 from −20 dB to 0 dB Es/N0 (rates up to 0.72, where BPSK is used at all; measured
+     * differences at most 7.3e-10, at 0 dB); at 7 dB, the worst SNR of the sweep quoted in
+     * {@link MutualInformation}, within the stated 3e-7 bits and 5e-6 bits².
+     */
+    @Test
+    void bpskDensityMatchesBinaryInputIntegrals() {
+        MutualInformation bpsk = MutualInformation.of(Modulation.BPSK, CM);
+        for (double db : new double[] {-20, -10, -2.82, 0, 7}) {
+            double sigma = Math.sqrt(0.5 / fromDb(db));
+            double[] ref = gaussianMoments(y -> {
+                double z = -2 * y / (sigma * sigma);
+                return (z > 0 ? z + Math.log1p(Math.exp(-z)) : Math.log1p(Math.exp(z))) / Math.log(2);
+            }, 1.0, sigma);
+            MutualInformation.Density d = bpsk.density(fromDb(db));
+            double bitsTolerance = db <= 0 ? 1e-9 : AXIS_TOLERANCE;
+            double dispersionTolerance = db <= 0 ? 1e-9 : DISPERSION_TOLERANCE;
+            assertEquals(1 - ref[0], d.bits(), bitsTolerance, "C at " + db + " dB");
+            assertEquals(ref[1], d.dispersion(), dispersionTolerance, "V at " + db + " dB");
+        }
+    }
+
+    /**
+     * Low SNR: the coded-modulation density of a large square QAM tends to that of the Gaussian
+     * input. Per real axis that is the AWGN channel of Polyanskiy, Poor and Verdú 2010 (Sec. IV)
+     * at the axis SNR P = γ: C = ½·log2(1 + P), V = (log2 e)²·P(P + 2)/(2(P + 1)²); two axes, so
+     * C = log2(1 + γ) and V = (log2 e)²·γ(γ + 2)/(γ + 1)² per symbol. Both are 2γ·(log2 e)² to
+     * first order (fixed by the power of a proper input, as for the information, Prelov and Verdú
+     * 2004); the next term depends on the input's fourth moment, which this test does not derive:
+     * measured, V/V_gauss − 1 is 0.16γ (16-QAM) to 0.20γ (256-QAM) from γ = 1e-4 to 1e-2. We allow
+     * γ/4.
+     */
+    @ParameterizedTest
+    @EnumSource(value = Modulation.class, names = {"QAM16", "QAM64", "QAM256"})
+    void densityTendsToGaussianAtLowSnr(Modulation m) {
+        double log2e = 1 / Math.log(2);
+        for (double snr : new double[] {1e-4, 1e-3, 1e-2}) {
+            MutualInformation.Density d = MutualInformation.of(m, CM).density(snr);
+            double gaussian = log2e * log2e * snr * (snr + 2) / ((snr + 1) * (snr + 1));
+            assertEquals(1.0, d.dispersion() / gaussian, snr / 4, m + " at " + snr);
+            assertEquals(1.0, d.bits() / (Math.log1p(snr) * log2e), snr, m + " at " + snr);
+        }
+    }
+
+    /**
+     * The density's mean is {@link MutualInformation#exactBits} to the last bit; no signal, no
+     * information and no spread; Gray QPSK is two BPSK channels at half the SNR each, so its
+     * dispersion is twice theirs (common practice, no source), for both measures.
+     */
+    @Test
+    void densityAgreesWithTheInformation() {
+        for (Modulation m : Modulation.values()) {
+            MutualInformation mi = MutualInformation.of(m, CM);
+            for (double db = -20; db <= 40; db += 5) {
+                assertEquals(mi.exactBits(fromDb(db)), mi.density(fromDb(db)).bits(), 0.0, m + " at " + db + " dB");
+            }
+        }
+        MutualInformation qpsk = MutualInformation.of(Modulation.QPSK, CM);
+        assertEquals(new MutualInformation.Density(0, 0), qpsk.density(0));
+        MutualInformation.Density bpsk = MutualInformation.of(Modulation.BPSK, CM).density(1.5);
+        assertEquals(2 * bpsk.dispersion(), qpsk.density(3.0).dispersion(), 1e-12);
+        assertEquals(qpsk.density(3.0).dispersion(), MutualInformation.of(Modulation.QPSK, BICM).density(3.0)
+                .dispersion(), 0.0);
+        assertThrows(IllegalArgumentException.class, () -> qpsk.density(-1));
     }
 
     /**

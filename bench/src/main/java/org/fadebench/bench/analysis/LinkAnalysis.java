@@ -52,6 +52,27 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
         public String note() {
             return reach.note(outageDraws);
         }
+
+        /** The link's SNR minus this curve's at the target FER; empty when either has none. */
+        public OptionalDouble gapDb(OptionalDouble linkSnrDb) {
+            return linkSnrDb.isPresent() && snrDbAtTarget.isPresent()
+                    ? OptionalDouble.of(linkSnrDb.getAsDouble() - snrDbAtTarget.getAsDouble())
+                    : OptionalDouble.empty();
+        }
+
+        /** Why a gap is missing: this curve's reason, else the link's; null when there is a gap. */
+        public Reach gapReach(OptionalDouble linkSnrDb, Reach linkReach) {
+            return gapDb(linkSnrDb).isPresent() ? null : !reach.hasSnr() ? reach : linkReach;
+        }
+
+        /**
+         * The words of {@link #gapReach} (with the draws that would resolve an unresolved bound);
+         * null when there is a gap.
+         */
+        public String gapNote(OptionalDouble linkSnrDb, Reach linkReach) {
+            Reach r = gapReach(linkSnrDb, linkReach);
+            return r == null ? null : r == reach ? note() : r.words();
+        }
     }
 
     public LinkAnalysis {
@@ -92,21 +113,34 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
 
     private static BoundAnalysis closedForm(BoundSettings s, Bound b, double[] snrDb, double targetFer,
                                             int tailPoints) {
-        double[] values = new double[snrDb.length];
-        DoubleUnaryOperator f = s.closedForm(b);
-        for (int i = 0; i < snrDb.length; i++) {
-            values[i] = f.applyAsDouble(snrDb[i]);
-        }
-        Optional<DiversityFit> fit = DiversityFit.ofCurve(snrDb, values, tailPoints);
         if (b == Bound.QAM && s.fullRate()) {
-            return new BoundAnalysis(OptionalDouble.empty(), Reach.ofFullRate(s), fit);
+            return new BoundAnalysis(OptionalDouble.empty(), Reach.ofFullRate(s),
+                    fit(s.closedForm(b), snrDb, tailPoints));
         }
+        return closedForm(s.closedForm(b), snrDb, targetFer, tailPoints);
+    }
+
+    /**
+     * A curve given in closed form, decreasing in SNR, against the target: its crossing by
+     * bisection ({@link TargetCrossing#ofClosedForm}), inside or outside the swept range
+     * {@code snrDb}, or {@link Reach#NEVER_REACHED}; its fit over the swept points.
+     */
+    static BoundAnalysis closedForm(DoubleUnaryOperator f, double[] snrDb, double targetFer, int tailPoints) {
         OptionalDouble crossing = TargetCrossing.ofClosedForm(f, targetFer);
         double low = Arrays.stream(snrDb).min().orElseThrow();
         double high = Arrays.stream(snrDb).max().orElseThrow();
-        Reach reach = crossing.isPresent() && crossing.getAsDouble() >= low && crossing.getAsDouble() <= high
-                ? Reach.IN_RANGE : Reach.OUTSIDE_RANGE;
-        return new BoundAnalysis(crossing, reach, fit);
+        Reach reach = crossing.isEmpty() ? Reach.NEVER_REACHED
+                : crossing.getAsDouble() >= low && crossing.getAsDouble() <= high ? Reach.IN_RANGE
+                : Reach.OUTSIDE_RANGE;
+        return new BoundAnalysis(crossing, reach, fit(f, snrDb, tailPoints));
+    }
+
+    private static Optional<DiversityFit> fit(DoubleUnaryOperator f, double[] snrDb, int tailPoints) {
+        double[] values = new double[snrDb.length];
+        for (int i = 0; i < snrDb.length; i++) {
+            values[i] = f.applyAsDouble(snrDb[i]);
+        }
+        return DiversityFit.ofCurve(snrDb, values, tailPoints);
     }
 
     /**
@@ -147,22 +181,17 @@ public record LinkAnalysis(double targetFer, int minErrors, int tailPoints, Opti
 
     /** Simulated SNR minus the bound's SNR at the target FER; empty when either has none. */
     public OptionalDouble gapDb(Bound bound) {
-        OptionalDouble boundDb = bounds.get(bound).snrDbAtTarget();
-        return snrDbAtTarget.isPresent() && boundDb.isPresent()
-                ? OptionalDouble.of(snrDbAtTarget.getAsDouble() - boundDb.getAsDouble())
-                : OptionalDouble.empty();
+        return bounds.get(bound).gapDb(snrDbAtTarget);
     }
 
     /** Why a gap is missing: the bound's reason, else the link's; null when there is a gap. */
     public Reach gapReach(Bound bound) {
-        Reach r = bounds.get(bound).reach();
-        return gapDb(bound).isPresent() ? null : !r.hasSnr() ? r : linkReach;
+        return bounds.get(bound).gapReach(snrDbAtTarget, linkReach);
     }
 
     /** The words of {@link #gapReach} (with the draws that would resolve an unresolved bound); null when there is a gap. */
     public String gapNote(Bound bound) {
-        Reach r = gapReach(bound);
-        return r == null ? null : r == bounds.get(bound).reach() ? bounds.get(bound).note() : r.words();
+        return bounds.get(bound).gapNote(snrDbAtTarget, linkReach);
     }
 
     /**

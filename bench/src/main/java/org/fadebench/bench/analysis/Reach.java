@@ -14,10 +14,16 @@ public enum Reach {
     /** The curve crosses the target within the swept SNR range. */
     IN_RANGE("within the swept range"),
     /**
-     * A bound crosses the target outside the swept range; the SNR is still given (closed form:
-     * bisection; Monte Carlo: extra points beyond the sweep, see {@link BoundCurves#reaching}).
+     * A bound or the normal approximation crosses the target outside the swept range; the SNR is
+     * still given (closed form: bisection; Monte Carlo: extra points beyond the sweep, see
+     * {@link BoundCurves#reaching}).
      */
-    OUTSIDE_RANGE("outside the swept range; the bound was computed beyond it"),
+    OUTSIDE_RANGE("outside the swept range; the curve was computed beyond it"),
+    /**
+     * A closed-form curve stays above the target at every SNR (the normal approximation of a frame
+     * of a few bits, whose limit at high SNR lies above the target).
+     */
+    NEVER_REACHED("the curve stays above the target FER at every SNR"),
     /** The simulated link did not fall to the target FER at any swept SNR. */
     LINK_NOT_REACHED("the link did not reach the target FER in the swept range"),
     /** The simulated FER is already at or below the target at the lowest swept SNR. */

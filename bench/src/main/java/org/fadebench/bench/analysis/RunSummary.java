@@ -20,10 +20,12 @@ import org.fadebench.bench.sweep.PointResult;
  * @param warning    why the fitted order is not to be quoted yet, or empty
  * @param analysis   the comparison with the bounds, or null where there are none
  * @param noBounds   with no analysis: why (e.g. "no outage bounds for this channel")
+ * @param normal     the {@link NormalApproximation} against the target, or null where it does not
+ *                   apply ({@link NormalApproximation#NOT_APPLICABLE}) or nothing was simulated
  */
 public record RunSummary(double targetFer, Optional<DiversityFit> diversity, OptionalDouble snrDbAtTarget,
                          Reach linkReach, Optional<AsymptoticDiversity> asymptote, Optional<String> warning, LinkAnalysis analysis,
-                         String noBounds) {
+                         String noBounds, LinkAnalysis.BoundAnalysis normal) {
 
     /** The words when a channel has no outage bounds. */
     public static final String NO_BOUNDS = "no outage bounds for this channel";
@@ -39,8 +41,11 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
         Optional<String> warning = diversity.flatMap(f -> asymptote.isPresent()
                 ? asymptote.get().warning(f, points) : AsymptoticDiversity.warningWithoutAsymptote(f, points));
         OptionalDouble crossing = a != null ? a.snrDbAtTarget() : TargetCrossing.ofPoints(points, targetFer);
+        double[] snrDb = points.stream().mapToDouble(PointResult::snrDb).toArray();
+        LinkAnalysis.BoundAnalysis normal = snrDb.length == 0 ? null
+                : NormalApproximation.of(link).map(n -> n.against(snrDb, targetFer)).orElse(null);
         return new RunSummary(targetFer, diversity, crossing, Reach.ofLink(points, targetFer, crossing), asymptote,
-                warning, a, a == null ? noBounds : null);
+                warning, a, a == null ? noBounds : null, normal);
     }
 
     /** The gap in dB to a bound, empty when either side has no SNR at the target or no bounds apply. */
@@ -68,8 +73,19 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
             gaps.put(b.key(), g.isPresent() ? g.getAsDouble() : null);
             notes.put(b.key(), analysis == null ? noBounds : analysis.gapNote(b));
         }
+        gaps.put(NormalApproximation.KEY, normal == null ? null : LinkAnalysis.orNull(normal.gapDb(snrDbAtTarget)));
+        notes.put(NormalApproximation.KEY, normal == null ? NormalApproximation.NOT_APPLICABLE
+                : normal.gapNote(snrDbAtTarget, linkReach));
         m.put("gap_db", gaps);
         m.put("gap_note", notes);
+        Map<String, Object> approx = null;
+        if (normal != null) {
+            approx = new LinkedHashMap<>();
+            approx.put("snr_db_at_target", LinkAnalysis.orNull(normal.snrDbAtTarget()));
+            approx.put("reach", normal.reach().key());
+            approx.put("note", normal.reach() == Reach.IN_RANGE ? null : normal.note());
+        }
+        m.put(NormalApproximation.KEY, approx);
         return m;
     }
 
@@ -84,11 +100,14 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
                 .orElse("diversity order: not enough points with errors to fit"));
         if (analysis == null) {
             lines.add(targetLine() + "; " + noBounds);
-            return lines;
+        } else {
+            lines.add(targetLine());
+            for (Bound b : Bound.values()) {
+                lines.add("  " + boundLine(b));
+            }
         }
-        lines.add(targetLine());
-        for (Bound b : Bound.values()) {
-            lines.add("  " + boundLine(b));
+        if (normal != null) {
+            lines.add("  " + normalLine());
         }
         return lines;
     }
@@ -109,6 +128,9 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
                 lines.add(boundLine(b));
             }
         }
+        if (normal != null && normal.reach() != Reach.IN_RANGE) {
+            lines.add(normalLine());
+        }
         return lines;
     }
 
@@ -120,14 +142,22 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
 
     /** E.g. {@code mimo outage bound at FER 0.01: 9.80 dB (outside the swept range; …), gap 14.20 dB}. */
     private String boundLine(Bound b) {
-        LinkAnalysis.BoundAnalysis ba = analysis.bounds().get(b);
-        OptionalDouble g = gapDb(b);
+        return curveLine(b.key() + " outage bound", analysis.bounds().get(b));
+    }
+
+    /** E.g. {@code normal approximation (finite length, AWGN) at FER 0.01: 1.02 dB, gap 1.80 dB}. */
+    private String normalLine() {
+        return curveLine("normal approximation (finite length, AWGN)", normal);
+    }
+
+    private String curveLine(String label, LinkAnalysis.BoundAnalysis ba) {
+        OptionalDouble g = ba.gapDb(snrDbAtTarget);
         String at = ba.snrDbAtTarget().isPresent()
                 ? String.format(Locale.ROOT, "%.2f dB", ba.snrDbAtTarget().getAsDouble()) : "none";
         String note = ba.reach() == Reach.IN_RANGE ? "" : " (" + ba.note() + ")";
-        Reach missing = analysis.gapReach(b);
+        Reach missing = ba.gapReach(snrDbAtTarget, linkReach);
         String gap = g.isPresent() ? String.format(Locale.ROOT, ", gap %.2f dB", g.getAsDouble())
                 : missing == ba.reach() ? "" : "; no gap: " + missing.words();
-        return String.format(Locale.ROOT, "%s outage bound at FER %s: %s%s%s", b.key(), targetFer, at, note, gap);
+        return String.format(Locale.ROOT, "%s at FER %s: %s%s%s", label, targetFer, at, note, gap);
     }
 }

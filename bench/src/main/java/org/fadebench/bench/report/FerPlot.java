@@ -18,11 +18,13 @@ import java.text.DecimalFormatSymbols;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.function.DoubleUnaryOperator;
 import org.fadebench.bench.analysis.Bound;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundPoint;
 import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.analysis.NormalApproximation;
 import org.fadebench.bench.analysis.Reach;
 import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.channel.OutageEstimate;
@@ -79,7 +81,9 @@ import org.jfree.svg.SVGGraphics2D;
  * (FER blue circles, BER vermillion squares); bounds are broken lines without markers, each its own
  * pattern (MIMO black long dashes, STBC bluish-green dash-dots, QAM reddish-purple short dashes), so
  * the chart also reads in grey; a subtitle says so in words. Every Monte Carlo bound carries a light
- * band over its 95 % interval and stops where that interval is wider than its value.
+ * band over its 95 % interval and stops where that interval is wider than its value. An AWGN link
+ * also shows its finite-length limit, the normal approximation, as an orange (Okabe–Ito) dash-dot-dot
+ * line, named in a line of its own under the style line.
  *
  * <p>A point with no errors has an error rate of 0, which a log axis cannot show. It is drawn as
  * an open downward triangle at the upper end of its interval, the largest rate the run leaves
@@ -100,12 +104,15 @@ public final class FerPlot {
     static final String BER_AXIS_TITLE = "BER (not comparable with outage)";
     static final String STYLE_WORDS = "simulated: solid lines with markers   ·   outage bounds: broken lines"
             + "   ·   grey line: target FER";
+    static final String NORMAL_APPROX_WORDS =
+            "AWGN finite-length limit (normal approximation): orange dash-dot-dot line";
 
     private static final Color BLUE = new Color(0x0072B2);
     private static final Color VERMILLION = new Color(0xD55E00);
     private static final Color BLACK = new Color(0x000000);
     private static final Color BLUISH_GREEN = new Color(0x009E73);
     private static final Color REDDISH_PURPLE = new Color(0xCC79A7);
+    private static final Color ORANGE = new Color(0xE69F00);
     private static final Color TARGET_GREY = new Color(0x777777);
     private static final Color GRID = new Color(0xD9D9D9);
     private static final Color MINOR_GRID = new Color(0xF0F0F0);
@@ -215,6 +222,8 @@ public final class FerPlot {
         if (bounds != null) {
             addBounds(fer, link, bounds, ferFloor, x);
         }
+        Optional<NormalApproximation> normal = points.isEmpty() ? Optional.empty() : NormalApproximation.of(link);
+        normal.ifPresent(a -> addNormalApproximation(fer, a, points, ferFloor, x));
         fer.addRangeMarker(targetLine(targetFer), Layer.BACKGROUND);
         XYPlot ber = panel(BER_AXIS_TITLE, berFloor);
         addSimulated(ber, points, Measure.BER, x, berFloor);
@@ -242,6 +251,9 @@ public final class FerPlot {
                         Numbers.db(100 * confidence));
         chart.addSubtitle(textLine(sub, RUN_FONT, new Color(0x444444), 6));
         chart.addSubtitle(textLine(STYLE_WORDS, RUN_FONT, new Color(0x444444), 0));
+        if (normal.isPresent()) {
+            chart.addSubtitle(textLine(NORMAL_APPROX_WORDS, RUN_FONT, new Color(0x444444), 0));
+        }
         double above = 6;
         for (String note : RunSummary.of(link, points, bounds, targetFer, RunSummary.NO_BOUNDS).reachLines()) {
             for (String line : wrap(note, RUN_FONT)) {
@@ -408,6 +420,39 @@ public final class FerPlot {
         }
         plot.setDataset(2, outage);
         plot.setRenderer(2, renderer);
+    }
+
+    /**
+     * Dataset 3: the normal approximation of an AWGN link ({@link NormalApproximation}) as an orange
+     * dash-dot-dot line. Unlike the bounds it is drawn on a fine grid over its fall from near 1 to
+     * the axis floor ({@link NormalApproximation#grid}), within the swept range or beyond it, since
+     * it falls by decades within a dB; it ends at the first value below the axis.
+     */
+    private static void addNormalApproximation(XYPlot plot, NormalApproximation a, List<PointResult> points,
+                                               double floor, DoubleUnaryOperator x) {
+        XYSeries series = new XYSeries(String.format(Locale.ROOT,
+                "Normal approximation, n = %d channel uses, k = %d bits (AWGN, finite length)", a.symbols(),
+                a.payloadBits()), false);
+        for (double snrDb : a.grid(points.stream().mapToDouble(PointResult::snrDb).toArray(), floor)) {
+            double v = a.fer(snrDb);
+            if (v > 0.0) {
+                series.add(x.applyAsDouble(snrDb), v);
+            }
+            if (v < floor) {
+                break;
+            }
+        }
+        XYSeriesCollection dataset = new XYSeriesCollection();
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        renderer.setLegendLine(new Line2D.Double(-20, 0, 20, 0));
+        if (series.getItemCount() > 0) {
+            dataset.addSeries(series);
+            renderer.setSeriesPaint(0, ORANGE);
+            renderer.setSeriesStroke(0, new BasicStroke(2.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
+                    new float[] {12f, 4f, 2f, 4f, 2f, 4f}, 0f));
+        }
+        plot.setDataset(3, dataset);
+        plot.setRenderer(3, renderer);
     }
 
     /** E.g. "Alamouti 2×2, QPSK, Rayleigh fading" or "1×2, BPSK, Rayleigh fading, no space-time code". */

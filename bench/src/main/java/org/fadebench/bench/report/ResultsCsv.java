@@ -4,17 +4,20 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import org.fadebench.bench.analysis.Bound;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundPoint;
 import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.analysis.NormalApproximation;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
 
 /**
  * Writes {@code results.csv}: comment lines starting with {@code #} (link, seed, SNR convention,
- * intervals), then a header and one row per SNR point. No timing goes into this file, so the same
+ * intervals), then a header and one row per SNR point; an AWGN link has one more column at the
+ * end, {@value #NORMAL_APPROX_COLUMN}. No timing goes into this file, so the same
  * seed and settings give the same bytes.
  */
 public final class ResultsCsv {
@@ -24,6 +27,9 @@ public final class ResultsCsv {
             + "fer_ci_low,fer_ci_high,ber_ci_low,ber_ci_high,symbols,symbol_errors,ser,"
             + "p_out_mimo,p_out_stbc,p_out_qam,p_out_mimo_ci_low,p_out_mimo_ci_high,crc_failures,undetected_errors,"
             + "fec_iterations_mean";
+
+    /** The column an AWGN link adds at the end (see {@link NormalApproximation}); other links have none. */
+    public static final String NORMAL_APPROX_COLUMN = "fer_normal_approx";
 
     /** The SNR convention, stated in every output. */
     public static final String SNR_CONVENTION = "snr_db = total transmitted energy per channel use / N0, "
@@ -73,6 +79,20 @@ public final class ResultsCsv {
             w.append("# p_out_*: empty, outage bounds are given for orthogonal codes over channels constant within a "
                     + "block (no Doppler, no trace)\n");
         }
+        Optional<NormalApproximation> normal = NormalApproximation.of(link);
+        boolean awgn = link.channel().awgn();
+        if (normal.isPresent()) {
+            NormalApproximation a = normal.get();
+            w.append("# ").append(NORMAL_APPROX_COLUMN).append(": finite-blocklength limit, normal approximation")
+                    .append(" Q((nC - k + log2(n)/2) / sqrt(nV)) (Polyanskiy, Poor, Verdu 2010) with n = ")
+                    .append(a.symbols()).append(" channel uses (").append(a.modulation().cliName())
+                    .append(" symbols, each at ").append(Numbers.db(a.symbolGain())).append(" x SNR), k = ")
+                    .append(a.payloadBits()).append(" information bits, C and V of the ")
+                    .append(a.modulation().cliName()).append("-input AWGN channel (coded modulation)\n");
+        } else if (awgn) {
+            w.append("# ").append(NORMAL_APPROX_COLUMN).append(": empty, ").append(NormalApproximation.NOT_APPLICABLE)
+                    .append('\n');
+        }
         if (link.coding().coded()) {
             w.append("# coded: ").append(link.coding().describe()).append("; ").append(link.codedBitsPerFrame())
                     .append(" coded bits per frame; symbols and ser count raw decisions on the coded bits; ")
@@ -81,7 +101,7 @@ public final class ResultsCsv {
         if (interrupted) {
             w.append("# interrupted: partial results; run the same command with --resume to finish\n");
         }
-        w.append(HEADER).append('\n');
+        w.append(HEADER).append(awgn ? "," + NORMAL_APPROX_COLUMN : "").append('\n');
         for (int i = 0; i < results.size(); i++) {
             PointResult r = results.get(i);
             FrameCounters c = r.counts();
@@ -110,6 +130,9 @@ public final class ResultsCsv {
                     Long.toString(c.crcFailures()),
                     Long.toString(c.undetectedErrors()),
                     Double.isNaN(c.fecIterationsMean()) ? "" : Numbers.db(c.fecIterationsMean())));
+            if (awgn) {
+                w.append(',').append(normal.map(a -> Numbers.rate(a.fer(r.snrDb()))).orElse(""));
+            }
             w.append('\n');
         }
         return w.toString();

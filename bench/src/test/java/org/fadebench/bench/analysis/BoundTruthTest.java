@@ -117,7 +117,7 @@ class BoundTruthTest {
         RunSummary summary = RunSummary.of(bpsk, high, siso, 0.01, RunSummary.NO_BOUNDS);
         String text = String.join("\n", summary.lines());
         assertTrue(text.contains("none: the link did not reach the target FER in the swept range"), text);
-        assertTrue(text.contains("stbc outage bound at FER 0.01: 19.98 dB (outside the swept range; the bound was computed beyond it); no gap: "
+        assertTrue(text.contains("stbc outage bound at FER 0.01: 19.98 dB (outside the swept range; the curve was computed beyond it); no gap: "
                 + "the link did not reach the target FER in the swept range"), text);
         assertTrue(text.contains("uncoded link at the constellation's full rate: the QAM-constrained bound is 1"), text);
 

@@ -20,6 +20,7 @@ import javax.xml.parsers.DocumentBuilderFactory;
 import org.fadebench.bench.analysis.Bound;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundSettings;
+import org.fadebench.bench.analysis.NormalApproximation;
 import org.fadebench.bench.analysis.Reach;
 import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.bench.link.FrameCoding;
@@ -215,6 +216,55 @@ class FerPlotTest {
         }
         assertEquals(2, simulated);
         assertEquals(3, bounds);
+    }
+
+    /**
+     * An AWGN link also shows its normal approximation (dataset 3) as an orange dash-dot-dot line
+     * without markers, named in its own style line: the approximation's values, from near 1 down
+     * to the axis floor (for this rate-1/2 code at about −2 dB, below the swept SNRs, so the curve
+     * widens the range); a fading link has none.
+     */
+    @Test
+    void awgnLinkShowsTheNormalApproximation() {
+        LinkSettings awgn = new LinkSettings(Modulation.BPSK, SpaceTimeCodes.NONE, 1, 1, Fading.NONE, 1024, 0,
+                Equaliser.MF, new FrameCoding(new FecScheme(Crc.NONE, ChannelCodes.standard().find("conv-r12")),
+                        Interleaving.RANDOM, 0, LlrMethod.MAXLOG));
+        NormalApproximation a = NormalApproximation.of(awgn).orElseThrow();
+        JFreeChart chart = FerPlot.chart(awgn, SEED, sweep(), 0.95, null, TARGET_FER, FerPlot.Axes.AUTOMATIC);
+        XYPlot fer = panels(chart).get(0);
+        XYDataset curve = fer.getDataset(3);
+        assertEquals(1, curve.getSeriesCount());
+        int n = curve.getItemCount(0);
+        assertTrue(n >= 50, n + " points");
+        for (int i = 0; i < n; i++) {
+            assertEquals(a.fer(curve.getXValue(0, i)), curve.getYValue(0, i), 0.0);
+        }
+        assertTrue(curve.getXValue(0, 0) < SNR_DB[0] && curve.getYValue(0, 0) >= 0.99 - 1e-9, "starts near 1");
+        assertEquals(fer.getRangeAxis().getLowerBound(), curve.getYValue(0, n - 1),
+                1e-6 * fer.getRangeAxis().getLowerBound(), "ends at the axis");
+        LegendItem item = null;
+        LegendItemCollection items = chart.getXYPlot().getLegendItems();
+        for (int i = 0; i < items.getItemCount(); i++) {
+            if (items.get(i).getLabel().startsWith("Normal approximation, n = 2060 channel uses, k = 1024 bits")) {
+                item = items.get(i);
+            }
+        }
+        assertTrue(item != null && item.isLineVisible() && !item.isShapeVisible());
+        assertEquals(6, ((BasicStroke) item.getLineStroke()).getDashArray().length);
+        assertEquals(new java.awt.Color(0xE69F00), item.getLinePaint());
+        assertTrue(subtitles(chart).contains(FerPlot.NORMAL_APPROX_WORDS));
+        assertTrue(panels(chart(sweep(), FerPlot.Axes.AUTOMATIC)).get(0).getDataset(3) == null);
+        assertFalse(subtitles(chart(sweep(), FerPlot.Axes.AUTOMATIC)).contains(FerPlot.NORMAL_APPROX_WORDS));
+    }
+
+    private static List<String> subtitles(JFreeChart chart) {
+        List<String> texts = new java.util.ArrayList<>();
+        for (int i = 0; i < chart.getSubtitleCount(); i++) {
+            if (chart.getSubtitle(i) instanceof org.jfree.chart.title.TextTitle t) {
+                texts.add(t.getText());
+            }
+        }
+        return texts;
     }
 
     /** With --plot-x ebn0 every point and bound sits at Eb/N0 = SNR − 10 log10(R), here R = 2 (QPSK, rate 1). */
