@@ -10,15 +10,25 @@ import java.util.concurrent.ConcurrentHashMap;
  * Z = ⌈k / kb⌉, and round(k / R) bits are sent ({@link LiftedLayout}).
  *
  * <p>Information degree profiles, chosen by {@link Protograph#search} (high degrees 4 to 8; lifts
- * without 4-cycles at k = 256), and
- * their Gaussian-approximation thresholds on the BI-AWGN channel (Eb/N0 at the design rate):
+ * without 4-cycles at k = 256), and their Gaussian-approximation thresholds on the BI-AWGN channel
+ * (Eb/N0 at the design rate):
  * <ul>
  * <li>rate 1/2: 12 + 12 columns, 4 of degree 8, 8 of degree 3; σ* = 0.9298, 0.633 dB
  * <li>rate 2/3: 16 + 8 columns, 4 of degree 8, 12 of degree 3; σ* = 0.7294, 1.492 dB
  * <li>rate 3/4: 18 + 6 columns, 5 of degree 6, 13 of degree 3; σ* = 0.6406, 2.107 dB
  * <li>rate 5/6: 20 + 4 columns, 1 of degree 4, 19 of degree 3; σ* = 0.5551, 2.894 dB
  * </ul>
- * (BPSK-constrained capacity at these rates is about 0.19, 1.06, 1.63 and 2.36 dB; from memory.)
+ * (The BPSK-constrained capacity limits at these rates are 0.187, 1.059, 1.626 and 2.362 dB, by
+ * Gauss–Hermite quadrature of the mutual information.)
+ *
+ * <p>Measured at k = 1024, BPSK over AWGN, 50 iterations with early stop, the floating layered
+ * decoder, FER (frame errors / frames): rate 1/2 (n = 2048) sum-product 3.5e-3 (7/2000) at 1.50 dB
+ * and 2.5e-4 (4/16000) at 1.75 dB; normalised min-sum (α = 0.75) 2.1e-3 (53/25312) at 1.75 dB,
+ * 4.7e-4 (28/60000) at 2.00 dB. Min-sum: rate 2/3 (n = 1536) 1.2e-3 (30/26064) at 2.50 dB,
+ * 1.7e-4 (5/30000) at 2.75 dB; rate 3/4 (n = 1365) 2.7e-3 (30/11072) at 3.00 dB, 1.7e-4 (5/30000)
+ * at 3.25 dB; rate 5/6 (n = 1229) 2.5e-3 (30/11792) at 4.00 dB, 1.5e-4 (6/40000) at 4.25 dB
+ * (sum-product 8.3e-4, 5/6000, at 4.00 dB). The normal approximation (Y. Polyanskiy, H. V. Poor,
+ * S. Verdú, IEEE Trans. Inf. Theory 56(5), 2010) puts FER 1e-3 at 0.87, 1.75, 2.34 and 3.09 dB.
  *
  * <p>The circulant shifts for each Z come from {@link ShiftSearch} (no 4-cycles wherever the
  * search finds such shifts, as few 6-cycles as it can), computed on first use of a Z and kept
