@@ -1,0 +1,306 @@
+package org.fadebench.coding.fec.ldpc;
+
+import java.util.Arrays;
+import org.fadebench.coding.fec.Lanes;
+
+/**
+ * The fast decoder: layered normalised or offset min-sum (the schedule and messages of
+ * {@link FloatingPointDecoder}) on integer messages, many frames at once in lanes.
+ *
+ * <p>Quantisation: a channel LLR L becomes round(L/Δ) with Δ = 1/{@value #SCALE} LLR units, held
+ * within ±{@value #CHANNEL_LIMIT} (±63.9 LLR units). Channel LLRs of BPSK on AWGN near a rate-1/2
+ * code's threshold are about 2/σ² ≈ 3 in mean with a spread of 2/σ ≈ 2.4, and those of QAM at the
+ * SNRs where codes work rarely pass 30, so Δ resolves them finely and the limit rarely cuts (common
+ * practice, no source). The two least |Q| of a check are held within ±{@value #MESSAGE_LIMIT}
+ * (±256 LLR units), so every message |R| is too, and a posterior P, the channel value plus one
+ * message per edge of its column, stays within CHANNEL_LIMIT + degree · MESSAGE_LIMIT: no
+ * arithmetic overflows (32-bit ints). The factor α is rounded to a multiple of 1/16 and applied as
+ * ⌊m·16α⌋/16; the offset β is rounded to a multiple of Δ and applied as max(m − β, 0).
+ *
+ * <p>Layout: every quantity is a row over lanes, lane index innermost ({@code check[e][lane]} per
+ * edge e in row order, {@code posterior[j][lane]} per column j), and the check update is a few
+ * short loops over lanes with branch-free selects (sign masks from arithmetic shifts), the form the
+ * JIT's loop vectoriser takes (see the Viterbi decoder; C2 in Java 17 vectorises only short loop
+ * bodies, and no 16-bit min, so the messages are ints and each step its own loop). Per check row
+ * and edge: Q = P − R into the message row with the sign parity, then the least and second least
+ * |Q| per lane; one loop corrects the two minima; then per edge R = ±(the corrected least of the
+ * others) and P = Q + R. The edge of the least is not kept: an edge whose |Q| equals the least takes
+ * the second least, which on a tie is the same value.
+ *
+ * <p>Early stop: after each iteration every lane's syndrome is computed from the signs of P (one
+ * exclusive-or per edge and lane). A lane whose checks all hold is done: its hard decisions are
+ * copied out then, with its iteration count. Its arithmetic goes on with the other lanes, unseen,
+ * so each frame's result is that of decoding it alone; the decode ends once every lane is done or
+ * at the iteration limit. Without early stop the syndrome is computed once, at the end.
+ * Allocates nothing after construction.
+ */
+final class FixedPointDecoder extends LayeredDecoder {
+
+    /** Quantisation steps per LLR unit. */
+    static final int SCALE = 16;
+    /** The most |channel LLR|, in steps. */
+    static final int CHANNEL_LIMIT = 1023;
+    /** The most |R|, in steps. */
+    static final int MESSAGE_LIMIT = 4095;
+    /** Above any |Q|: the starting value of the minima. */
+    private static final int ABOVE = 1 << 30;
+
+    private final boolean normalised;
+    private final int factor;
+    private final int offset;
+    private final int[][] channel;
+    private final int[][] posterior;
+    private final int[][] check;
+    private final int[][] decided;
+    private final int[] least;
+    private final int[] second;
+    private final int[] leastOut;
+    private final int[] gap;
+    private final int[] parity;
+    private final int[] syndrome;
+    private final int[] failed;
+    private final int[] finished;
+    private final boolean[] active;
+
+    FixedPointDecoder(ParityCheckMatrix h, LdpcDecoding decoding, int lanes) {
+        super(h, decoding, lanes);
+        if (decoding.algorithm() == LdpcAlgorithm.SUM_PRODUCT) {
+            throw new IllegalArgumentException("sum-product runs in floating point only");
+        }
+        normalised = decoding.algorithm() == LdpcAlgorithm.MIN_SUM;
+        factor = (int) Math.round(decoding.correction() * 16);
+        offset = (int) Math.round(decoding.correction() * SCALE);
+        channel = new int[columns][lanes];
+        posterior = new int[columns][lanes];
+        check = new int[edgeColumn.length][lanes];
+        decided = new int[columns][lanes];
+        least = new int[lanes];
+        second = new int[lanes];
+        leastOut = new int[lanes];
+        gap = new int[lanes];
+        parity = new int[lanes];
+        syndrome = new int[lanes];
+        failed = new int[lanes];
+        finished = new int[lanes];
+        active = new boolean[lanes];
+    }
+
+    /** Bytes the buffers of a decoder take. */
+    static long bytes(ParityCheckMatrix h, int lanes) {
+        long row = 4L * lanes;
+        return sharedBytes(h, lanes) + 3 * tableBytes(h.columns(), row) + tableBytes(h.edges(), row)
+                + 8 * Lanes.rowBytes(row) + Lanes.rowBytes(lanes);
+    }
+
+    /** The quantised value of a channel LLR. */
+    static int quantise(double llr) {
+        return (int) Math.max(-CHANNEL_LIMIT, Math.min(CHANNEL_LIMIT, Math.rint(llr * SCALE)));
+    }
+
+    @Override
+    public void load(int lane, double[] llr, int off) {
+        Lanes.checkLane(lane, lanes);
+        checkFinite(lane, llr, off);
+        for (int j = 0; j < columns; j++) {
+            channel[j][lane] = quantise(llr[off + j]);
+        }
+    }
+
+    @Override
+    int decision(int lane, int column) {
+        return decided[column][lane] >>> 31;
+    }
+
+    @Override
+    public void decode(int frames) {
+        Lanes.checkFrames(frames, lanes);
+        for (int j = 0; j < columns; j++) {
+            System.arraycopy(channel[j], 0, posterior[j], 0, frames);
+        }
+        for (int[] row : check) {
+            Arrays.fill(row, 0, frames, 0);
+        }
+        Arrays.fill(active, 0, frames, true);
+        int limit = decoding.iterations();
+        int running = frames;
+        int done = 0;
+        while (done < limit && running > 0) {
+            for (int i = 0; i < rows; i++) {
+                updateRow(i, frames);
+            }
+            done++;
+            if (decoding.earlyStop() && done < limit) {
+                running -= finish(frames, done, false);
+            }
+        }
+        if (running > 0) {
+            finish(frames, done, true);
+        }
+        decodedLanes = frames;
+    }
+
+    /**
+     * Computes the syndromes and finishes the lanes still running whose checks all hold (all
+     * running lanes if {@code last}): iterations, satisfied, decisions. Returns how many it finished.
+     */
+    private int finish(int n, int done, boolean last) {
+        computeSyndromes(n);
+        int count = 0;
+        for (int l = 0; l < n; l++) {
+            boolean ok = failed[l] >= 0;
+            boolean stop = active[l] && (ok || last);
+            finished[l] = stop ? -1 : 0;
+            if (stop) {
+                active[l] = false;
+                iterations[l] = done;
+                satisfied[l] = ok;
+                count++;
+            }
+        }
+        if (count > 0) {
+            for (int j = 0; j < columns; j++) {
+                keep(posterior[j], decided[j], finished, n);
+            }
+        }
+        return count;
+    }
+
+    /** failed[l] negative iff some check of lane l fails on the signs of P. */
+    private void computeSyndromes(int n) {
+        Arrays.fill(failed, 0, n, 0);
+        for (int i = 0; i < rows; i++) {
+            int e = rowStart[i];
+            System.arraycopy(posterior[edgeColumn[e]], 0, syndrome, 0, n);
+            for (e++; e < rowStart[i + 1]; e++) {
+                exclusiveOr(syndrome, posterior[edgeColumn[e]], n);
+            }
+            or(failed, syndrome, n);
+        }
+    }
+
+    private static void exclusiveOr(int[] acc, int[] p, int n) {
+        for (int l = 0; l < n; l++) {
+            acc[l] ^= p[l];
+        }
+    }
+
+    private static void or(int[] acc, int[] s, int n) {
+        for (int l = 0; l < n; l++) {
+            acc[l] |= s[l];
+        }
+    }
+
+    /** to = from where mask is −1, unchanged where 0. */
+    private static void keep(int[] from, int[] to, int[] mask, int n) {
+        for (int l = 0; l < n; l++) {
+            to[l] ^= (to[l] ^ from[l]) & mask[l];
+        }
+    }
+
+    private void updateRow(int row, int n) {
+        int from = rowStart[row];
+        int to = rowStart[row + 1];
+        Arrays.fill(least, 0, n, ABOVE);
+        Arrays.fill(second, 0, n, ABOVE);
+        Arrays.fill(parity, 0, n, 0);
+        for (int e = from; e < to; e++) {
+            int[] r = check[e];
+            subtract(posterior[edgeColumn[e]], r, n);
+            minima(r, n);
+        }
+        if (normalised) {
+            scale(n);
+        } else {
+            lessOffset(n);
+        }
+        for (int e = from; e < to; e++) {
+            scatter(posterior[edgeColumn[e]], check[e], n);
+        }
+    }
+
+    /** r = Q = p − r, and the sign parity updated. */
+    private void subtract(int[] p, int[] r, int n) {
+        final int[] sign = parity;
+        for (int l = 0; l < n; l++) {
+            int q = p[l] - r[l];
+            r[l] = q;
+            sign[l] ^= q;
+        }
+    }
+
+    /**
+     * Edge k of a row, its Q in {@code q}: the least and second least |Q| and the edge of the
+     * least updated (kept apart from {@link #subtract}: the JIT vectorises only short loop bodies).
+     */
+    private void minima(int[] q, int n) {
+        final int[] m1 = least;
+        final int[] m2 = second;
+        for (int l = 0; l < n; l++) {
+            int v = q[l];
+            int s = v >> 31;
+            int a = (v ^ s) - s;
+            int low = m1[l];
+            int d = a - low;
+            int cut = d & (d >> 31);
+            m1[l] = low + cut;
+            int high = a - cut - m2[l];
+            m2[l] += high & (high >> 31);
+        }
+    }
+
+    /**
+     * The minima corrected, m ↦ ⌊min(m, MESSAGE_LIMIT)·factor/16⌋, and {@code second} made the
+     * difference of the corrected second and least.
+     */
+    private void scale(int n) {
+        final int[] m1 = least;
+        final int[] m2 = second;
+        final int[] c1 = leastOut;
+        final int[] c2 = gap;
+        final int f = factor;
+        for (int l = 0; l < n; l++) {
+            int low = ((m1[l] - MESSAGE_LIMIT >> 31 & m1[l] - MESSAGE_LIMIT) + MESSAGE_LIMIT) * f >> 4;
+            int high = ((m2[l] - MESSAGE_LIMIT >> 31 & m2[l] - MESSAGE_LIMIT) + MESSAGE_LIMIT) * f >> 4;
+            c1[l] = low;
+            c2[l] = high - low;
+        }
+    }
+
+    /**
+     * The minima corrected, m ↦ max(min(m, MESSAGE_LIMIT) − offset, 0), and {@code second} made
+     * the difference of the corrected second and least.
+     */
+    private void lessOffset(int n) {
+        final int[] m1 = least;
+        final int[] m2 = second;
+        final int[] c1 = leastOut;
+        final int[] c2 = gap;
+        final int b = MESSAGE_LIMIT - offset;
+        for (int l = 0; l < n; l++) {
+            int low = (m1[l] - MESSAGE_LIMIT >> 31 & m1[l] - MESSAGE_LIMIT) + b;
+            int high = (m2[l] - MESSAGE_LIMIT >> 31 & m2[l] - MESSAGE_LIMIT) + b;
+            low &= ~(low >> 31);
+            high &= ~(high >> 31);
+            c1[l] = low;
+            c2[l] = high - low;
+        }
+    }
+
+    /** Edge k of a row: R = ±(the corrected least |Q| of the others), P = Q + R; m2 holds the difference. */
+    private void scatter(int[] p, int[] r, int n) {
+        final int[] m1 = least;
+        final int[] c1 = leastOut;
+        final int[] c2 = gap;
+        final int[] sign = parity;
+        for (int l = 0; l < n; l++) {
+            int q = r[l];
+            int s0 = q >> 31;
+            int own = (((q ^ s0) - s0 ^ m1[l]) - 1) >> 31;
+            int mag = c1[l] + (c2[l] & own);
+            int s = (sign[l] ^ q) >> 31;
+            int v = (mag ^ s) - s;
+            r[l] = v;
+            p[l] = q + v;
+        }
+    }
+}

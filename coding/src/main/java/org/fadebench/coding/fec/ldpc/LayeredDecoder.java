@@ -1,0 +1,112 @@
+package org.fadebench.coding.fec.ldpc;
+
+import org.fadebench.coding.fec.Lanes;
+
+/**
+ * What the layered LDPC decoders share: H by rows as edges (edge e of row i is one of
+ * {@code rowStart[i] .. rowStart[i + 1] − 1}, on column {@code edgeColumn[e]}), the decoding
+ * settings, each lane's outcome of the last decode and the argument checks.
+ */
+abstract class LayeredDecoder implements LdpcDecoder {
+
+    final LdpcDecoding decoding;
+    final int lanes;
+    final int columns;
+    final int rows;
+    final int[] rowStart;
+    final int[] edgeColumn;
+    final int[] iterations;
+    final boolean[] satisfied;
+    int decodedLanes;
+
+    LayeredDecoder(ParityCheckMatrix h, LdpcDecoding decoding, int lanes) {
+        checkLanes(lanes);
+        this.decoding = decoding;
+        this.lanes = lanes;
+        this.columns = h.columns();
+        this.rows = h.rows();
+        this.rowStart = new int[rows + 1];
+        this.edgeColumn = new int[h.edges()];
+        for (int i = 0, e = 0; i < rows; i++) {
+            for (int p = 0; p < h.rowDegree(i); p++) {
+                edgeColumn[e++] = h.rowEntry(i, p);
+            }
+            rowStart[i + 1] = e;
+        }
+        this.iterations = new int[lanes];
+        this.satisfied = new boolean[lanes];
+    }
+
+    /** @throws IllegalArgumentException "L lanes; need at least 1" unless lanes ≥ 1 */
+    static void checkLanes(int lanes) {
+        if (lanes < 1) {
+            throw new IllegalArgumentException(lanes + " lanes; need at least 1");
+        }
+    }
+
+    /** Bytes of the arrays this class allocates (the edges by row and the outcome per lane). */
+    static long sharedBytes(ParityCheckMatrix h, int lanes) {
+        return Lanes.rowBytes(4L * (h.rows() + 1)) + Lanes.rowBytes(4L * h.edges()) + Lanes.rowBytes(4L * lanes)
+                + Lanes.rowBytes(lanes);
+    }
+
+    /** Bytes of an array of {@code count} rows of {@code rowPayload} bytes each, with its headers. */
+    static long tableBytes(long count, long rowPayload) {
+        return Lanes.rowBytes(4L * count) + count * Lanes.rowBytes(rowPayload);
+    }
+
+    /** The largest row degree of H. */
+    static int largestRowDegree(ParityCheckMatrix h) {
+        int most = 0;
+        for (int i = 0; i < h.rows(); i++) {
+            most = Math.max(most, h.rowDegree(i));
+        }
+        return most;
+    }
+
+    @Override
+    public final int lanes() {
+        return lanes;
+    }
+
+    @Override
+    public final int bit(int lane, int column) {
+        Lanes.checkLane(lane, decodedLanes);
+        checkColumn(column);
+        return decision(lane, column);
+    }
+
+    @Override
+    public final int iterations(int lane) {
+        Lanes.checkLane(lane, decodedLanes);
+        return iterations[lane];
+    }
+
+    @Override
+    public final boolean satisfied(int lane) {
+        Lanes.checkLane(lane, decodedLanes);
+        return satisfied[lane];
+    }
+
+    /** The hard decision of a checked lane and column. */
+    abstract int decision(int lane, int column);
+
+    /**
+     * @throws IllegalArgumentException "column C; valid columns are 0 to n−1" unless 0 ≤ column < n
+     */
+    final void checkColumn(int column) {
+        if (column < 0 || column >= columns) {
+            throw new IllegalArgumentException("column " + column + "; valid columns are 0 to " + (columns - 1));
+        }
+    }
+
+    /** @throws IllegalArgumentException naming the lane unless every LLR of the frame is finite */
+    final void checkFinite(int lane, double[] llr, int off) {
+        for (int j = 0; j < columns; j++) {
+            if (!Double.isFinite(llr[off + j])) {
+                throw new IllegalArgumentException("LLR of column " + j + " for lane " + lane + " is "
+                        + llr[off + j] + "; valid: finite");
+            }
+        }
+    }
+}
