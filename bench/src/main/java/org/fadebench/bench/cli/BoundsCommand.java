@@ -48,8 +48,9 @@ final class BoundsCommand implements Callable<Integer> {
             + "p_out_stbc_ci_low,p_out_stbc_ci_high,p_out_qam_ci_low,p_out_qam_ci_high";
 
     /** The settings {@code bounds} takes. */
-    static final List<Setting> SETTINGS = List.of(CODE, CODE_FILE, TX, RX, MODULATION, FEC, CRC, FRAME_BITS,
-            COHERENCE, FADING, K_FACTOR, NAKAGAMI_M, TX_CORR, RX_CORR, SNR_DB, RATE, MI, OUTAGE_DRAWS, FOLDER);
+    static final List<Setting> SETTINGS = List.of(CODE, CODE_FILE, TX, RX, MODULATION, FEC, FEC_FILE, CRC,
+            FRAME_BITS, COHERENCE, FADING, K_FACTOR, NAKAGAMI_M, TX_CORR, RX_CORR, SNR_DB, RATE, MI, OUTAGE_DRAWS,
+            FOLDER);
 
     /** Where {@code bounds} differs from {@code run}'s defaults. */
     static final Map<Setting, String> DEFAULTS = Map.of(SNR_DB, "0..30/2", FOLDER, "fadebench-bounds");

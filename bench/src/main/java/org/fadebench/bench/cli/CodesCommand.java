@@ -13,6 +13,7 @@ import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.report.AtomicFiles;
 import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.ChannelCodes;
+import org.fadebench.coding.fec.ldpc.LdpcCode;
 import org.fadebench.coding.fec.ldpc.LdpcCodeFile;
 import org.fadebench.coding.fec.ldpc.MatrixMarketWriter;
 import org.fadebench.coding.fec.ldpc.ParityCheckMatrix;
@@ -116,7 +117,7 @@ final class CodesCommand implements Callable<Integer> {
      * reported as one line naming {@code --frame-bits}).
      */
     static ParityCheckMatrix ldpcMatrix(ChannelCode code, int infoBits) {
-        return null;
+        return code instanceof LdpcCode ldpc ? ldpc.layout(infoBits).matrix() : null;
     }
 
     /** The channel codes to list: all, or the one {@code --fec} names; then the {@code --fec-file} code. */

@@ -79,7 +79,7 @@ final class RunOutputs {
         if (scenarioFile != null) {
             in.add(new Named("the scenario file " + scenarioFile, scenarioFile));
         }
-        for (Setting s : List.of(RunSettings.CODE_FILE, RunSettings.TRACE)) {
+        for (Setting s : List.of(RunSettings.CODE_FILE, RunSettings.FEC_FILE, RunSettings.TRACE)) {
             if (plan.values().isSet(s)) {
                 in.add(new Named(s.option() + " " + plan.values().text(s), Path.of(plan.values().text(s))));
             }

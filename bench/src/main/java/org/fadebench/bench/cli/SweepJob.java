@@ -213,9 +213,10 @@ final class SweepJob {
                 written.add(plan.archive());
             }
             if (!plan.quiet()) {
-                out.println(String.format(Locale.ROOT, "simulated %d frames in %.2f s: %.2f M symbols/s on %d thread%s",
-                        outcome.framesSimulated(), seconds, run.symbolsPerSecond() * 1e-6, plan.threads(),
-                        plan.threads() == 1 ? "" : "s"));
+                out.println(String.format(Locale.ROOT,
+                        "simulated %d frames in %.2f s: %.2f M symbols/s, %.2f M information bits/s on %d thread%s",
+                        outcome.framesSimulated(), seconds, run.symbolsPerSecond() * 1e-6,
+                        run.infoBitsPerSecond() * 1e-6, plan.threads(), plan.threads() == 1 ? "" : "s"));
                 for (Path p : written) {
                     out.println("wrote " + p);
                 }

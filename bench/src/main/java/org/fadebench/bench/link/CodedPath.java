@@ -106,6 +106,6 @@ final class CodedPath implements FramePath {
             bitErrors += bits[i] ^ payloadOut[i];
         }
         counters.addFrame(frameBits, bitErrors, symbols, rawSymbolErrors[lane], withCrc && !crcOk,
-                withCrc && crcOk && bitErrors > 0);
+                withCrc && crcOk && bitErrors > 0, codec.iterations(lane));
     }
 }

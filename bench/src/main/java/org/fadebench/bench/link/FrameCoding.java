@@ -45,8 +45,12 @@ public record FrameCoding(FecScheme scheme, Interleaving interleaving, int inter
         return coded() ? scheme.codedBits(payloadBits) : payloadBits;
     }
 
-    /** Checks the interleaver against the coded frame; the message names the option and valid sizes. */
+    /**
+     * Checks the payload against the channel code and the interleaver against the coded frame; the
+     * message names the option and valid sizes.
+     */
     void check(int payloadBits) {
+        scheme.checkPayload(payloadBits);
         int n = codedBits(payloadBits);
         if (interleaving == Interleaving.BLOCK) {
             if (interleaverRows == 0) {
@@ -88,7 +92,7 @@ public record FrameCoding(FecScheme scheme, Interleaving interleaving, int inter
         if (!coded()) {
             return "uncoded";
         }
-        return scheme.code().cliName() + " + " + scheme.crc().cliName() + ", " + interleaving.cliName()
+        return scheme.code().describe() + " + " + scheme.crc().cliName() + ", " + interleaving.cliName()
                 + " interleaver" + (interleaving == Interleaving.BLOCK ? " (" + interleaverRows + " rows)" : "")
                 + ", " + llr.cliName() + " LLRs";
     }

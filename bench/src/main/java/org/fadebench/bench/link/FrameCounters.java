@@ -4,8 +4,17 @@ import java.io.Serializable;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
-/** Error counts over a number of frames. Mutable; one per batch, merged in batch order. */
+/**
+ * Error counts over a number of frames, and the channel decoder's iterations summed over them.
+ * Mutable; one per batch, merged in batch order.
+ */
 public final class FrameCounters implements Serializable {
+
+    /**
+     * The name of the decoder iterations' sum in {@link #byName()}, present only when the sum is not
+     * 0 (a code whose decoder iterates), so that the files of every other link read as before.
+     */
+    public static final String FEC_ITERATIONS = "fec_iterations_sum";
 
     private long frames;
     private long frameErrors;
@@ -16,18 +25,21 @@ public final class FrameCounters implements Serializable {
     private double bitErrorsSquared;
     private long crcFailures;
     private long undetectedErrors;
+    private long fecIterations;
 
     /**
      * Records one coded frame.
      *
-     * @param crcFailed  the frame's CRC did not check
-     * @param undetected the frame has wrong bits but its CRC checked
+     * @param crcFailed     the frame's CRC did not check
+     * @param undetected    the frame has wrong bits but its CRC checked
+     * @param fecIterations the channel decoder's iterations on the frame (0 for a decoder that does not iterate)
      */
     public void addFrame(int frameBits, int frameBitErrors, int frameSymbols, int frameSymbolErrors, boolean crcFailed,
-                         boolean undetected) {
+                         boolean undetected, int fecIterations) {
         addFrame(frameBits, frameBitErrors, frameSymbols, frameSymbolErrors);
         crcFailures += crcFailed ? 1 : 0;
         undetectedErrors += undetected ? 1 : 0;
+        this.fecIterations += fecIterations;
     }
 
     /** Records one frame. */
@@ -53,6 +65,7 @@ public final class FrameCounters implements Serializable {
         bitErrorsSquared += o.bitErrorsSquared;
         crcFailures += o.crcFailures;
         undetectedErrors += o.undetectedErrors;
+        fecIterations += o.fecIterations;
     }
 
     /** Counts given one by one. */
@@ -87,16 +100,22 @@ public final class FrameCounters implements Serializable {
         m.put("bit_errors_squared", bitErrorsSquared);
         m.put("crc_failures", crcFailures);
         m.put("undetected_errors", undetectedErrors);
+        if (fecIterations != 0) {
+            m.put(FEC_ITERATIONS, fecIterations);
+        }
         return m;
     }
 
-    /** The counts of {@link #byName()}'s map (every name must be there). */
+    /** The counts of {@link #byName()}'s map (every name must be there; {@link #FEC_ITERATIONS} may be missing, for 0). */
     public static FrameCounters of(Map<String, ? extends Number> byName) {
-        return of(byName.get("frames").longValue(), byName.get("frame_errors").longValue(),
+        FrameCounters c = of(byName.get("frames").longValue(), byName.get("frame_errors").longValue(),
                 byName.get("bits").longValue(), byName.get("bit_errors").longValue(),
                 byName.get("symbols").longValue(), byName.get("symbol_errors").longValue(),
                 byName.get("bit_errors_squared").doubleValue(), byName.get("crc_failures").longValue(),
                 byName.get("undetected_errors").longValue());
+        Number iterations = byName.get(FEC_ITERATIONS);
+        c.fecIterations = iterations == null ? 0 : iterations.longValue();
+        return c;
     }
 
     /** A copy of these counts. */
@@ -143,6 +162,16 @@ public final class FrameCounters implements Serializable {
     /** Frames with wrong information bits whose CRC checked all the same (0 without a CRC). */
     public long undetectedErrors() {
         return undetectedErrors;
+    }
+
+    /** The channel decoder's iterations summed over the frames (0 for a decoder that does not iterate). */
+    public long fecIterations() {
+        return fecIterations;
+    }
+
+    /** Mean decoder iterations per frame; NaN for a decoder that does not iterate (or no frame). */
+    public double fecIterationsMean() {
+        return fecIterations == 0 ? Double.NaN : (double) fecIterations / frames;
     }
 
     public double fer() {

@@ -26,7 +26,10 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int receiv
                            int transmitAntennas, ChannelSpec channel, int frameBits, int coherenceSlots,
                            Equaliser equaliser, FrameCoding coding) implements Serializable {
 
-    /** Frame length used when the user gives none, rounded up to whole code blocks. */
+    /**
+     * Frame length used when the user gives none: rounded up to whole code blocks when uncoded, the
+     * nearest payload the channel code serves when coded ({@link FecScheme#payloadNear}).
+     */
     public static final int DEFAULT_FRAME_BITS = 1024;
 
     /** Most information bits per frame. */

@@ -101,6 +101,9 @@ public final class Checkpoint {
             Map<String, Number> counts = new LinkedHashMap<>();
             new FrameCounters().byName().forEach((name, zero) ->
                     counts.put(name, zero instanceof Long ? whole(p, name, where) : real(p, name, where)));
+            if (p.has(FrameCounters.FEC_ITERATIONS)) { // written only for a decoder that iterates
+                counts.put(FrameCounters.FEC_ITERATIONS, whole(p, FrameCounters.FEC_ITERATIONS, where));
+            }
             FrameCounters c = FrameCounters.of(counts);
             if (!p.path("done").isBoolean()) {
                 throw new IllegalArgumentException(where + "damaged checkpoint (done)");

@@ -25,7 +25,8 @@ public final class ResultsCsv {
     /** The column names, in order. */
     public static final String HEADER = "snr_db,frames,frame_errors,fer,bits,bit_errors,ber,ebn0_db,"
             + "fer_ci_low,fer_ci_high,ber_ci_low,ber_ci_high,symbols,symbol_errors,ser,"
-            + "p_out_mimo,p_out_stbc,p_out_qam,p_out_mimo_ci_low,p_out_mimo_ci_high,crc_failures,undetected_errors";
+            + "p_out_mimo,p_out_stbc,p_out_qam,p_out_mimo_ci_low,p_out_mimo_ci_high,crc_failures,undetected_errors,"
+            + "fec_iterations_mean";
 
     /** The column an AWGN link adds at the end (see {@link NormalApproximation}); other links have none. */
     public static final String NORMAL_APPROX_COLUMN = "fer_normal_approx";
@@ -127,7 +128,8 @@ public final class ResultsCsv {
                     b == null ? "" : Numbers.rate(b.mimo().lower()),
                     b == null ? "" : Numbers.rate(b.mimo().upper()),
                     Long.toString(c.crcFailures()),
-                    Long.toString(c.undetectedErrors())));
+                    Long.toString(c.undetectedErrors()),
+                    Double.isNaN(c.fecIterationsMean()) ? "" : Numbers.db(c.fecIterationsMean())));
             if (awgn) {
                 w.append(',').append(normal.map(a -> Numbers.rate(a.fer(r.snrDb()))).orElse(""));
             }

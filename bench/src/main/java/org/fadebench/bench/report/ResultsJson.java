@@ -33,6 +33,11 @@ public final class ResultsJson {
         public double symbolsPerSecond() {
             return seconds > 0 ? framesSimulated * (double) link.symbolsPerFrame() / seconds : 0;
         }
+
+        /** Payload (information) bits of the frames simulated per wall-clock second, as {@link #symbolsPerSecond}. */
+        public double infoBitsPerSecond() {
+            return seconds > 0 ? framesSimulated * (double) link.frameBits() / seconds : 0;
+        }
     }
 
     public static ObjectNode tree(Run run) {
@@ -71,12 +76,14 @@ public final class ResultsJson {
             p.put("ber_ci_low", r.berLow());
             p.put("ber_ci_high", r.berHigh());
             p.put("ser", finite(c.ser()));
+            p.put("fec_iterations_mean", finite(c.fecIterationsMean()));
             p.put("seconds", r.seconds());
         }
         root.set("summary", JSON.valueToTree(run.summary().toJson()));
         root.set("bounds", run.summary().analysis() == null ? JSON.nullNode()
                 : JSON.valueToTree(run.summary().analysis().toJson()));
         root.put("symbols_per_second", run.symbolsPerSecond());
+        root.put("info_bits_per_second", run.infoBitsPerSecond());
         ObjectNode timing = root.putObject("timing");
         timing.put("seconds", run.seconds());
         timing.put("frames_simulated", run.framesSimulated());

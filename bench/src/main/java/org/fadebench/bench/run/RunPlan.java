@@ -3,10 +3,14 @@ package org.fadebench.bench.run;
 import static org.fadebench.bench.settings.RunSettings.*;
 
 import java.io.Serializable;
+import java.nio.ByteBuffer;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -34,6 +38,11 @@ import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
+import org.fadebench.coding.fec.ldpc.LdpcAlgorithm;
+import org.fadebench.coding.fec.ldpc.LdpcCode;
+import org.fadebench.coding.fec.ldpc.LdpcCodeFile;
+import org.fadebench.coding.fec.ldpc.LdpcDecoding;
+import org.fadebench.coding.fec.ldpc.ParityCheckMatrix;
 import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.SpaceTimeCodeFile;
@@ -41,6 +50,7 @@ import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
 import org.fadebench.modem.MutualInformation;
+import org.fadebench.modem.NamedChoice;
 
 /**
  * A validated {@code run}: everything needed to simulate, report and resume, built from the
@@ -150,7 +160,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
         ChannelSpec channel = withCorrelationMatrices(channelSpec(v), v, nr, mt);
         FrameCoding coding = frameCoding(v);
         int bits = v.isSet(FRAME_BITS) ? v.integer(FRAME_BITS)
-                : coding.coded() ? LinkSettings.DEFAULT_FRAME_BITS
+                : coding.coded() ? coding.scheme().payloadNear(LinkSettings.DEFAULT_FRAME_BITS)
                 : LinkSettings.roundUpToBlocks(LinkSettings.DEFAULT_FRAME_BITS, mod, stbc);
         int coherence = v.integer(COHERENCE);
         return parse(null, () -> new LinkSettings(mod, stbc, nr, mt, channel, bits, coherence, dec, coding));
@@ -236,7 +246,8 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     /**
      * The settings as results.json records them: every setting by its key, those derived from
      * others (antennas, decoder, frame length, interleaver, threads, rate) at the value the run
-     * used; then the SNR points, the channel's description and the scenario file.
+     * used, and an LDPC code's decoding; then the SNR points, the channel's description and the
+     * scenario file.
      */
     public Map<String, Object> settings() {
         Map<String, Object> m = SettingsText.json(values, RunSettings.all());
@@ -246,6 +257,12 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
         m.put(INTERLEAVER.jsonKey(), link.coding().interleaving().cliName());
         m.put(THREADS.jsonKey(), threads);
         m.put(RATE.jsonKey(), bounds == null ? null : bounds.spectralEfficiency());
+        if (link.coding().scheme().code() instanceof LdpcCode ldpc) {
+            LdpcDecoding d = ldpc.decoding();
+            m.put(FEC_DECODER.jsonKey(), d.algorithm().cliName());
+            m.put(FEC_ITERATIONS.jsonKey(), d.iterations());
+            m.put(FEC_CORRECTION.jsonKey(), d.algorithm().corrected() ? d.correction() : null);
+        }
         m.put("snr_points_db", snrDb);
         m.put("channel", link.channel().describe());
         m.put("scenario", source);
@@ -254,11 +271,39 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
 
     /** Every setting that changes the numbers, for the checkpoint's fingerprint. */
     public String numbersFingerprintText(int batchFrames) {
-        return String.join("|", "v3", link.describe(), link.coding().toString(), link.channel().describe(),
+        return String.join("|", "v3", link.describe(), link.coding().toString(), parityChecks(link),
+                link.channel().describe(),
                 SpaceTimeCodeFile.format(link.code()), link.equaliser().cliName(), link.modulation().cliName(),
                 link.fading(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),
                 Long.toString(rules.minErrors()), Long.toString(rules.maxFrames()), Double.toString(rules.maxSeconds()),
                 Double.toString(rules.ferFloor()), Long.toString(seed), Integer.toString(batchFrames));
+    }
+
+    /**
+     * A digest of an LDPC code's parity-check matrix at the link's frame size (a user's file may
+     * change between an interrupted run and its resumption), empty for other codes.
+     */
+    private static String parityChecks(LinkSettings link) {
+        if (!(link.coding().scheme().code() instanceof LdpcCode ldpc)) {
+            return "";
+        }
+        ParityCheckMatrix h = ldpc.layout(link.coding().scheme().infoBits(link.frameBits())).matrix();
+        MessageDigest md;
+        try {
+            md = MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException(e);
+        }
+        ByteBuffer row = ByteBuffer.allocate(4 * (h.columns() + 2));
+        for (int i = 0; i < h.rows(); i++) {
+            row.clear();
+            row.putInt(i).putInt(h.rowDegree(i));
+            for (int p = 0; p < h.rowDegree(i); p++) {
+                row.putInt(h.rowEntry(i, p));
+            }
+            md.update(row.array(), 0, row.position());
+        }
+        return h.rows() + "x" + h.columns() + ":" + HexFormat.of().formatHex(md.digest());
     }
 
     /** A plan travels as its settings and is rebuilt from them where it arrives. */
@@ -354,13 +399,51 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     /** CRC, channel code, interleaver and LLRs from their settings. */
     private static FrameCoding frameCoding(SettingValues v) {
         Crc c = parse(CRC, () -> Crc.fromCliName(v.text(CRC)));
-        ChannelCode code = parse(FEC, () -> ChannelCodes.standard().find(v.text(FEC)));
+        ChannelCode code = channelCode(v);
         boolean coded = c != Crc.NONE || code != ChannelCodes.NONE;
         Interleaving il = v.isSet(INTERLEAVER) ? parse(INTERLEAVER, () -> Interleaving.fromCliName(v.text(INTERLEAVER)))
                 : coded ? Interleaving.RANDOM : Interleaving.NONE;
         LlrMethod method = parse(LLR, () -> LlrMethod.fromCliName(v.text(LLR)));
         int rows = v.integer(INTERLEAVER_ROWS);
         return parse(null, () -> new FrameCoding(new FecScheme(c, code), il, rows, method));
+    }
+
+    /**
+     * The channel code: by name ({@code --fec}) or an LDPC code of the user's ({@code --fec-file}),
+     * an LDPC code decoded as its settings say; those settings are refused with any other code.
+     */
+    private static ChannelCode channelCode(SettingValues v) {
+        ChannelCode named = parse(FEC, () -> ChannelCodes.standard().find(v.text(FEC)));
+        if (v.isSet(FEC_FILE) && named != ChannelCodes.NONE) {
+            throw new InvalidSettingException(FEC_FILE, v.text(FEC_FILE) + ": give either --fec or --fec-file, not both");
+        }
+        if (v.isSet(FEC_FILE)) {
+            Path file = Path.of(v.text(FEC_FILE)).toAbsolutePath().normalize();
+            ParityCheckMatrix h = parse(FEC_FILE, () -> LdpcCodeFile.read(file));
+            LdpcDecoding decoding = ldpcDecoding(v);
+            return parse(FEC_FILE, () -> LdpcCode.ofMatrix(file.getFileName().toString(), h, decoding));
+        }
+        if (named instanceof LdpcCode ldpc) {
+            return ldpc.withDecoding(ldpcDecoding(v));
+        }
+        for (Setting s : List.of(FEC_DECODER, FEC_ITERATIONS, FEC_CORRECTION, FEC_FULL_ITERATIONS)) {
+            boolean given = s.kind() == Setting.Kind.FLAG ? v.flag(s) : v.isSet(s);
+            if (given) {
+                throw new InvalidSettingException(s, "goes with an LDPC code (--fec-file, or an ldpc code of --fec); "
+                        + "--fec " + named.cliName() + " has no such decoder");
+            }
+        }
+        return named;
+    }
+
+    /** How an LDPC code is decoded: the algorithm, the most iterations, the correction and early stop. */
+    private static LdpcDecoding ldpcDecoding(SettingValues v) {
+        LdpcAlgorithm algorithm = v.isSet(FEC_DECODER) ? parse(FEC_DECODER,
+                () -> NamedChoice.find(LdpcAlgorithm.values(), v.text(FEC_DECODER), "LDPC decoder"))
+                : LdpcDecoding.DEFAULT.algorithm();
+        int iterations = v.isSet(FEC_ITERATIONS) ? v.integer(FEC_ITERATIONS) : LdpcDecoding.DEFAULT.iterations();
+        double correction = v.isSet(FEC_CORRECTION) ? v.number(FEC_CORRECTION) : algorithm.defaultCorrection();
+        return parse(null, () -> new LdpcDecoding(algorithm, iterations, !v.flag(FEC_FULL_ITERATIONS), correction));
     }
 
     /**

@@ -61,6 +61,18 @@ public final class RunSettings {
             "Replay channel matrices from a .npy or CSV trace (optionally gz, xz, bz2, zst), one per fading block.");
     public static final Setting FEC = new Setting("link", "fec", "--fec", TEXT, "NAME", "none",
             "Channel code: " + ChannelCodes.standard().choices() + ".");
+    public static final Setting FEC_FILE = new Setting("link", "fec_file", "--fec-file", PATH, "FILE", null,
+            "An LDPC code of your own: its parity-check matrix in the Matrix Market format (.mtx), instead of --fec.");
+    public static final Setting FEC_DECODER = new Setting("link", "fec_decoder", "--fec-decoder", TEXT, "NAME", null,
+            "LDPC decoder: min-sum (normalised), offset-min-sum, sum-product (default: min-sum).");
+    public static final Setting FEC_ITERATIONS = new Setting("link", "fec_iterations", "--fec-iterations", WHOLE, "N",
+            null, "Most LDPC decoder iterations per frame (default: 50).");
+    public static final Setting FEC_CORRECTION = new Setting("link", "fec_correction", "--fec-correction", NUMBER, "X",
+            null, "Normalisation factor of min-sum (0 < X <= 1) or offset of offset-min-sum (0 to 8, LLR units) "
+                    + "(default: 0.75, 0.5).");
+    public static final Setting FEC_FULL_ITERATIONS = new Setting("link", "fec_full_iterations",
+            "--fec-full-iterations", FLAG, null, "false",
+            "The LDPC decoder runs all --fec-iterations iterations instead of stopping once every check holds.");
     public static final Setting CRC = new Setting("link", "crc", "--crc", TEXT, "NAME", "none",
             "CRC appended to each frame: none, crc16, crc24, crc32.");
     public static final Setting INTERLEAVER = new Setting("link", "interleaver", "--interleaver", TEXT, "NAME", null,
@@ -121,7 +133,8 @@ public final class RunSettings {
 
     private static final List<Setting> ALL = List.of(
             CODE, CODE_FILE, DECODER, TX, RX, MODULATION, FADING, K_FACTOR, NAKAGAMI_M, TX_CORR, RX_CORR,
-            TX_CORR_MATRIX, RX_CORR_MATRIX, DOPPLER, CSI_ERROR, PILOTS, TRACE, FEC, CRC, INTERLEAVER,
+            TX_CORR_MATRIX, RX_CORR_MATRIX, DOPPLER, CSI_ERROR, PILOTS, TRACE, FEC, FEC_FILE, FEC_DECODER,
+            FEC_ITERATIONS, FEC_CORRECTION, FEC_FULL_ITERATIONS, CRC, INTERLEAVER,
             INTERLEAVER_ROWS, LLR, FRAME_BITS, COHERENCE,
             SNR_DB, MIN_ERRORS, MAX_FRAMES, MAX_SECONDS, FER_FLOOR, CONFIDENCE, SEED, THREADS,
             TARGET_FER, RATE, MI, OUTAGE_DRAWS,

@@ -11,6 +11,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.ldpc.LdpcCodeFile;
 import org.fadebench.coding.fec.ldpc.MatrixMarketReader;
 import org.fadebench.coding.fec.ldpc.ParityCheckMatrix;
@@ -49,6 +50,9 @@ class ChannelCodesCliTest {
         assertEquals(List.of("conv-r12", "1024", "2060", "0.497", "-", "-"), cells(row(o.out(), "conv-r12")));
         assertEquals(List.of("conv-small", "1024", "2052", "0.499", "-", "-"), cells(row(o.out(), "conv-small")));
         assertTrue(o.out().contains("conv-r23 ") && o.out().contains("conv-r34 "), o.out());
+        // the built-in LDPC family sends exactly k / R bits
+        assertEquals(List.of("ldpc-r12", "1024", "2048", "0.500"), cells(row(o.out(), "ldpc-r12")).subList(0, 4));
+        assertEquals(List.of("ldpc-r56", "1024", "1229", "0.833"), cells(row(o.out(), "ldpc-r56")).subList(0, 4));
         CliTest.Outcome one = CliTest.run("codes", "--fec", "CONV-R12", "--frame-bits", "100");
         assertEquals(0, one.code(), one.err());
         assertEquals(List.of("conv-r12", "100", "212", "0.472", "-", "-"), cells(row(one.out(), "conv-r12")));
@@ -199,11 +203,14 @@ class ChannelCodesCliTest {
         assertRefused("--frame-bits must be a whole number from 1 to 16777216, got 0", "codes", "--frame-bits", "0");
         assertRefused("--frame-bits must be a whole number from 1 to 16777216, got 16777217", "codes",
                 "--frame-bits", "16777217");
-        assertRefused("--fec: unknown channel code 'ldpc'; valid: none, conv-r12, conv-r23, conv-r34, conv-small",
+        assertRefused("--fec: unknown channel code 'ldpc'; valid: " + ChannelCodes.standard().choices(),
                 "codes", "--fec", "ldpc");
+        assertRefused("--frame-bits 10 with ldpc-r12: channel code ldpc-r12 takes 64 to 8224 information bits per "
+                + "frame, not 10", "codes", "--fec", "ldpc-r12", "--frame-bits", "10");
         assertRefused("give either --fec or --fec-file, not both", "codes", "--fec", "conv-r12", "--fec-file",
                 EXAMPLE.toString());
-        assertRefused("--export-h: conv-r12 is not an LDPC code and has no parity-check matrix; valid: --fec-file FILE",
+        assertRefused("--export-h: conv-r12 is not an LDPC code and has no parity-check matrix; valid: --fec-file FILE, "
+                + "or --fec with one of: ldpc-r12, ldpc-r23, ldpc-r34, ldpc-r56",
                 "codes", "--fec", "conv-r12");
         assertRefused("--export-h needs the code whose parity-check matrix to write: give --fec NAME or --fec-file FILE",
                 "codes");

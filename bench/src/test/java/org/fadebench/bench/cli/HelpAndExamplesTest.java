@@ -27,6 +27,7 @@ import org.fadebench.coding.fec.ChannelCode;
 import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.Interleaving;
+import org.fadebench.coding.fec.ldpc.LdpcAlgorithm;
 import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
@@ -144,17 +145,20 @@ class HelpAndExamplesTest {
         for (Setting key : RunSettings.all()) {
             assertTrue(line(lines, key.name()).isPresent(), "example scenario lacks " + key.path());
         }
-        Map<String, List<String>> choices = Map.of(
-                "code", names(StreamSupport.stream(SpaceTimeCodes.all().spliterator(), false).map(SpaceTimeCode::name)),
-                "fading", List.of(ChannelModels.STANDARD.choices().split(", ")),
-                "modulation", names(Stream.of(Modulation.values()).map(Modulation::cliName)),
-                "decoder", names(Stream.of(Equaliser.values()).map(Equaliser::cliName)),
-                "fec", names(ChannelCodes.standard().all().stream().map(ChannelCode::cliName)),
-                "crc", names(Stream.of(Crc.values()).map(Crc::cliName)),
-                "interleaver", names(Stream.of(Interleaving.values()).map(Interleaving::cliName)),
-                "llr", names(Stream.of(LlrMethod.values()).map(LlrMethod::cliName)),
-                "mi", names(Stream.of(MutualInformation.Kind.values()).map(MutualInformation.Kind::cliName)),
-                "plot_x", names(Stream.of(FerPlot.XQuantity.values()).map(FerPlot.XQuantity::cliName)));
+        Map<String, List<String>> choices = Map.ofEntries(
+                Map.entry("code", names(StreamSupport.stream(SpaceTimeCodes.all().spliterator(), false)
+                        .map(SpaceTimeCode::name))),
+                Map.entry("fading", List.of(ChannelModels.STANDARD.choices().split(", "))),
+                Map.entry("modulation", names(Stream.of(Modulation.values()).map(Modulation::cliName))),
+                Map.entry("decoder", names(Stream.of(Equaliser.values()).map(Equaliser::cliName))),
+                Map.entry("fec", names(ChannelCodes.standard().all().stream().map(ChannelCode::cliName))),
+                Map.entry("fec_decoder", names(Stream.of(LdpcAlgorithm.values()).map(LdpcAlgorithm::cliName))),
+                Map.entry("crc", names(Stream.of(Crc.values()).map(Crc::cliName))),
+                Map.entry("interleaver", names(Stream.of(Interleaving.values()).map(Interleaving::cliName))),
+                Map.entry("llr", names(Stream.of(LlrMethod.values()).map(LlrMethod::cliName))),
+                Map.entry("mi", names(Stream.of(MutualInformation.Kind.values())
+                        .map(MutualInformation.Kind::cliName))),
+                Map.entry("plot_x", names(Stream.of(FerPlot.XQuantity.values()).map(FerPlot.XQuantity::cliName))));
         choices.forEach((key, values) -> {
             String comment = line(lines, key).orElseThrow().replaceFirst("^[^#]*#", "");
             for (String v : values) {

@@ -23,7 +23,7 @@ class HostileInputCliTest {
     @TempDir
     Path tmp;
 
-    private static void assertRefused(CliTest.Outcome o, String expected, Path out) {
+    static void assertRefused(CliTest.Outcome o, String expected, Path out) {
         assertEquals(2, o.code(), o.err());
         String err = o.err().trim();
         assertFalse(err.contains("\n"), "one line: " + err);

@@ -6,6 +6,7 @@ import java.lang.management.ManagementFactory;
 import java.util.stream.Stream;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
+import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
@@ -42,7 +43,10 @@ class ChainMemoryTest {
             Arguments.of("conv-r12 crc16, 128 lanes", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2,
                     rayleigh, 8192, 0, Equaliser.MF, coded)),
             Arguments.of("conv-r12 crc16, long frames", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.NONE, 2, 1,
-                    rayleigh, 1 << 20, 0, Equaliser.MF, coded)));
+                    rayleigh, 1 << 20, 0, Equaliser.MF, coded)),
+            Arguments.of("ldpc-r12 crc16, 8192 bits", new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2,
+                    rayleigh, 8192, 0, Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC16,
+                            ChannelCodes.standard().find("ldpc-r12")), Interleaving.RANDOM, 0, LlrMethod.MAXLOG))));
     }
 
     @ParameterizedTest(name = "{0}")

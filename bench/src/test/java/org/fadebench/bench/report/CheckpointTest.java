@@ -44,6 +44,26 @@ class CheckpointTest {
         }
     }
 
+    /**
+     * A point of an iterating decoder also keeps its iterations' sum, written only there, so that
+     * the pinned file above (no decoder that iterates) and older checkpoints read as before.
+     */
+    @Test
+    void iterationsAreKeptWhereThereAreAny() throws Exception {
+        java.util.Map<String, Number> counts = new java.util.LinkedHashMap<>(STATES.get(0).counts().byName());
+        counts.put(FrameCounters.FEC_ITERATIONS, 4321L);
+        List<PointState> states = List.of(new PointState(3, FrameCounters.of(counts), false), STATES.get(1));
+        Checkpoint.write(dir, "fp", states);
+        String text = Files.readString(dir.resolve(Checkpoint.FILE_NAME));
+        assertEquals(1, text.split("\"fec_iterations_sum\" : 4321", -1).length - 1, text);
+        List<PointState> back = Checkpoint.read(dir, "fp", 2);
+        assertEquals(4321L, back.get(0).counts().fecIterations());
+        assertEquals(0L, back.get(1).counts().fecIterations());
+        Files.writeString(dir.resolve(Checkpoint.FILE_NAME), text.replace(": 4321", ": 4322"));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> Checkpoint.read(dir, "fp", 2));
+        assertTrue(e.getMessage().contains("its checksum does not match"), e.getMessage());
+    }
+
     @Test
     void aDamagedCountIsNamed() throws Exception {
         Checkpoint.write(dir, "fp", STATES);

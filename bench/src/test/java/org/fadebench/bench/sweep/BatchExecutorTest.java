@@ -15,14 +15,18 @@ import java.util.ArrayList;
 import java.util.List;
 import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.FrameCounters;
+import org.fadebench.bench.link.LdpcTestCode;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
 import org.fadebench.channel.Fading;
+import org.fadebench.coding.fec.ChannelCode;
+import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
 import org.fadebench.coding.fec.conv.PuncturedCode;
+import org.fadebench.coding.fec.ldpc.LdpcDecoding;
 import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
@@ -143,20 +147,31 @@ class BatchExecutorTest {
             ChannelSpec.of(Fading.RAYLEIGH).withTrace(trace),
         };
         for (ChannelSpec channel : channels) {
-            LinkSettings link = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2, channel, 256, 0,
-                    Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC24, PuncturedCode.CONV_R12), Interleaving.RANDOM, 0,
-                            LlrMethod.MAXLOG));
-            SweepPlan plan = new SweepPlan(link, new double[] {4, 8}, new StopRules(0, 500), 3, 50);
-            SweepPlan copy = (SweepPlan) roundTrip(plan);
-            assertEquals(plan.toString(), copy.toString());
-            for (BatchId id : new BatchId[] {new BatchId(0, 0), new BatchId(1, 1)}) {
-                BatchResult a = new BatchWorker(plan).compute(id);
-                BatchResult b = new BatchWorker(copy).compute(id);
-                assertEquals(a.counts().bitErrors(), b.counts().bitErrors(), link.describe());
-                assertEquals(a.counts().frameErrors(), b.counts().frameErrors(), link.describe());
-                assertEquals(a.counts().bitErrorsSquared(), b.counts().bitErrorsSquared(), 0.0, link.describe());
-                assertArrayEquals(a.channels(), b.channels(), link.describe());
-            }
+            assertPlanSurvivesSerialisation(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2, channel, 256,
+                    0, Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC24, PuncturedCode.CONV_R12),
+                            Interleaving.RANDOM, 0, LlrMethod.MAXLOG)));
+        }
+        ChannelCode[] ldpc = {LdpcTestCode.code(LdpcDecoding.DEFAULT), ChannelCodes.standard().find("ldpc-r23")};
+        for (ChannelCode code : ldpc) {
+            int payload = code.minInfoBits() == code.maxInfoBits() ? code.minInfoBits() - 24 : 256;
+            assertPlanSurvivesSerialisation(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2,
+                    ChannelSpec.of(Fading.RAYLEIGH), payload, 0, Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC24,
+                            code), Interleaving.RANDOM, 0, LlrMethod.MAXLOG)));
+        }
+    }
+
+    private static void assertPlanSurvivesSerialisation(LinkSettings link) {
+        SweepPlan plan = new SweepPlan(link, new double[] {4, 8}, new StopRules(0, 500), 3, 50);
+        SweepPlan copy = (SweepPlan) roundTrip(plan);
+        assertEquals(plan.toString(), copy.toString());
+        for (BatchId id : new BatchId[] {new BatchId(0, 0), new BatchId(1, 1)}) {
+            BatchResult a = new BatchWorker(plan).compute(id);
+            BatchResult b = new BatchWorker(copy).compute(id);
+            assertEquals(a.counts().bitErrors(), b.counts().bitErrors(), link.describe());
+            assertEquals(a.counts().frameErrors(), b.counts().frameErrors(), link.describe());
+            assertEquals(a.counts().bitErrorsSquared(), b.counts().bitErrorsSquared(), 0.0, link.describe());
+            assertEquals(a.counts().fecIterations(), b.counts().fecIterations(), link.describe());
+            assertArrayEquals(a.channels(), b.channels(), link.describe());
         }
     }
 

@@ -26,8 +26,30 @@ public interface ChannelCode extends NamedChoice, Serializable {
     @Override
     String cliName();
 
+    /**
+     * How a link's description names the code, with whatever else fixes its numbers (e.g. its
+     * decoder's settings); the name by default.
+     */
+    default String describe() {
+        return cliName();
+    }
+
     /** Nominal code rate, without termination (1 for no code). */
     double rate();
+
+    /**
+     * The fewest information bits (payload and CRC) per frame this code serves; 1 by default. A
+     * code serves every size from this to {@link #maxInfoBits} ({@link FecScheme#checkPayload} holds
+     * a link to that), and its other methods may refuse any size outside.
+     */
+    default int minInfoBits() {
+        return 1;
+    }
+
+    /** The most information bits (payload and CRC) per frame this code serves; no limit by default. */
+    default int maxInfoBits() {
+        return Integer.MAX_VALUE;
+    }
 
     /** Bits sent for {@code infoBits} information bits, termination and puncturing included. */
     int codedBits(int infoBits);

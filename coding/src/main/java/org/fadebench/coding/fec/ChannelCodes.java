@@ -3,11 +3,16 @@ package org.fadebench.coding.fec;
 import java.util.ArrayList;
 import java.util.List;
 import org.fadebench.coding.fec.conv.PuncturedCode;
+import org.fadebench.coding.fec.ldpc.LdpcCode;
+import org.fadebench.coding.fec.ldpc.LdpcDecoding;
+import org.fadebench.coding.fec.ldpc.LdpcFamily;
 import org.fadebench.modem.NamedChoice;
 
 /**
  * A registry of channel codes by command-line name. {@link #standard()} holds the codes the
- * command line offers: {@code none, conv-r12, conv-r23, conv-r34, conv-small}. A new code family
+ * command line offers: {@code none, conv-r12, conv-r23, conv-r34, conv-small} and the LDPC family
+ * {@code ldpc-r12, ldpc-r23, ldpc-r34, ldpc-r56} (decoded by default; a run sets the decoding with
+ * {@link LdpcCode#withDecoding}). A new code family
  * lives in its own package and adds its named codes to {@link #STANDARD}'s list; {@link #with}
  * makes a registry with one more code (tests use it). Immutable.
  */
@@ -17,7 +22,9 @@ public final class ChannelCodes {
     public static final ChannelCode NONE = new Uncoded();
 
     private static final ChannelCodes STANDARD = new ChannelCodes(List.of(NONE, PuncturedCode.CONV_R12,
-            PuncturedCode.CONV_R23, PuncturedCode.CONV_R34, PuncturedCode.CONV_SMALL));
+            PuncturedCode.CONV_R23, PuncturedCode.CONV_R34, PuncturedCode.CONV_SMALL,
+            LdpcCode.of(LdpcFamily.R12, LdpcDecoding.DEFAULT), LdpcCode.of(LdpcFamily.R23, LdpcDecoding.DEFAULT),
+            LdpcCode.of(LdpcFamily.R34, LdpcDecoding.DEFAULT), LdpcCode.of(LdpcFamily.R56, LdpcDecoding.DEFAULT)));
 
     private final List<ChannelCode> codes;
 

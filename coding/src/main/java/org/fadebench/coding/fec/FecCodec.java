@@ -112,6 +112,11 @@ public final class FecCodec {
         return scheme.crc().check(info, 0, infoBits);
     }
 
+    /** The decoder iterations of a lane of the last {@link #decodeReceived}; 0 for a code that does not iterate. */
+    public int iterations(int lane) {
+        return coder.iterations(lane);
+    }
+
     /**
      * Decodes one frame's {@link #codedBits()} LLRs from {@code llr[off ..]}, writing the decided
      * payload to {@code payload[outOff ..]}: {@link #receive} into lane 0, {@link #decodeReceived},

@@ -26,6 +26,38 @@ public record FecScheme(Crc crc, ChannelCode code) implements Serializable {
         return payloadBits + crc.bits();
     }
 
+    /**
+     * Checks that the channel code serves a payload of {@code payloadBits} with this CRC (see
+     * {@link ChannelCode#minInfoBits}).
+     *
+     * @throws IllegalArgumentException "--frame-bits P: ...; valid: ..." naming the payloads it serves
+     */
+    public void checkPayload(int payloadBits) {
+        long info = (long) payloadBits + crc.bits();
+        if (info >= code.minInfoBits() && info <= code.maxInfoBits()) {
+            return;
+        }
+        long low = Math.max(1, (long) code.minInfoBits() - crc.bits());
+        long high = (long) code.maxInfoBits() - crc.bits();
+        String withCrc = crc.bits() == 0 ? "" : " with " + crc.cliName();
+        String sizes = code.minInfoBits() == code.maxInfoBits() ? "exactly " + code.minInfoBits()
+                : code.minInfoBits() + " to " + code.maxInfoBits();
+        String valid = high < low ? "no payload" + withCrc + " fits; use a shorter --crc"
+                : "--frame-bits " + (low == high ? Long.toString(low) : low + " to " + high) + withCrc;
+        throw new IllegalArgumentException("--frame-bits " + payloadBits + withCrc + ": channel code " + code.cliName()
+                + " carries " + sizes + " information bits per frame (payload and CRC); valid: " + valid);
+    }
+
+    /**
+     * The payload nearest to {@code wanted} that the channel code serves with this CRC (at least 1):
+     * the frame length of a link that sets none.
+     */
+    public int payloadNear(int wanted) {
+        long low = Math.max(1, (long) code.minInfoBits() - crc.bits());
+        long high = Math.max(low, (long) code.maxInfoBits() - crc.bits());
+        return (int) Math.max(low, Math.min(high, wanted));
+    }
+
     /** Bits sent for a payload of {@code payloadBits}: CRC, tail and puncturing included. */
     public int codedBits(int payloadBits) {
         return code.codedBits(infoBits(payloadBits));
@@ -68,6 +100,6 @@ public record FecScheme(Crc crc, ChannelCode code) implements Serializable {
 
     @Override
     public String toString() {
-        return "crc " + crc.cliName() + ", code " + code.cliName();
+        return "crc " + crc.cliName() + ", code " + code.describe();
     }
 }

@@ -35,4 +35,12 @@ public interface LaneCoder {
      * {@code info[off ..]}.
      */
     void decided(int lane, byte[] info, int off);
+
+    /**
+     * The iterations the decoder took on a lane in the last {@link #decode} (at least 1 for a
+     * decoder that iterates); 0, the default, for a decoder that does not iterate.
+     */
+    default int iterations(int lane) {
+        return 0;
+    }
 }

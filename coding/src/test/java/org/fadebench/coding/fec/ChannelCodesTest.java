@@ -13,13 +13,17 @@ import org.junit.jupiter.api.Test;
 
 class ChannelCodesTest {
 
+    private static final String STANDARD_NAMES =
+            "none, conv-r12, conv-r23, conv-r34, conv-small, ldpc-r12, ldpc-r23, ldpc-r34, ldpc-r56";
+
     @Test
     void namesOfTheStandardCodes() {
         ChannelCodes codes = ChannelCodes.standard();
-        assertEquals("none, conv-r12, conv-r23, conv-r34, conv-small", codes.choices());
+        assertEquals(STANDARD_NAMES, codes.choices());
         assertSame(PuncturedCode.CONV_R34, codes.find("Conv-R34"));
         assertSame(ChannelCodes.NONE, codes.find(" none "));
-        assertEquals("unknown channel code 'turbo'; valid: none, conv-r12, conv-r23, conv-r34, conv-small",
+        assertEquals("ldpc-r23, min-sum decoder (factor 0.75), at most 50 iterations", codes.find("ldpc-r23").describe());
+        assertEquals("unknown channel code 'turbo'; valid: " + STANDARD_NAMES,
                 assertThrows(IllegalArgumentException.class, () -> codes.find("turbo")).getMessage());
     }
 
@@ -28,7 +32,7 @@ class ChannelCodesTest {
         ChannelCode renamed = new PuncturedCode("conv-other", PuncturedCode.CONV_R12.puncturer());
         ChannelCodes more = ChannelCodes.standard().with(renamed);
         assertSame(renamed, more.find("conv-other"));
-        assertEquals("none, conv-r12, conv-r23, conv-r34, conv-small", ChannelCodes.standard().choices());
+        assertEquals(STANDARD_NAMES, ChannelCodes.standard().choices());
         assertEquals("channel code 'conv-r12' is already registered",
                 assertThrows(IllegalArgumentException.class,
                         () -> more.with(new PuncturedCode("conv-r12", PuncturedCode.CONV_R23.puncturer())))
@@ -43,6 +47,10 @@ class ChannelCodesTest {
         assertEquals("conv-r34", back.cliName());
         assertEquals(PuncturedCode.CONV_R34.puncturer().toString(), back.puncturer().toString());
         assertEquals(PuncturedCode.CONV_R34.codedBits(97), back.codedBits(97));
+        ChannelCode ldpc = ChannelCodes.standard().find("ldpc-r34");
+        ChannelCode ldpcBack = (ChannelCode) roundTrip(ldpc);
+        assertEquals(ldpc.describe(), ldpcBack.describe());
+        assertEquals(ldpc.codedBits(1000), ldpcBack.codedBits(1000));
     }
 
     private static Object roundTrip(Object o) throws Exception {

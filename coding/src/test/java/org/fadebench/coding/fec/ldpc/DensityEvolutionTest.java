@@ -134,7 +134,7 @@ class DensityEvolutionTest {
      * BPSK coded-modulation information of unit energy on complex noise of variance 1/snr has the
      * real-axis noise variance 1/(2 snr) = σ².
      */
-    private static double capacityLimitSigma(double rate) {
+    static double capacityLimitSigma(double rate) {
         MutualInformation bpsk = MutualInformation.of(Modulation.BPSK, MutualInformation.Kind.CODED_MODULATION);
         return new BrentSolver(1e-12).solve(200,
                 sigma -> bpsk.exactBits(1.0 / (2.0 * sigma * sigma)) - rate, 0.3, 3.0);
