@@ -18,7 +18,7 @@ import org.openjdk.jmh.annotations.State;
  * One idea: layered LDPC decoding of a rate-1/2 code of n = 2048 (k = 1024), exactly
  * {@value #ITERATIONS} iterations with early stop off, from BPSK LLRs at Eb/N0 = 2 dB (a different
  * noisy codeword per lane). {@code minSumLanes} decodes {@value #LANES} frames as lanes on the
- * fixed-point decoder (normalised min-sum, α = 0.75), {@code sumProductOneFrame} one frame on the
+ * fixed-point decoder (normalised min-sum, α = 13/16), {@code sumProductOneFrame} one frame on the
  * floating-point reference (sum-product), for contrast. Score: information bits per second on one
  * thread, loading the LLRs included. Run with {@code -prof gc} to see bytes allocated (expected: 0).
  */
@@ -87,7 +87,7 @@ public class LdpcDecoderBenchmark extends ThroughputBenchmark {
     public static class MinSumLanes extends Batch {
         @Setup
         public void setUp() {
-            set(new LdpcDecoding(LdpcAlgorithm.MIN_SUM, ITERATIONS, false, 0.75), LANES);
+            set(new LdpcDecoding(LdpcAlgorithm.MIN_SUM, ITERATIONS, false, 0.8125), LANES);
         }
     }
 

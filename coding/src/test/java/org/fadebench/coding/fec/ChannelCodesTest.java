@@ -22,7 +22,7 @@ class ChannelCodesTest {
         assertEquals(STANDARD_NAMES, codes.choices());
         assertSame(PuncturedCode.CONV_R34, codes.find("Conv-R34"));
         assertSame(ChannelCodes.NONE, codes.find(" none "));
-        assertEquals("ldpc-r23, min-sum decoder (factor 0.75), at most 50 iterations", codes.find("ldpc-r23").describe());
+        assertEquals("ldpc-r23, min-sum decoder (factor 0.8125), at most 50 iterations", codes.find("ldpc-r23").describe());
         assertEquals("unknown channel code 'turbo'; valid: " + STANDARD_NAMES,
                 assertThrows(IllegalArgumentException.class, () -> codes.find("turbo")).getMessage());
     }

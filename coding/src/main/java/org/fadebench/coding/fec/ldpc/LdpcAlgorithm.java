@@ -13,7 +13,7 @@ public enum LdpcAlgorithm implements NamedChoice {
      * Fossorier, "Near optimum universal belief propagation based decoding of low-density parity
      * check codes", IEEE Trans. Commun. 50(3), 2002).
      */
-    MIN_SUM("min-sum", 0.75),
+    MIN_SUM("min-sum", 0.8125),
     /** Offset min-sum: the min-sum magnitude less an offset β ≥ 0 (LLR units), floored at 0 (Chen and Fossorier 2002). */
     OFFSET_MIN_SUM("offset-min-sum", 0.5),
     /** Sum-product (belief propagation) in floating point: the reference, with no correction. */

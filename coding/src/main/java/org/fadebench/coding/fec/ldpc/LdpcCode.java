@@ -99,7 +99,7 @@ public final class LdpcCode implements ChannelCode {
     }
 
     /**
-     * E.g. "ldpc-r12, min-sum decoder (factor 0.75), at most 50 iterations", with ", no early stop"
+     * E.g. "ldpc-r12, min-sum decoder (factor 0.8125), at most 50 iterations", with ", no early stop"
      * when that is off.
      */
     @Override

@@ -14,7 +14,7 @@ public record LdpcDecoding(LdpcAlgorithm algorithm, int iterations, boolean earl
     /** The most iterations accepted. */
     public static final int MAX_ITERATIONS = 1000;
 
-    /** Normalised min-sum, α = 0.75, at most 50 iterations, stopping early. */
+    /** Normalised min-sum, α = 13/16, at most 50 iterations, stopping early. */
     public static final LdpcDecoding DEFAULT = of(LdpcAlgorithm.MIN_SUM, 50);
 
     /**

@@ -182,7 +182,7 @@ class LdpcCodeTest {
 
     @Test
     void describesItsDecoding() {
-        assertEquals("LDPC code of qc960 (n 960, k 480), min-sum decoder (factor 0.75), at most 50 iterations",
+        assertEquals("LDPC code of qc960 (n 960, k 480), min-sum decoder (factor 0.8125), at most 50 iterations",
                 CODE.describe());
         assertEquals("LDPC code of qc960 (n 960, k 480), offset-min-sum decoder (offset 0.5), at most 50 iterations",
                 CODE.withDecoding(LdpcDecoding.of(LdpcAlgorithm.OFFSET_MIN_SUM, 50)).describe());
