@@ -1,9 +1,12 @@
 package org.fadebench.coding.fec.ldpc;
 
+import java.util.Optional;
+
 /**
- * Makes the LDPC decoders: min-sum and offset min-sum on the fixed-point lane decoder
- * ({@link FixedPointDecoder}), sum-product always in floating point ({@link FloatingPointDecoder},
- * which is also the reference for the other two).
+ * Makes the LDPC decoders: min-sum and offset min-sum on the fixed-point lane decoders, by block
+ * rows ({@link QcDecoder}) for a layout that comes from a lifted base matrix and by rows
+ * ({@link FixedPointDecoder}) for any other H (the two give the same results); sum-product always
+ * in floating point ({@link FloatingPointDecoder}, which is also the reference for the other two).
  */
 public final class LdpcDecoders {
 
@@ -11,7 +14,34 @@ public final class LdpcDecoders {
     }
 
     /**
-     * A decoder of H by the given settings for up to {@code lanes} frames at once.
+     * A decoder of the layout's H by the given settings for up to {@code lanes} frames at once: the
+     * block-row kernel if the layout is quasi-cyclic and the algorithm a min-sum, else as
+     * {@link #create(ParityCheckMatrix, LdpcDecoding, int)}.
+     *
+     * @throws IllegalArgumentException "L lanes; need at least 1" if {@code lanes} is below 1
+     */
+    public static LdpcDecoder create(CodeLayout layout, LdpcDecoding decoding, int lanes) {
+        Optional<QcStructure> qc = layout.quasiCyclic();
+        return qc.isPresent() && decoding.algorithm() != LdpcAlgorithm.SUM_PRODUCT
+                ? new QcDecoder(qc.get(), decoding, lanes)
+                : create(layout.matrix(), decoding, lanes);
+    }
+
+    /**
+     * Bytes the buffers of {@link #create(CodeLayout, LdpcDecoding, int)}'s decoder take.
+     *
+     * @throws IllegalArgumentException "L lanes; need at least 1" if {@code lanes} is below 1
+     */
+    public static long bytes(CodeLayout layout, LdpcDecoding decoding, int lanes) {
+        LayeredDecoder.checkLanes(lanes);
+        Optional<QcStructure> qc = layout.quasiCyclic();
+        return qc.isPresent() && decoding.algorithm() != LdpcAlgorithm.SUM_PRODUCT
+                ? QcDecoder.bytes(qc.get(), lanes)
+                : bytes(layout.matrix(), decoding, lanes);
+    }
+
+    /**
+     * A decoder of H, row by row, by the given settings for up to {@code lanes} frames at once.
      *
      * @throws IllegalArgumentException "L lanes; need at least 1" if {@code lanes} is below 1
      */
@@ -22,7 +52,7 @@ public final class LdpcDecoders {
     }
 
     /**
-     * Bytes the buffers of {@link #create}'s decoder take (its arrays with their headers), for a
+     * Bytes the buffers of {@link #create(ParityCheckMatrix, LdpcDecoding, int)}'s decoder take (its arrays with their headers), for a
      * memory check before a run.
      *
      * @throws IllegalArgumentException "L lanes; need at least 1" if {@code lanes} is below 1

@@ -1,0 +1,115 @@
+package org.fadebench.coding.fec.ldpc;
+
+/**
+ * The loops of the fixed-point min-sum check update, shared by both kernels ({@link FixedPointDecoder}
+ * on rows over lanes, {@link QcDecoder} on the Z rows of a block row over lanes): each runs over
+ * elements 0 to {@code len} − 1 of its arrays, branch-free (sign masks from arithmetic shifts), a
+ * body short enough for C2's loop vectoriser (Java 17 vectorises only short bodies, and no loop
+ * whose arrays are indexed from different offsets).
+ * Element x of the per-check rows ({@code sign}, {@code least}, {@code second}, {@code leastOut},
+ * {@code gap}) belongs to the check whose message is element x of the edge's row. Numbers are in
+ * the steps of {@link FixedPointDecoder}.
+ */
+final class MinSumLoops {
+
+    /** Above any |Q|: the starting value of the minima. */
+    static final int ABOVE = 1 << 30;
+
+    private MinSumLoops() {
+    }
+
+    /** r = Q = p − r, and the sign parity updated. */
+    static void subtract(int[] p, int[] r, int[] sign, int len) {
+        for (int x = 0; x < len; x++) {
+            int q = p[x] - r[x];
+            r[x] = q;
+            sign[x] ^= q;
+        }
+    }
+
+    /** The least and second least |Q| updated by the Q in {@code q}. */
+    static void minima(int[] q, int[] least, int[] second, int len) {
+        for (int x = 0; x < len; x++) {
+            int v = q[x];
+            int s = v >> 31;
+            int a = (v ^ s) - s;
+            int low = least[x];
+            int d = a - low;
+            int cut = d & (d >> 31);
+            least[x] = low + cut;
+            int high = a - cut - second[x];
+            second[x] += high & (high >> 31);
+        }
+    }
+
+    /**
+     * The minima corrected, m ↦ ⌊min(m, MESSAGE_LIMIT)·factor/16⌋, into {@code leastOut}, and the
+     * corrected second less the corrected least into {@code gap}.
+     */
+    static void scale(int[] least, int[] second, int[] leastOut, int[] gap, int factor, int len) {
+        final int limit = FixedPointDecoder.MESSAGE_LIMIT;
+        for (int x = 0; x < len; x++) {
+            int low = ((least[x] - limit >> 31 & least[x] - limit) + limit) * factor >> 4;
+            int high = ((second[x] - limit >> 31 & second[x] - limit) + limit) * factor >> 4;
+            leastOut[x] = low;
+            gap[x] = high - low;
+        }
+    }
+
+    /**
+     * The minima corrected, m ↦ max(min(m, MESSAGE_LIMIT) − offset, 0), into {@code leastOut}, and
+     * the corrected second less the corrected least into {@code gap}.
+     */
+    static void lessOffset(int[] least, int[] second, int[] leastOut, int[] gap, int offset, int len) {
+        final int limit = FixedPointDecoder.MESSAGE_LIMIT;
+        final int b = limit - offset;
+        for (int x = 0; x < len; x++) {
+            int low = (least[x] - limit >> 31 & least[x] - limit) + b;
+            int high = (second[x] - limit >> 31 & second[x] - limit) + b;
+            low &= ~(low >> 31);
+            high &= ~(high >> 31);
+            leastOut[x] = low;
+            gap[x] = high - low;
+        }
+    }
+
+    /**
+     * Edge of a check with its Q in {@code r}: R = ±(the corrected least |Q| of the others) into
+     * {@code r}, P = Q + R into {@code p}. An edge whose |Q| equals the least takes the second
+     * least (on a tie the same value), so the edge of the least need not be kept.
+     */
+    static void scatter(int[] p, int[] r, int[] least, int[] leastOut, int[] gap, int[] sign,
+            int len) {
+        for (int x = 0; x < len; x++) {
+            int q = r[x];
+            int s0 = q >> 31;
+            int own = (((q ^ s0) - s0 ^ least[x]) - 1) >> 31;
+            int mag = leastOut[x] + (gap[x] & own);
+            int s = (sign[x] ^ q) >> 31;
+            int v = (mag ^ s) - s;
+            r[x] = v;
+            p[x] = q + v;
+        }
+    }
+
+    /** acc ^= p, element by element. */
+    static void exclusiveOr(int[] acc, int[] p, int len) {
+        for (int x = 0; x < len; x++) {
+            acc[x] ^= p[x];
+        }
+    }
+
+    /** acc |= s, element by element. */
+    static void or(int[] acc, int[] s, int len) {
+        for (int x = 0; x < len; x++) {
+            acc[x] |= s[x];
+        }
+    }
+
+    /** to = from where mask is −1, unchanged where 0. */
+    static void keep(int[] from, int[] to, int[] mask, int len) {
+        for (int x = 0; x < len; x++) {
+            to[x] ^= (to[x] ^ from[x]) & mask[x];
+        }
+    }
+}
