@@ -183,16 +183,15 @@ final class FixedPointDecoder extends RowDecoder {
         Arrays.fill(second, 0, n, MinSumLoops.ABOVE);
         Arrays.fill(parity, 0, n, 0);
         for (int e = from; e < to; e++) {
-            MinSumLoops.subtract(posterior[edgeColumn[e]], check[e], parity, n);
-            MinSumLoops.minima(check[e], least, second, n);
+            MinSumLoops.subtractAndMinima(posterior[edgeColumn[e]], check[e], parity, least, second, n);
         }
         if (normalised) {
-            MinSumLoops.scale(least, second, leastOut, gap, factor, n);
+            MinSumLoops.scale(least, second, parity, leastOut, gap, factor, n);
         } else {
-            MinSumLoops.lessOffset(least, second, leastOut, gap, offset, n);
+            MinSumLoops.lessOffset(least, second, parity, leastOut, gap, offset, n);
         }
         for (int e = from; e < to; e++) {
-            MinSumLoops.scatter(posterior[edgeColumn[e]], check[e], least, leastOut, gap, parity, n);
+            MinSumLoops.scatter(posterior[edgeColumn[e]], check[e], least, leastOut, gap, n);
         }
     }
 }

@@ -18,21 +18,16 @@ final class MinSumLoops {
     private MinSumLoops() {
     }
 
-    /** r = Q = p − r, and the sign parity updated. */
-    static void subtract(int[] p, int[] r, int[] sign, int len) {
+    /**
+     * r = Q = p − r, and the sign parity, the least and the second least |Q| updated (one loop:
+     * Math.abs on ints vectorises, Math.min and Math.max do not, so the minima use sign masks).
+     */
+    static void subtractAndMinima(int[] p, int[] r, int[] sign, int[] least, int[] second, int len) {
         for (int x = 0; x < len; x++) {
             int q = p[x] - r[x];
             r[x] = q;
             sign[x] ^= q;
-        }
-    }
-
-    /** The least and second least |Q| updated by the Q in {@code q}. */
-    static void minima(int[] q, int[] least, int[] second, int len) {
-        for (int x = 0; x < len; x++) {
-            int v = q[x];
-            int s = v >> 31;
-            int a = (v ^ s) - s;
+            int a = Math.abs(q);
             int low = least[x];
             int d = a - low;
             int cut = d & (d >> 31);
@@ -43,24 +38,27 @@ final class MinSumLoops {
     }
 
     /**
-     * The minima corrected, m ↦ ⌊min(m, MESSAGE_LIMIT)·factor/16⌋, into {@code leastOut}, and the
-     * corrected second less the corrected least into {@code gap}.
+     * The minima corrected, m ↦ ⌊min(m, MESSAGE_LIMIT)·factor/16⌋: the corrected least into
+     * {@code leastOut} and the corrected second less it into {@code gap}, both negated where the
+     * sign parity is negative.
      */
-    static void scale(int[] least, int[] second, int[] leastOut, int[] gap, int factor, int len) {
+    static void scale(int[] least, int[] second, int[] sign, int[] leastOut, int[] gap, int factor, int len) {
         final int limit = FixedPointDecoder.MESSAGE_LIMIT;
         for (int x = 0; x < len; x++) {
             int low = ((least[x] - limit >> 31 & least[x] - limit) + limit) * factor >> 4;
             int high = ((second[x] - limit >> 31 & second[x] - limit) + limit) * factor >> 4;
-            leastOut[x] = low;
-            gap[x] = high - low;
+            int s = sign[x] >> 31;
+            leastOut[x] = (low ^ s) - s;
+            gap[x] = (high - low ^ s) - s;
         }
     }
 
     /**
-     * The minima corrected, m ↦ max(min(m, MESSAGE_LIMIT) − offset, 0), into {@code leastOut}, and
-     * the corrected second less the corrected least into {@code gap}.
+     * The minima corrected, m ↦ max(min(m, MESSAGE_LIMIT) − offset, 0): the corrected least into
+     * {@code leastOut} and the corrected second less it into {@code gap}, both negated where the
+     * sign parity is negative.
      */
-    static void lessOffset(int[] least, int[] second, int[] leastOut, int[] gap, int offset, int len) {
+    static void lessOffset(int[] least, int[] second, int[] sign, int[] leastOut, int[] gap, int offset, int len) {
         final int limit = FixedPointDecoder.MESSAGE_LIMIT;
         final int b = limit - offset;
         for (int x = 0; x < len; x++) {
@@ -68,25 +66,24 @@ final class MinSumLoops {
             int high = (second[x] - limit >> 31 & second[x] - limit) + b;
             low &= ~(low >> 31);
             high &= ~(high >> 31);
-            leastOut[x] = low;
-            gap[x] = high - low;
+            int s = sign[x] >> 31;
+            leastOut[x] = (low ^ s) - s;
+            gap[x] = (high - low ^ s) - s;
         }
     }
 
     /**
      * Edge of a check with its Q in {@code r}: R = ±(the corrected least |Q| of the others) into
-     * {@code r}, P = Q + R into {@code p}. An edge whose |Q| equals the least takes the second
-     * least (on a tie the same value), so the edge of the least need not be kept.
+     * {@code r}, P = Q + R into {@code p}; the sign is the parity's (already on {@code leastOut}
+     * and {@code gap}) times Q's. An edge whose |Q| equals the least takes the second least (on a
+     * tie the same value), so the edge of the least need not be kept.
      */
-    static void scatter(int[] p, int[] r, int[] least, int[] leastOut, int[] gap, int[] sign,
-            int len) {
+    static void scatter(int[] p, int[] r, int[] least, int[] leastOut, int[] gap, int len) {
         for (int x = 0; x < len; x++) {
             int q = r[x];
-            int s0 = q >> 31;
-            int own = (((q ^ s0) - s0 ^ least[x]) - 1) >> 31;
-            int mag = leastOut[x] + (gap[x] & own);
-            int s = (sign[x] ^ q) >> 31;
-            int v = (mag ^ s) - s;
+            int own = ((Math.abs(q) ^ least[x]) - 1) >> 31;
+            int s = q >> 31;
+            int v = (leastOut[x] + (gap[x] & own) ^ s) - s;
             r[x] = v;
             p[x] = q + v;
         }

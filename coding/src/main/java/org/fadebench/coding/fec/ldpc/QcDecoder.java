@@ -27,7 +27,7 @@ import org.fadebench.coding.fec.Lanes;
 final class QcDecoder extends LayeredDecoder {
 
     /** Lanes decoded together (one 512-bit vector of ints per row of a block). */
-    static final int WIDTH = 16;
+    static final int WIDTH = Integer.getInteger("qcw", 16);
     /** The posterior of a shortened column. */
     static final int SHORTENED = 1 << 29;
 
@@ -212,16 +212,15 @@ final class QcDecoder extends LayeredDecoder {
         Arrays.fill(parity, 0);
         for (int b = blockStart[i]; b < blockStart[i + 1]; b++) {
             rotateIn(b);
-            MinSumLoops.subtract(rotated, check[b], parity, slice);
-            MinSumLoops.minima(check[b], least, second, slice);
+            MinSumLoops.subtractAndMinima(rotated, check[b], parity, least, second, slice);
         }
         if (normalised) {
-            MinSumLoops.scale(least, second, leastOut, gap, factor, slice);
+            MinSumLoops.scale(least, second, parity, leastOut, gap, factor, slice);
         } else {
-            MinSumLoops.lessOffset(least, second, leastOut, gap, offset, slice);
+            MinSumLoops.lessOffset(least, second, parity, leastOut, gap, offset, slice);
         }
         for (int b = blockStart[i]; b < blockStart[i + 1]; b++) {
-            MinSumLoops.scatter(rotated, check[b], least, leastOut, gap, parity, slice);
+            MinSumLoops.scatter(rotated, check[b], least, leastOut, gap, slice);
             rotateOut(b);
         }
     }
