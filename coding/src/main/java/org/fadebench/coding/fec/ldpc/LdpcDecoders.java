@@ -1,7 +1,5 @@
 package org.fadebench.coding.fec.ldpc;
 
-import java.util.Optional;
-
 /**
  * Makes the LDPC decoders: min-sum and offset min-sum on the fixed-point lane decoders, by block
  * rows ({@link QcDecoder}) for a layout that comes from a lifted base matrix and by rows
@@ -21,10 +19,8 @@ public final class LdpcDecoders {
      * @throws IllegalArgumentException "L lanes; need at least 1" if {@code lanes} is below 1
      */
     public static LdpcDecoder create(CodeLayout layout, LdpcDecoding decoding, int lanes) {
-        Optional<QcStructure> qc = layout.quasiCyclic();
-        return qc.isPresent() && decoding.algorithm() != LdpcAlgorithm.SUM_PRODUCT
-                ? new QcDecoder(qc.get(), decoding, lanes)
-                : create(layout.matrix(), decoding, lanes);
+        QcStructure qc = blockRows(layout, decoding);
+        return qc != null ? new QcDecoder(qc, decoding, lanes) : create(layout.matrix(), decoding, lanes);
     }
 
     /**
@@ -34,10 +30,13 @@ public final class LdpcDecoders {
      */
     public static long bytes(CodeLayout layout, LdpcDecoding decoding, int lanes) {
         LayeredDecoder.checkLanes(lanes);
-        Optional<QcStructure> qc = layout.quasiCyclic();
-        return qc.isPresent() && decoding.algorithm() != LdpcAlgorithm.SUM_PRODUCT
-                ? QcDecoder.bytes(qc.get(), lanes)
-                : bytes(layout.matrix(), decoding, lanes);
+        QcStructure qc = blockRows(layout, decoding);
+        return qc != null ? QcDecoder.bytes(qc, lanes) : bytes(layout.matrix(), decoding, lanes);
+    }
+
+    /** The layout's QC structure if the block-row kernel decodes it, else null. */
+    private static QcStructure blockRows(CodeLayout layout, LdpcDecoding decoding) {
+        return decoding.algorithm() == LdpcAlgorithm.SUM_PRODUCT ? null : layout.quasiCyclic().orElse(null);
     }
 
     /**

@@ -27,7 +27,7 @@ import org.fadebench.coding.fec.Lanes;
 final class QcDecoder extends LayeredDecoder {
 
     /** Lanes decoded together (one 512-bit vector of ints per row of a block). */
-    static final int WIDTH = Integer.getInteger("qcw", 16);
+    static final int WIDTH = 16;
     /** The posterior of a shortened column. */
     static final int SHORTENED = 1 << 29;
 
