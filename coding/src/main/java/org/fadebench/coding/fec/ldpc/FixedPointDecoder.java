@@ -19,13 +19,14 @@ import org.fadebench.coding.fec.Lanes;
  *
  * <p>Layout: every quantity is a row over lanes, lane index innermost ({@code check[e][lane]} per
  * edge e in row order, {@code posterior[j][lane]} per column j), and the check update is a few
- * short loops over lanes with branch-free selects (sign masks from arithmetic shifts), the form the
- * JIT's loop vectoriser takes (see the Viterbi decoder; C2 in Java 17 vectorises only short loop
- * bodies, and no 16-bit min, so the messages are ints and each step its own loop). Per check row
- * and edge: Q = P − R into the message row with the sign parity, then the least and second least
- * |Q| per lane; one loop corrects the two minima; then per edge R = ±(the corrected least of the
- * others) and P = Q + R. The edge of the least is not kept: an edge whose |Q| equals the least takes
- * the second least, which on a tie is the same value.
+ * short loops over lanes with branch-free selects ({@link MinSumLoops}, shared with the block-row
+ * kernel {@link QcDecoder}; C2 in Java 17 vectorises only short loop bodies, and no 16-bit min, so
+ * the messages are ints). Per check row and edge: Q = P − R into the message row with the sign
+ * parity and the least and second least |Q| per lane; one loop corrects the two minima (the
+ * parity's sign put on them); then per edge R = ±(the corrected least of the others) and P = Q + R.
+ * The edge of the least is not kept: an edge whose |Q| equals the least takes the second least,
+ * which on a tie is the same value. This kernel decodes any H; for a quasi-cyclic code
+ * {@link QcDecoder} gives the same numbers faster.
  *
  * <p>Early stop: after each iteration every lane's syndrome is computed from the signs of P (one
  * exclusive-or per edge and lane). A lane whose checks all hold is done: its hard decisions are
