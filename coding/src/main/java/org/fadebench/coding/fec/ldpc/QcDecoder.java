@@ -10,10 +10,13 @@ import org.fadebench.coding.fec.Lanes;
  *
  * <p>In a block row every column is touched at most once (each circulant is a permutation), so its
  * Z rows are independent and updating them together gives exactly the row-by-row layered result.
- * Layout: posteriors as [base column][z][lane], the messages of a block edge as [z][lane], flat.
- * Row z of block (i, j) with shift s reads column (z + s) mod Z of block j, so each step of the
- * check update ({@link MinSumLoops}) is two loops over contiguous ints, (Z − s)·{@value #WIDTH} and
- * s·{@value #WIDTH} long, instead of one short loop per row and edge.
+ * Layout: posteriors as [base column][z][lane] (one flat row), the messages of a block edge as
+ * [z][lane] (a row per block edge), and the per-check quantities as [z][lane]. Row z of block
+ * (i, j) with shift s reads column (z + s) mod Z of block j: the block's posteriors are copied into
+ * a scratch row turned by s (two {@code System.arraycopy}) and back after the update, so each step
+ * of the check update ({@link MinSumLoops}) is one loop over Z·{@value #WIDTH} ints with every
+ * array indexed from 0 (C2 in Java 17 does not vectorise a loop whose arrays are indexed from
+ * different offsets), instead of one short loop per row and edge.
  *
  * <p>Lanes: up to {@code lanes} frames are loaded; they are decoded in groups of {@value #WIDTH},
  * one group after another through one working set (posteriors and messages), so the lane count
