@@ -1,6 +1,7 @@
 package org.fadebench.bench.link;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -53,6 +54,26 @@ class CodedLinkTest {
         // 999 + 6 = 1005 bits at rate 3/4 -> 1340 coded bits -> 670 symbols, already whole blocks
         assertEquals(1340, r34.codedBitsPerFrame());
         assertEquals(670, r34.symbolsPerFrame());
+    }
+
+    /** The link's description names the CRC only when the frame carries one, and the code only when there is one. */
+    @Test
+    void descriptionNamesOnlyTheCrcAndCodeUsed() {
+        String tail = ", random interleaver, maxlog LLRs";
+        LdpcCode ldpc = LdpcCode.of(LdpcFamily.R12, LdpcDecoding.DEFAULT);
+        String ldpcWords = "ldpc-r12, min-sum decoder (factor 0.8125), at most 50 iterations";
+        assertEquals(ldpcWords + tail, coding(ldpc, Crc.NONE).describe());
+        assertEquals(ldpcWords + " + crc24" + tail, coding(ldpc, Crc.CRC24).describe());
+        assertEquals("conv-r12" + tail, coding(PuncturedCode.CONV_R12, Crc.NONE).describe());
+        assertEquals("conv-r12 + crc16" + tail, coding(PuncturedCode.CONV_R12, Crc.CRC16).describe());
+        assertEquals("crc32" + tail, coding(ChannelCodes.NONE, Crc.CRC32).describe());
+        LinkSettings l = alamoutiQpsk(1, 512, 0, ldpc, Crc.NONE, LlrMethod.MAXLOG);
+        assertTrue(l.describe().endsWith(", " + ldpcWords + tail), l.describe());
+        assertFalse(l.describe().contains("none"), l.describe());
+    }
+
+    private static FrameCoding coding(ChannelCode code, Crc crc) {
+        return new FrameCoding(new FecScheme(crc, code), Interleaving.RANDOM, 0, LlrMethod.MAXLOG);
     }
 
     /** Without fading and at high SNR every coded frame decodes (AWGN, h = 1). */
