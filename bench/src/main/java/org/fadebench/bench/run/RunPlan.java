@@ -240,7 +240,10 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
         comment.add("fadebench scenario: the settings of this run, written by fadebench; 'fadebench run FILE' repeats it");
         comment.add("every setting is listed; those not set are comments; file and folder names are stored resolved "
                 + "(absolute)");
-        return SettingsText.scenario(values, RunSettings.all(), comment);
+        // a code file takes the place of --code, whose default ("none") the file must not repeat: a
+        // scenario giving both is refused
+        SettingValues written = values.isSet(CODE_FILE) ? values.with(CODE, null, null) : values;
+        return SettingsText.scenario(written, RunSettings.all(), comment);
     }
 
     /**
