@@ -194,7 +194,8 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
 
     /**
      * The bound settings for a link, or null where they do not apply: a code that is not
-     * orthogonal, a channel that changes within a block (Doppler) or replays a trace.
+     * orthogonal, a channel that changes within a block (Doppler) or replays a trace, and an AWGN
+     * link, whose fixed channel has no outage ({@link RunSummary#noBounds} says why).
      */
     public static BoundSettings bounds(SettingValues v, LinkSettings link) {
         Double rate = v.number(RATE);
@@ -215,7 +216,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
         }
         s = s.withInformation(kind).withMimoDraws(draws, BoundSettings.DEFAULT_MIMO_SEED);
         ChannelSpec channel = link.channel();
-        if (channel.varies() || channel.trace() != null) {
+        if (channel.varies() || channel.trace() != null || channel.awgn()) {
             return null;
         }
         return s.withChannel(channel);

@@ -11,6 +11,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.fadebench.bench.analysis.NormalApproximation;
+import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.bench.report.ResultsCsv;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -55,8 +56,10 @@ class NormalApproximationCliTest {
 
     /**
      * Runs BPSK over AWGN with {@code fec}, 256-bit frames, at least 40 frame errors per point, and
-     * checks the column and the gap's arithmetic; returns per point {FER interval low, high,
-     * approximation}.
+     * checks the column and the gap's arithmetic, and that no outage bound is given (the channel is
+     * fixed, so no frame is ever in outage): the p_out columns empty with a comment line saying why,
+     * no bounds in results.json and that reason as the gaps' note; returns per point {FER interval
+     * low, high, approximation}.
      */
     private List<double[]> runAndCheckGap(String fec, String snrDb, int maxFrames) throws IOException {
         Path dir = tmp.resolve(fec);
@@ -64,16 +67,26 @@ class NormalApproximationCliTest {
                 "--frame-bits", "256", "--snr", snrDb, "--min-errors", "40", "--max-frames", Integer.toString(maxFrames),
                 "--seed", "3", "--threads", "2", "--quiet", "--out", dir.toString());
         assertEquals(0, o.code(), o.err());
-        List<String> rows = Files.readAllLines(dir.resolve("results.csv")).stream().filter(l -> !l.startsWith("#"))
-                .toList();
+        List<String> lines = Files.readAllLines(dir.resolve("results.csv"));
+        assertTrue(lines.contains("# p_out_*: empty, " + RunSummary.NO_BOUNDS_AWGN), String.join("\n", lines));
+        List<String> rows = lines.stream().filter(l -> !l.startsWith("#")).toList();
         assertTrue(rows.get(0).endsWith("," + ResultsCsv.NORMAL_APPROX_COLUMN), rows.get(0));
+        List<String> header = List.of(rows.get(0).split(","));
         List<double[]> points = new ArrayList<>();
         for (String row : rows.subList(1, rows.size())) {
             String[] f = row.split(",", -1);
+            for (String column : header) {
+                if (column.startsWith("p_out_")) {
+                    assertEquals("", f[header.indexOf(column)], column + " in " + row);
+                }
+            }
             points.add(new double[] {Double.parseDouble(f[8]), Double.parseDouble(f[9]),
                 Double.parseDouble(f[f.length - 1])});
         }
-        JsonNode summary = new ObjectMapper().readTree(dir.resolve("results.json").toFile()).get("summary");
+        JsonNode json = new ObjectMapper().readTree(dir.resolve("results.json").toFile());
+        assertTrue(json.get("bounds").isNull(), json.get("bounds").toString());
+        JsonNode summary = json.get("summary");
+        assertEquals(RunSummary.NO_BOUNDS_AWGN, summary.get("gap_note").get("qam").asText());
         JsonNode gap = summary.get("gap_db").get(NormalApproximation.KEY);
         assertTrue(gap.isNumber() && gap.asDouble() > 0, summary.toString());
         assertEquals(summary.get("snr_db_at_target").asDouble()
