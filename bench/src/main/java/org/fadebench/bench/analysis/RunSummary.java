@@ -30,6 +30,15 @@ public record RunSummary(double targetFer, Optional<DiversityFit> diversity, Opt
     /** The words when a channel has no outage bounds. */
     public static final String NO_BOUNDS = "no outage bounds for this channel";
 
+    /** The words for an AWGN link, which has no outage bounds. */
+    public static final String NO_BOUNDS_AWGN = "no outage bounds over AWGN (--fading none): the channel is fixed, "
+            + "so a frame is never in outage; the normal approximation is the limit there";
+
+    /** Why {@code link} has no outage bounds (where it has none): {@link #NO_BOUNDS_AWGN} or {@link #NO_BOUNDS}. */
+    public static String noBounds(LinkSettings link) {
+        return link.channel().awgn() ? NO_BOUNDS_AWGN : NO_BOUNDS;
+    }
+
     /** Summarises a sweep of {@code link}; {@code curves} may be null, and {@code noBounds} then says why. */
     public static RunSummary of(LinkSettings link, List<PointResult> points, BoundCurves curves, double targetFer,
                                 String noBounds) {

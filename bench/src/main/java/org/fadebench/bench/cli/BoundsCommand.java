@@ -86,6 +86,11 @@ final class BoundsCommand implements Callable<Integer> {
             throw new InvalidSettingException(CODE, code.name() + " is not orthogonal; the code bounds hold for "
                     + "orthogonal codes only (see 'fadebench codes')");
         }
+        if (link.channel().awgn()) {
+            throw new InvalidSettingException(FADING, "none is an AWGN channel, fixed and never in outage, so it has no"
+                    + " outage bounds; valid: a fading model (rayleigh, rician, nakagami); over AWGN 'run' gives the"
+                    + " normal approximation");
+        }
         double[] snrDb = SnrGrid.parse(v.text(SNR_DB));
         BoundSettings settings = RunPlan.bounds(v, link);
         Path dir = SweepJob.checkOutDir(v.text(FOLDER));

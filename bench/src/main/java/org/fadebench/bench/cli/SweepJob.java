@@ -156,7 +156,7 @@ final class SweepJob {
         Path dir = plan.outDir();
         List<PointResult> results = outcome.results();
         BoundCurves curves = null;
-        String noBounds = RunSummary.NO_BOUNDS;
+        String noBounds = RunSummary.noBounds(plan.link());
         if (boundsApply() && !results.isEmpty()) {
             try {
                 curves = BoundCurves.compute(plan.bounds(), results.stream().mapToDouble(PointResult::snrDb).toArray(),

@@ -87,12 +87,18 @@ public record FrameCoding(FecScheme scheme, Interleaving interleaving, int inter
         return d.isEmpty() ? "1 or " + n + " (the length is prime)" : String.join(", ", d);
     }
 
-    /** One line for tables, e.g. "conv-r12 + crc16, random interleaver, maxlog LLRs". */
+    /**
+     * One line for tables, e.g. "conv-r12 + crc16, random interleaver, maxlog LLRs": the channel code
+     * and the CRC, each only when there is one ("conv-r12, …" without a CRC, "crc16, …" without a code).
+     */
     public String describe() {
         if (!coded()) {
             return "uncoded";
         }
-        return scheme.code().describe() + " + " + scheme.crc().cliName() + ", " + interleaving.cliName()
+        String code = scheme.code() == ChannelCodes.NONE ? "" : scheme.code().describe();
+        String crc = scheme.crc() == Crc.NONE ? "" : scheme.crc().cliName();
+        String both = code.isEmpty() || crc.isEmpty() ? code + crc : code + " + " + crc;
+        return both + ", " + interleaving.cliName()
                 + " interleaver" + (interleaving == Interleaving.BLOCK ? " (" + interleaverRows + " rows)" : "")
                 + ", " + llr.cliName() + " LLRs";
     }

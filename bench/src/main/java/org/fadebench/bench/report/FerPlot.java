@@ -247,15 +247,15 @@ public final class FerPlot {
             chart.addSubtitle(textLine(runLines.get(i), RUN_FONT, new Color(0x222222), i == 0 ? 4 : 0));
         }
         String sub = bounds != null ? subtitle(bounds.settings(), confidence)
-                : String.format(Locale.ROOT, "bars: %s %% confidence intervals   ·   no outage bounds for this channel",
-                        Numbers.db(100 * confidence));
+                : String.format(Locale.ROOT, "bars: %s %% confidence intervals   ·   %s", Numbers.db(100 * confidence),
+                        link.channel().awgn() ? "no outage bounds over AWGN" : RunSummary.NO_BOUNDS);
         chart.addSubtitle(textLine(sub, RUN_FONT, new Color(0x444444), 6));
         chart.addSubtitle(textLine(STYLE_WORDS, RUN_FONT, new Color(0x444444), 0));
         if (normal.isPresent()) {
             chart.addSubtitle(textLine(NORMAL_APPROX_WORDS, RUN_FONT, new Color(0x444444), 0));
         }
         double above = 6;
-        for (String note : RunSummary.of(link, points, bounds, targetFer, RunSummary.NO_BOUNDS).reachLines()) {
+        for (String note : RunSummary.of(link, points, bounds, targetFer, RunSummary.noBounds(link)).reachLines()) {
             for (String line : wrap(note, RUN_FONT)) {
                 chart.addSubtitle(textLine(line, RUN_FONT, new Color(0x444444), above));
                 above = 0;
@@ -457,8 +457,9 @@ public final class FerPlot {
 
     /** E.g. "Alamouti 2×2, QPSK, Rayleigh fading" or "1×2, BPSK, Rayleigh fading, no space-time code". */
     static String title(LinkSettings link) {
-        String antennasAndSignal = String.format(Locale.ROOT, "%d×%d, %s, %s fading", link.transmitAntennas(),
-                link.receiveAntennas(), link.modulation(), capitalised(link.fading()));
+        String antennasAndSignal = String.format(Locale.ROOT, "%d×%d, %s, %s", link.transmitAntennas(),
+                link.receiveAntennas(), link.modulation(),
+                link.channel().awgn() ? "AWGN channel" : capitalised(link.fading()) + " fading");
         String title = link.code() == SpaceTimeCodes.NONE ? antennasAndSignal + ", no space-time code"
                 : capitalised(link.code().name()) + " " + antennasAndSignal;
         FecScheme fec = link.coding().scheme();

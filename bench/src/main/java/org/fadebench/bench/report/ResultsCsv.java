@@ -10,6 +10,7 @@ import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundPoint;
 import org.fadebench.bench.analysis.BoundSettings;
 import org.fadebench.bench.analysis.NormalApproximation;
+import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
@@ -63,6 +64,7 @@ public final class ResultsCsv {
         }
         w.append("# fer_ci_*: two-sided ").append(level).append(" Clopper-Pearson interval over frames; ber_ci_*: ")
                 .append(level).append(" interval with frames as clusters of bits (see README)\n");
+        boolean awgn = link.channel().awgn();
         if (bounds != null) {
             BoundSettings b = bounds.settings();
             w.append("# p_out_*: outage probability at R = ").append(Numbers.db(b.spectralEfficiency()))
@@ -75,12 +77,13 @@ public final class ResultsCsv {
                 w.append("# p_out_").append(bound.key()).append(": ").append(b.method(bound)).append('\n');
             }
             w.append("# a Monte Carlo value is left empty where its interval is wider than the value\n");
+        } else if (awgn) {
+            w.append("# p_out_*: empty, ").append(RunSummary.NO_BOUNDS_AWGN).append('\n');
         } else {
             w.append("# p_out_*: empty, outage bounds are given for orthogonal codes over channels constant within a "
                     + "block (no Doppler, no trace)\n");
         }
         Optional<NormalApproximation> normal = NormalApproximation.of(link);
-        boolean awgn = link.channel().awgn();
         if (normal.isPresent()) {
             NormalApproximation a = normal.get();
             w.append("# ").append(NORMAL_APPROX_COLUMN).append(": finite-blocklength limit, normal approximation")

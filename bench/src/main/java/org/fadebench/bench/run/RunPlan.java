@@ -194,7 +194,8 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
 
     /**
      * The bound settings for a link, or null where they do not apply: a code that is not
-     * orthogonal, a channel that changes within a block (Doppler) or replays a trace.
+     * orthogonal, a channel that changes within a block (Doppler) or replays a trace, and an AWGN
+     * link, whose fixed channel has no outage ({@link RunSummary#noBounds} says why).
      */
     public static BoundSettings bounds(SettingValues v, LinkSettings link) {
         Double rate = v.number(RATE);
@@ -215,7 +216,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
         }
         s = s.withInformation(kind).withMimoDraws(draws, BoundSettings.DEFAULT_MIMO_SEED);
         ChannelSpec channel = link.channel();
-        if (channel.varies() || channel.trace() != null) {
+        if (channel.varies() || channel.trace() != null || channel.awgn()) {
             return null;
         }
         return s.withChannel(channel);
@@ -240,7 +241,10 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
         comment.add("fadebench scenario: the settings of this run, written by fadebench; 'fadebench run FILE' repeats it");
         comment.add("every setting is listed; those not set are comments; file and folder names are stored resolved "
                 + "(absolute)");
-        return SettingsText.scenario(values, RunSettings.all(), comment);
+        // a code file takes the place of --code, whose default ("none") the file must not repeat: a
+        // scenario giving both is refused
+        SettingValues written = values.isSet(CODE_FILE) ? values.with(CODE, null, null) : values;
+        return SettingsText.scenario(written, RunSettings.all(), comment);
     }
 
     /**

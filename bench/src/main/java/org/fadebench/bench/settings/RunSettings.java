@@ -16,6 +16,8 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
 import org.fadebench.coding.fec.ChannelCodes;
+import org.fadebench.coding.fec.ldpc.LdpcAlgorithm;
+import org.fadebench.coding.fec.ldpc.LdpcDecoding;
 
 /**
  * The table of every setting of {@code run}: one line per setting. Adding an option to
@@ -66,10 +68,11 @@ public final class RunSettings {
     public static final Setting FEC_DECODER = new Setting("link", "fec_decoder", "--fec-decoder", TEXT, "NAME", null,
             "LDPC decoder: min-sum (normalised), offset-min-sum, sum-product (default: min-sum).");
     public static final Setting FEC_ITERATIONS = new Setting("link", "fec_iterations", "--fec-iterations", WHOLE, "N",
-            null, "Most LDPC decoder iterations per frame (default: 50).");
+            null, "Most LDPC decoder iterations per frame (default: " + LdpcDecoding.DEFAULT.iterations() + ").");
     public static final Setting FEC_CORRECTION = new Setting("link", "fec_correction", "--fec-correction", NUMBER, "X",
             null, "Normalisation factor of min-sum (0 < X <= 1) or offset of offset-min-sum (0 to 8, LLR units) "
-                    + "(default: 0.75, 0.5).");
+                    + "(default: " + LdpcAlgorithm.MIN_SUM.defaultCorrection() + ", "
+                    + LdpcAlgorithm.OFFSET_MIN_SUM.defaultCorrection() + ").");
     public static final Setting FEC_FULL_ITERATIONS = new Setting("link", "fec_full_iterations",
             "--fec-full-iterations", FLAG, null, "false",
             "The LDPC decoder runs all --fec-iterations iterations instead of stopping once every check holds.");

@@ -50,6 +50,10 @@ class BoundsCliTest {
         o = CliTest.run("bounds", "--code", "h4", "--tx", "2", "--out", tmp.resolve("x").toString());
         assertEquals(2, o.code());
         assertTrue(o.err().contains("--code h4 needs exactly 4 transmit antennas"), o.err());
+        o = CliTest.run("bounds", "--fading", "none", "--out", tmp.resolve("x").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().startsWith("fadebench bounds: --fading none is an AWGN channel") && o.err().contains("valid: ")
+                && o.err().trim().indexOf('\n') < 0, o.err());
         assertFalse(Files.exists(tmp.resolve("x")));
     }
 }

@@ -62,6 +62,28 @@ class ScenarioCliTest {
         assertEquals(Files.readString(a.resolve("results.csv")), Files.readString(b.resolve("results.csv")));
     }
 
+    /**
+     * A run with a space-time code of the user's ({@code --code-file}) writes a scenario that runs
+     * again: the file's code, not the catalogue's default {@code code: none} beside it (which the
+     * run would refuse as two codes), the same results and the same scenario.
+     */
+    @Test
+    void writtenScenarioOfACodeFileRepeatsTheRun() throws IOException {
+        Path codeFile = Path.of("scenarios", "example-code.yaml").toAbsolutePath();
+        Path a = tmp.resolve("a");
+        Path b = tmp.resolve("b");
+        CliTest.Outcome o = CliTest.run("run", "--code-file", codeFile.toString(), "--rx", "2", "--snr", "4,8",
+                "--min-errors", "20", "--seed", "4", "--out", a.toString());
+        assertEquals(0, o.code(), o.err());
+        String scenario = Files.readString(a.resolve("scenario.yaml"));
+        assertTrue(scenario.contains("  code_file: \"" + codeFile + "\"\n") && scenario.contains("  # code:"), scenario);
+        o = CliTest.run("run", a.resolve("scenario.yaml").toString(), "--out", b.toString());
+        assertEquals(0, o.code(), o.err());
+        assertEquals(Files.readString(a.resolve("results.csv")), Files.readString(b.resolve("results.csv")));
+        String again = Files.readString(b.resolve("scenario.yaml")).replace(b.toString(), a.toString());
+        assertEquals(scenario.substring(scenario.indexOf('\n')), again.substring(again.indexOf('\n')));
+    }
+
     /** Running a written scenario as it is writes the same scenario again, byte for byte. */
     @Test
     void writtenScenarioIsAFixedPoint() throws IOException {

@@ -24,6 +24,10 @@ import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.fec.Interleaving;
 import org.fadebench.coding.fec.conv.PuncturedCode;
+import org.fadebench.coding.fec.ldpc.LdpcAlgorithm;
+import org.fadebench.coding.fec.ldpc.LdpcCode;
+import org.fadebench.coding.fec.ldpc.LdpcDecoding;
+import org.fadebench.coding.fec.ldpc.LdpcFamily;
 import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.SpaceTimeCodeFile;
@@ -42,7 +46,10 @@ import org.junit.jupiter.api.io.TempDir;
  * its message. Refactoring changes none of them.
  *
  * <p>Each row is one SNR point: {frames, frame_errors, bits, bit_errors, symbols, symbol_errors,
- * crc_failures, undetected_errors, Σ (bit errors per frame)²}. Every sweep runs exactly its frame
+ * crc_failures, undetected_errors, Σ (bit errors per frame)²}, and for an LDPC code the decoder's
+ * iterations summed over the frames after them (so the mean iterations per point are pinned too).
+ * The LDPC cases guard both decoders: the fixed-point lane decoder (normalised and offset min-sum)
+ * and the floating-point sum-product decoder. Every sweep runs exactly its frame
  * budget (no minimum error count, no FER floor) over several batches, so the ordered merge of
  * batches is pinned too; one case runs on 1 and 2 threads to pin thread independence.
  */
@@ -54,6 +61,11 @@ class KnownAnswerTest {
     Path tmp;
 
     private static long[][] sweep(LinkSettings link, double[] snrDb, long frames, int threads) {
+        return sweep(link, snrDb, frames, threads, false);
+    }
+
+    /** The rows of a sweep, each ending with the decoder's iteration sum when {@code iterations} is set. */
+    private static long[][] sweep(LinkSettings link, double[] snrDb, long frames, int threads, boolean iterations) {
         List<PointResult> results = new SweepEngine(link, new StopRules(0, frames, 0, 0), SEED, threads, 0.95)
                 .run(snrDb, p -> { }).results();
         long[][] rows = new long[results.size()][];
@@ -61,8 +73,9 @@ class KnownAnswerTest {
             FrameCounters c = results.get(i).counts();
             double squares = c.bitErrorsSquared();
             assertEquals(Math.rint(squares), squares, 0.0, "a sum of integer squares");
-            rows[i] = new long[] {c.frames(), c.frameErrors(), c.bits(), c.bitErrors(), c.symbols(),
-                c.symbolErrors(), c.crcFailures(), c.undetectedErrors(), (long) squares};
+            long[] row = {c.frames(), c.frameErrors(), c.bits(), c.bitErrors(), c.symbols(),
+                c.symbolErrors(), c.crcFailures(), c.undetectedErrors(), (long) squares, c.fecIterations()};
+            rows[i] = iterations ? row : Arrays.copyOf(row, row.length - 1);
         }
         return rows;
     }
@@ -109,6 +122,65 @@ class KnownAnswerTest {
         assertPinned(new long[][] {
             {300, 83, 60000, 4406, 69000, 11901, 84, 0, 334580},
             {300, 22, 60000, 1082, 69000, 4384, 22, 0, 81362}}, sweep(link, new double[] {4, 8}, 300, 2));
+    }
+
+    /** An LDPC link: the built-in code {@code family} decoded as {@code decoding}, random interleaver, max-log LLRs. */
+    private static LinkSettings ldpc(LdpcFamily family, LdpcDecoding decoding, Crc crc, Modulation m,
+                                     SpaceTimeCode code, int rx, ChannelSpec channel, int frameBits, int coherence) {
+        FrameCoding coding = new FrameCoding(new FecScheme(crc, LdpcCode.of(family, decoding)), Interleaving.RANDOM, 0,
+                LlrMethod.MAXLOG);
+        return new LinkSettings(m, code, rx, code.transmitAntennas(), channel, frameBits, coherence, Equaliser.MF,
+                coding);
+    }
+
+    /**
+     * ldpc-r12 + crc24, Alamouti 2x2 16-QAM over quasi-static Rayleigh, 1024-bit payloads: normalised
+     * min-sum (α = 13/16, the default) on the fixed-point decoder, 128 lanes; the same numbers on 1 and
+     * 2 threads.
+     */
+    @Test
+    void ldpcAlamoutiQam16Crc24Lanes() {
+        LinkSettings link = ldpc(LdpcFamily.R12, LdpcDecoding.DEFAULT, Crc.CRC24, Modulation.QAM16,
+                SpaceTimeCodes.ALAMOUTI, 2, RAYLEIGH, 1024, 0);
+        assertEquals(128, link.lanes());
+        long[][] expected = {
+            {256, 40, 262144, 6539, 134144, 43235, 40, 0, 1249865, 2966},
+            {256, 4, 262144, 719, 134144, 20941, 4, 0, 149575, 820}};
+        assertPinned(expected, sweep(link, new double[] {6, 9}, 256, 1, true));
+        assertPinned(expected, sweep(link, new double[] {6, 9}, 256, 2, true));
+    }
+
+    /** ldpc-r34 without CRC, BPSK over AWGN, 512-bit payloads, around FER 0.4 and 0.07: normalised min-sum. */
+    @Test
+    void ldpcRate34BpskAwgn() {
+        LinkSettings link = ldpc(LdpcFamily.R34, LdpcDecoding.DEFAULT, Crc.NONE, Modulation.BPSK, SpaceTimeCodes.NONE, 1,
+                ChannelSpec.of(Fading.NONE), 512, 0);
+        assertPinned(new long[][] {
+            {512, 206, 262144, 5058, 349696, 19690, 0, 0, 141544, 12786},
+            {512, 37, 262144, 699, 349696, 15963, 0, 0, 15355, 4156}}, sweep(link, new double[] {1, 1.5}, 512, 2, true));
+    }
+
+    /**
+     * ldpc-r23 + crc16, offset min-sum (β = 0.5, the default) at most 20 iterations, QPSK with 1x2
+     * combining over Rayleigh blocks of 32 slots (7 per 204-slot frame), 256-bit payloads.
+     */
+    @Test
+    void ldpcOffsetMinSumBlockFading() {
+        LinkSettings link = ldpc(LdpcFamily.R23, LdpcDecoding.of(LdpcAlgorithm.OFFSET_MIN_SUM, 20), Crc.CRC16,
+                Modulation.QPSK, SpaceTimeCodes.NONE, 2, RAYLEIGH, 256, 32);
+        assertPinned(new long[][] {
+            {512, 172, 131072, 3926, 104448, 14311, 172, 0, 105266, 4663},
+            {512, 8, 131072, 156, 104448, 6576, 9, 0, 3408, 1097}}, sweep(link, new double[] {2, 5}, 512, 2, true));
+    }
+
+    /** ldpc-r12, sum-product on the floating-point decoder, BPSK over AWGN, 128-bit payloads. */
+    @Test
+    void ldpcSumProductAwgn() {
+        LinkSettings link = ldpc(LdpcFamily.R12, LdpcDecoding.of(LdpcAlgorithm.SUM_PRODUCT, 50), Crc.NONE,
+                Modulation.BPSK, SpaceTimeCodes.NONE, 1, ChannelSpec.of(Fading.NONE), 128, 0);
+        assertPinned(new long[][] {
+            {256, 48, 32768, 645, 65536, 7711, 0, 0, 11197, 3604},
+            {256, 4, 32768, 54, 65536, 6627, 0, 0, 758, 1405}}, sweep(link, new double[] {-1.5, -1}, 256, 2, true));
     }
 
     /** Rician K = 3 with exponential transmit and receive correlation, Alamouti 2x2 QPSK. */

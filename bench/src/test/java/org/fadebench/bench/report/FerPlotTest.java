@@ -253,6 +253,8 @@ class FerPlotTest {
         assertEquals(6, ((BasicStroke) item.getLineStroke()).getDashArray().length);
         assertEquals(new java.awt.Color(0xE69F00), item.getLinePaint());
         assertTrue(subtitles(chart).contains(FerPlot.NORMAL_APPROX_WORDS));
+        assertTrue(subtitles(chart).contains("bars: 95 % confidence intervals   ·   no outage bounds over AWGN"),
+                "an AWGN link has no outage bounds, and the plot says so: " + subtitles(chart));
         assertTrue(panels(chart(sweep(), FerPlot.Axes.AUTOMATIC)).get(0).getDataset(3) == null);
         assertFalse(subtitles(chart(sweep(), FerPlot.Axes.AUTOMATIC)).contains(FerPlot.NORMAL_APPROX_WORDS));
     }
@@ -342,6 +344,8 @@ class FerPlotTest {
         assertEquals("Alamouti 2×2, QPSK, Rayleigh fading", FerPlot.title(LINK));
         assertEquals("1×3, 16QAM, Rayleigh fading, no space-time code", FerPlot.title(new LinkSettings(Modulation.QAM16,
                 SpaceTimeCodes.NONE, 3, 1, Fading.RAYLEIGH, 128, 0)));
+        assertEquals("Alamouti 2×1, QPSK, AWGN channel", FerPlot.title(new LinkSettings(Modulation.QPSK,
+                SpaceTimeCodes.ALAMOUTI, 1, 2, Fading.NONE, 128, 0)));
     }
 
     /**

@@ -15,6 +15,8 @@ import java.util.Set;
 import org.fadebench.bench.run.RunPlan;
 import org.fadebench.bench.scenario.Scenario;
 import org.fadebench.bench.scenario.ScenarioLoader;
+import org.fadebench.coding.fec.ldpc.LdpcAlgorithm;
+import org.fadebench.coding.fec.ldpc.LdpcDecoding;
 import org.junit.jupiter.api.Test;
 
 /** The settings table and what is served from it: scenario text, JSON settings, plans without the CLI. */
@@ -34,6 +36,17 @@ class RunSettingsTest {
             assertTrue(s.help().endsWith(".") || s.help().endsWith(")"), "help is a sentence: " + s.help());
             assertTrue(s.option() == null || s.kind() == Setting.Kind.FLAG || s.label() != null, s.path());
         }
+    }
+
+    /** The LDPC settings' help states the defaults the decoders use. */
+    @Test
+    void ldpcHelpStatesTheDefaults() {
+        assertTrue(RunSettings.FEC_CORRECTION.help().endsWith("(default: 0.8125, 0.5)."),
+                RunSettings.FEC_CORRECTION.help());
+        assertEquals(0.8125, LdpcAlgorithm.MIN_SUM.defaultCorrection());
+        assertEquals(0.5, LdpcAlgorithm.OFFSET_MIN_SUM.defaultCorrection());
+        assertTrue(RunSettings.FEC_ITERATIONS.help().endsWith("(default: 50)."), RunSettings.FEC_ITERATIONS.help());
+        assertEquals(50, LdpcDecoding.DEFAULT.iterations());
     }
 
     @Test
