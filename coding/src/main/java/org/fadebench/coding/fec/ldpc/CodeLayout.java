@@ -1,5 +1,6 @@
 package org.fadebench.coding.fec.ldpc;
 
+import java.util.Optional;
 
 /**
  * One LDPC code at one information size as a link sends it: the parity-check matrix the decoder
@@ -12,6 +13,14 @@ public interface CodeLayout {
 
     /** The parity-check matrix H the decoder uses, n = {@code matrix().columns()}. */
     ParityCheckMatrix matrix();
+
+    /**
+     * How {@link #matrix()} comes from a lifted base matrix, if it does: the decoder then works on
+     * whole block rows at once ({@link LdpcDecoders#create}). Empty by default.
+     */
+    default Optional<QcStructure> quasiCyclic() {
+        return Optional.empty();
+    }
 
     /** Information bits k per codeword. */
     int infoBits();

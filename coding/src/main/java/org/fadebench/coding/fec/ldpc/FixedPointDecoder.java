@@ -19,13 +19,14 @@ import org.fadebench.coding.fec.Lanes;
  *
  * <p>Layout: every quantity is a row over lanes, lane index innermost ({@code check[e][lane]} per
  * edge e in row order, {@code posterior[j][lane]} per column j), and the check update is a few
- * short loops over lanes with branch-free selects (sign masks from arithmetic shifts), the form the
- * JIT's loop vectoriser takes (see the Viterbi decoder; C2 in Java 17 vectorises only short loop
- * bodies, and no 16-bit min, so the messages are ints and each step its own loop). Per check row
- * and edge: Q = P − R into the message row with the sign parity, then the least and second least
- * |Q| per lane; one loop corrects the two minima; then per edge R = ±(the corrected least of the
- * others) and P = Q + R. The edge of the least is not kept: an edge whose |Q| equals the least takes
- * the second least, which on a tie is the same value.
+ * short loops over lanes with branch-free selects ({@link MinSumLoops}, shared with the block-row
+ * kernel {@link QcDecoder}; C2 in Java 17 vectorises only short loop bodies, and no 16-bit min, so
+ * the messages are ints). Per check row and edge: Q = P − R into the message row with the sign
+ * parity and the least and second least |Q| per lane; one loop corrects the two minima (the
+ * parity's sign put on them); then per edge R = ±(the corrected least of the others) and P = Q + R.
+ * The edge of the least is not kept: an edge whose |Q| equals the least takes the second least,
+ * which on a tie is the same value. This kernel decodes any H; for a quasi-cyclic code
+ * {@link QcDecoder} gives the same numbers faster.
  *
  * <p>Early stop: after each iteration every lane's syndrome is computed from the signs of P (one
  * exclusive-or per edge and lane). A lane whose checks all hold is done: its hard decisions are
@@ -34,7 +35,7 @@ import org.fadebench.coding.fec.Lanes;
  * at the iteration limit. Without early stop the syndrome is computed once, at the end.
  * Allocates nothing after construction.
  */
-final class FixedPointDecoder extends LayeredDecoder {
+final class FixedPointDecoder extends RowDecoder {
 
     /** Quantisation steps per LLR unit. */
     static final int SCALE = 16;
@@ -42,8 +43,6 @@ final class FixedPointDecoder extends LayeredDecoder {
     static final int CHANNEL_LIMIT = 1023;
     /** The most |R|, in steps. */
     static final int MESSAGE_LIMIT = 4095;
-    /** Above any |Q|: the starting value of the minima. */
-    private static final int ABOVE = 1 << 30;
 
     private final boolean normalised;
     private final int factor;
@@ -159,7 +158,7 @@ final class FixedPointDecoder extends LayeredDecoder {
         }
         if (count > 0) {
             for (int j = 0; j < columns; j++) {
-                keep(posterior[j], decided[j], finished, n);
+                MinSumLoops.keep(posterior[j], decided[j], finished, n);
             }
         }
         return count;
@@ -172,135 +171,28 @@ final class FixedPointDecoder extends LayeredDecoder {
             int e = rowStart[i];
             System.arraycopy(posterior[edgeColumn[e]], 0, syndrome, 0, n);
             for (e++; e < rowStart[i + 1]; e++) {
-                exclusiveOr(syndrome, posterior[edgeColumn[e]], n);
+                MinSumLoops.exclusiveOr(syndrome, posterior[edgeColumn[e]], n);
             }
-            or(failed, syndrome, n);
-        }
-    }
-
-    private static void exclusiveOr(int[] acc, int[] p, int n) {
-        for (int l = 0; l < n; l++) {
-            acc[l] ^= p[l];
-        }
-    }
-
-    private static void or(int[] acc, int[] s, int n) {
-        for (int l = 0; l < n; l++) {
-            acc[l] |= s[l];
-        }
-    }
-
-    /** to = from where mask is −1, unchanged where 0. */
-    private static void keep(int[] from, int[] to, int[] mask, int n) {
-        for (int l = 0; l < n; l++) {
-            to[l] ^= (to[l] ^ from[l]) & mask[l];
+            MinSumLoops.or(failed, syndrome, n);
         }
     }
 
     private void updateRow(int row, int n) {
         int from = rowStart[row];
         int to = rowStart[row + 1];
-        Arrays.fill(least, 0, n, ABOVE);
-        Arrays.fill(second, 0, n, ABOVE);
+        Arrays.fill(least, 0, n, MinSumLoops.ABOVE);
+        Arrays.fill(second, 0, n, MinSumLoops.ABOVE);
         Arrays.fill(parity, 0, n, 0);
         for (int e = from; e < to; e++) {
-            int[] r = check[e];
-            subtract(posterior[edgeColumn[e]], r, n);
-            minima(r, n);
+            MinSumLoops.subtractAndMinima(posterior[edgeColumn[e]], check[e], parity, least, second, n);
         }
         if (normalised) {
-            scale(n);
+            MinSumLoops.scale(least, second, parity, leastOut, gap, factor, n);
         } else {
-            lessOffset(n);
+            MinSumLoops.lessOffset(least, second, parity, leastOut, gap, offset, n);
         }
         for (int e = from; e < to; e++) {
-            scatter(posterior[edgeColumn[e]], check[e], n);
-        }
-    }
-
-    /** r = Q = p − r, and the sign parity updated. */
-    private void subtract(int[] p, int[] r, int n) {
-        final int[] sign = parity;
-        for (int l = 0; l < n; l++) {
-            int q = p[l] - r[l];
-            r[l] = q;
-            sign[l] ^= q;
-        }
-    }
-
-    /**
-     * Edge k of a row, its Q in {@code q}: the least and second least |Q| and the edge of the
-     * least updated (kept apart from {@link #subtract}: the JIT vectorises only short loop bodies).
-     */
-    private void minima(int[] q, int n) {
-        final int[] m1 = least;
-        final int[] m2 = second;
-        for (int l = 0; l < n; l++) {
-            int v = q[l];
-            int s = v >> 31;
-            int a = (v ^ s) - s;
-            int low = m1[l];
-            int d = a - low;
-            int cut = d & (d >> 31);
-            m1[l] = low + cut;
-            int high = a - cut - m2[l];
-            m2[l] += high & (high >> 31);
-        }
-    }
-
-    /**
-     * The minima corrected, m ↦ ⌊min(m, MESSAGE_LIMIT)·factor/16⌋, and {@code second} made the
-     * difference of the corrected second and least.
-     */
-    private void scale(int n) {
-        final int[] m1 = least;
-        final int[] m2 = second;
-        final int[] c1 = leastOut;
-        final int[] c2 = gap;
-        final int f = factor;
-        for (int l = 0; l < n; l++) {
-            int low = ((m1[l] - MESSAGE_LIMIT >> 31 & m1[l] - MESSAGE_LIMIT) + MESSAGE_LIMIT) * f >> 4;
-            int high = ((m2[l] - MESSAGE_LIMIT >> 31 & m2[l] - MESSAGE_LIMIT) + MESSAGE_LIMIT) * f >> 4;
-            c1[l] = low;
-            c2[l] = high - low;
-        }
-    }
-
-    /**
-     * The minima corrected, m ↦ max(min(m, MESSAGE_LIMIT) − offset, 0), and {@code second} made
-     * the difference of the corrected second and least.
-     */
-    private void lessOffset(int n) {
-        final int[] m1 = least;
-        final int[] m2 = second;
-        final int[] c1 = leastOut;
-        final int[] c2 = gap;
-        final int b = MESSAGE_LIMIT - offset;
-        for (int l = 0; l < n; l++) {
-            int low = (m1[l] - MESSAGE_LIMIT >> 31 & m1[l] - MESSAGE_LIMIT) + b;
-            int high = (m2[l] - MESSAGE_LIMIT >> 31 & m2[l] - MESSAGE_LIMIT) + b;
-            low &= ~(low >> 31);
-            high &= ~(high >> 31);
-            c1[l] = low;
-            c2[l] = high - low;
-        }
-    }
-
-    /** Edge k of a row: R = ±(the corrected least |Q| of the others), P = Q + R; m2 holds the difference. */
-    private void scatter(int[] p, int[] r, int n) {
-        final int[] m1 = least;
-        final int[] c1 = leastOut;
-        final int[] c2 = gap;
-        final int[] sign = parity;
-        for (int l = 0; l < n; l++) {
-            int q = r[l];
-            int s0 = q >> 31;
-            int own = (((q ^ s0) - s0 ^ m1[l]) - 1) >> 31;
-            int mag = c1[l] + (c2[l] & own);
-            int s = (sign[l] ^ q) >> 31;
-            int v = (mag ^ s) - s;
-            r[l] = v;
-            p[l] = q + v;
+            MinSumLoops.scatter(posterior[edgeColumn[e]], check[e], least, leastOut, gap, n);
         }
     }
 }

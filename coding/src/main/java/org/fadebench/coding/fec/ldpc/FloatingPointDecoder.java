@@ -26,7 +26,7 @@ import org.fadebench.coding.fec.Lanes;
  * <p>Early stop (if the settings ask for it): after each iteration, a lane whose hard decisions
  * (P &lt; 0 gives 1) satisfy every check stops. Allocates nothing after construction.
  */
-final class FloatingPointDecoder extends LayeredDecoder {
+final class FloatingPointDecoder extends RowDecoder {
 
     /** The most |R| of a message, and the most |Q| passed to φ. */
     static final double LIMIT = 700;

@@ -3,36 +3,23 @@ package org.fadebench.coding.fec.ldpc;
 import org.fadebench.coding.fec.Lanes;
 
 /**
- * What the layered LDPC decoders share: H by rows as edges (edge e of row i is one of
- * {@code rowStart[i] .. rowStart[i + 1] − 1}, on column {@code edgeColumn[e]}), the decoding
- * settings, each lane's outcome of the last decode and the argument checks.
+ * What the layered LDPC decoders share: the decoding settings, each lane's outcome of the last
+ * decode and the argument checks.
  */
 abstract class LayeredDecoder implements LdpcDecoder {
 
     final LdpcDecoding decoding;
     final int lanes;
     final int columns;
-    final int rows;
-    final int[] rowStart;
-    final int[] edgeColumn;
     final int[] iterations;
     final boolean[] satisfied;
     int decodedLanes;
 
-    LayeredDecoder(ParityCheckMatrix h, LdpcDecoding decoding, int lanes) {
+    LayeredDecoder(int columns, LdpcDecoding decoding, int lanes) {
         checkLanes(lanes);
         this.decoding = decoding;
         this.lanes = lanes;
-        this.columns = h.columns();
-        this.rows = h.rows();
-        this.rowStart = new int[rows + 1];
-        this.edgeColumn = new int[h.edges()];
-        for (int i = 0, e = 0; i < rows; i++) {
-            for (int p = 0; p < h.rowDegree(i); p++) {
-                edgeColumn[e++] = h.rowEntry(i, p);
-            }
-            rowStart[i + 1] = e;
-        }
+        this.columns = columns;
         this.iterations = new int[lanes];
         this.satisfied = new boolean[lanes];
     }
@@ -44,24 +31,9 @@ abstract class LayeredDecoder implements LdpcDecoder {
         }
     }
 
-    /** Bytes of the arrays this class allocates (the edges by row and the outcome per lane). */
-    static long sharedBytes(ParityCheckMatrix h, int lanes) {
-        return Lanes.rowBytes(4L * (h.rows() + 1)) + Lanes.rowBytes(4L * h.edges()) + Lanes.rowBytes(4L * lanes)
-                + Lanes.rowBytes(lanes);
-    }
-
-    /** Bytes of an array of {@code count} rows of {@code rowPayload} bytes each, with its headers. */
-    static long tableBytes(long count, long rowPayload) {
-        return Lanes.rowBytes(4L * count) + count * Lanes.rowBytes(rowPayload);
-    }
-
-    /** The largest row degree of H. */
-    static int largestRowDegree(ParityCheckMatrix h) {
-        int most = 0;
-        for (int i = 0; i < h.rows(); i++) {
-            most = Math.max(most, h.rowDegree(i));
-        }
-        return most;
+    /** Bytes of the arrays this class allocates (the outcome per lane). */
+    static long sharedBytes(int lanes) {
+        return Lanes.rowBytes(4L * lanes) + Lanes.rowBytes(lanes);
     }
 
     @Override

@@ -151,7 +151,11 @@ public final class LdpcCode implements ChannelCode {
         return layout(infoBits).sentBits();
     }
 
-    /** The decoder's bytes per lane at {@link ChannelCode#MAX_LANES} lanes, rounded up. */
+    /**
+     * The row kernel's bytes per lane at {@link ChannelCode#MAX_LANES} lanes, rounded up: the lanes
+     * are chosen by it for every LDPC code, so that they, the batches and every result for a seed
+     * stay as they were before the block-row kernel (whose lanes hold less: {@link #coderBytes}).
+     */
     @Override
     public long bytesPerLane(int infoBits) {
         long all = LdpcDecoders.bytes(layout(infoBits).matrix(), decoding, MAX_LANES);
@@ -163,7 +167,7 @@ public final class LdpcCode implements ChannelCode {
     public long coderBytes(int infoBits, int lanes) {
         CodeLayout l = layout(infoBits);
         int n = l.matrix().columns();
-        return LdpcDecoders.bytes(l.matrix(), decoding, lanes) + source.encoderBytes(infoBits) + Lanes.rowBytes(n)
+        return LdpcDecoders.bytes(l, decoding, lanes) + source.encoderBytes(infoBits) + Lanes.rowBytes(n)
                 + Lanes.rowBytes(8L * n) + Lanes.rowBytes(4L * l.infoBits()) + Lanes.rowBytes(4L * l.sentBits());
     }
 
@@ -173,7 +177,7 @@ public final class LdpcCode implements ChannelCode {
             throw new IllegalArgumentException(infoBits + " bits in " + lanes + " lanes; need at least 1 of each");
         }
         CodeLayout l = layout(infoBits);
-        return new LdpcLaneCoder(l, LdpcDecoders.create(l.matrix(), decoding, lanes));
+        return new LdpcLaneCoder(l, LdpcDecoders.create(l, decoding, lanes));
     }
 
     @Override

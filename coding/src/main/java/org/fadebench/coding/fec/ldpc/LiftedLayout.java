@@ -1,5 +1,7 @@
 package org.fadebench.coding.fec.ldpc;
 
+import java.util.Optional;
+
 /**
  * One code of the built-in family at one information size k: the protograph lifted by Z =
  * ⌈k / kb⌉, shortened to k information bits and punctured to the bits sent.
@@ -29,6 +31,7 @@ final class LiftedLayout implements CodeLayout {
     private final int[] infoPosition; // information bit t -> its position in the kb·Z lifted information part
     private final int[] sent;
     private final ParityCheckMatrix matrix;
+    private final QcStructure structure;
 
     /**
      * @param base the lifted base matrix (kb information columns, then the dual-diagonal parity part)
@@ -70,6 +73,11 @@ final class LiftedLayout implements CodeLayout {
             }
         }
         matrix = build(column, n);
+        int[] position = new int[n];
+        for (int c = 0; c < n; c++) {
+            position[c] = c < infoBits ? infoPosition[c] : kb * z + c - infoBits;
+        }
+        structure = new QcStructure(base, position);
     }
 
     /** The expanded base matrix with its columns renumbered (information, then parity) and the fillers left out. */
@@ -92,14 +100,14 @@ final class LiftedLayout implements CodeLayout {
         return ParityCheckMatrix.of(full.rows(), n, r, c, e);
     }
 
-    /** The lifted base matrix. */
-    QcBaseMatrix base() {
-        return base;
-    }
-
     @Override
     public ParityCheckMatrix matrix() {
         return matrix;
+    }
+
+    @Override
+    public Optional<QcStructure> quasiCyclic() {
+        return Optional.of(structure);
     }
 
     @Override

@@ -1,0 +1,276 @@
+package org.fadebench.coding.fec.ldpc;
+
+import java.util.Arrays;
+import org.fadebench.coding.fec.Lanes;
+
+/**
+ * The fixed-point min-sum decoder of {@link FixedPointDecoder} (same quantisation, messages and
+ * schedule, the same result for every frame bit for bit) for a quasi-cyclic H: vectorised over the
+ * Z rows of a block row and {@value #WIDTH} lanes, rather than over lanes alone.
+ *
+ * <p>In a block row every column is touched at most once (each circulant is a permutation), so its
+ * Z rows are independent and updating them together gives exactly the row-by-row layered result.
+ * Layout: posteriors as [base column][z][lane] (one flat row), the messages of a block edge as
+ * [z][lane] (a row per block edge), and the per-check quantities as [z][lane]. Row z of block
+ * (i, j) with shift s reads column (z + s) mod Z of block j: the block's posteriors are copied into
+ * a scratch row turned by s (two {@code System.arraycopy}) and back after the update, so each step
+ * of the check update ({@link MinSumLoops}) is one loop over Z·{@value #WIDTH} ints with every
+ * array indexed from 0 (C2 in Java 17 does not vectorise a loop whose arrays are indexed from
+ * different offsets), instead of one short loop per row and edge.
+ *
+ * <p>Lanes: up to {@code lanes} frames are loaded; they are decoded in groups of {@value #WIDTH},
+ * one group after another through one working set (posteriors and messages), so the lane count
+ * a link chooses costs only the channel values and decisions of each lane. Shortened columns keep
+ * their slots with a posterior of {@value #SHORTENED}: above every |Q| (at most CHANNEL_LIMIT +
+ * degree · MESSAGE_LIMIT) and positive, it is never a least value nor flips a sign, and the minima
+ * are held at MESSAGE_LIMIT anyway, so this equals removing the column. Early stop per lane, as in
+ * {@link FixedPointDecoder}; a group ends when all its lanes are done. Allocates nothing after
+ * construction.
+ */
+final class QcDecoder extends LayeredDecoder {
+
+    /** Lanes decoded together (one 512-bit vector of ints per row of a block). */
+    static final int WIDTH = 16;
+    /** The posterior of a shortened column. */
+    static final int SHORTENED = 1 << 29;
+
+    private final int lifting;
+    private final int slice;
+    private final int baseColumns;
+    private final int blockRows;
+    private final int[] blockStart;
+    private final int[] blockColumn;
+    private final int[] blockShift;
+    private final int[] slot;
+    private final boolean normalised;
+    private final int factor;
+    private final int offset;
+    private final int[][] channel;
+    private final int[][] decided;
+    private final int[] posterior;
+    private final int[] rotated;
+    private final int[][] check;
+    private final int[] least;
+    private final int[] second;
+    private final int[] leastOut;
+    private final int[] gap;
+    private final int[] parity;
+    private final int[] syndrome;
+    private final int[] failedRows;
+    private final int[] mask;
+    private final boolean[] active;
+
+    QcDecoder(QcStructure qc, LdpcDecoding decoding, int lanes) {
+        super(qc.columns(), decoding, lanes);
+        if (decoding.algorithm() == LdpcAlgorithm.SUM_PRODUCT) {
+            throw new IllegalArgumentException("sum-product runs in floating point only");
+        }
+        QcBaseMatrix base = qc.base();
+        lifting = base.lifting();
+        slice = lifting * WIDTH;
+        baseColumns = base.baseColumns();
+        blockRows = base.baseRows();
+        int blocks = blocks(base);
+        blockStart = new int[blockRows + 1];
+        blockColumn = new int[blocks];
+        blockShift = new int[blocks];
+        for (int i = 0, b = 0; i < blockRows; i++) {
+            for (int j = 0; j < baseColumns; j++) {
+                if (base.shift(i, j) >= 0) {
+                    blockColumn[b] = j;
+                    blockShift[b++] = base.shift(i, j);
+                }
+            }
+            blockStart[i + 1] = b;
+        }
+        slot = new int[columns];
+        for (int c = 0; c < columns; c++) {
+            slot[c] = qc.position(c) * WIDTH;
+        }
+        normalised = decoding.algorithm() == LdpcAlgorithm.MIN_SUM;
+        factor = (int) Math.round(decoding.correction() * 16);
+        offset = (int) Math.round(decoding.correction() * FixedPointDecoder.SCALE);
+        int groups = groups(lanes);
+        int frame = baseColumns * slice;
+        channel = new int[groups][frame];
+        for (int[] group : channel) {
+            Arrays.fill(group, SHORTENED);
+            for (int c = 0; c < columns; c++) {
+                Arrays.fill(group, slot[c], slot[c] + WIDTH, 0);
+            }
+        }
+        decided = new int[groups][frame];
+        posterior = new int[frame];
+        mask = new int[frame];
+        rotated = new int[slice];
+        check = new int[blocks][slice];
+        least = new int[slice];
+        second = new int[slice];
+        leastOut = new int[slice];
+        gap = new int[slice];
+        parity = new int[slice];
+        syndrome = new int[slice];
+        failedRows = new int[slice];
+        active = new boolean[WIDTH];
+    }
+
+    private static int blocks(QcBaseMatrix base) {
+        int count = 0;
+        for (int i = 0; i < base.baseRows(); i++) {
+            for (int j = 0; j < base.baseColumns(); j++) {
+                count += base.shift(i, j) >= 0 ? 1 : 0;
+            }
+        }
+        return count;
+    }
+
+    private static int groups(int lanes) {
+        return (lanes + WIDTH - 1) / WIDTH;
+    }
+
+    /** Bytes the buffers of a decoder take. */
+    static long bytes(QcStructure qc, int lanes) {
+        QcBaseMatrix base = qc.base();
+        long slice = 4L * base.lifting() * WIDTH;
+        long frame = base.baseColumns() * slice;
+        int blocks = blocks(base);
+        int groups = groups(lanes);
+        return sharedBytes(lanes) + Lanes.rowBytes(4L * (base.baseRows() + 1)) + 2 * Lanes.rowBytes(4L * blocks)
+                + Lanes.rowBytes(4L * qc.columns()) + 2 * (Lanes.rowBytes(4L * groups) + groups * Lanes.rowBytes(frame))
+                + 2 * Lanes.rowBytes(frame) + Lanes.rowBytes(4L * blocks) + blocks * Lanes.rowBytes(slice)
+                + 8 * Lanes.rowBytes(slice) + Lanes.rowBytes(WIDTH);
+    }
+
+    @Override
+    public void load(int lane, double[] llr, int off) {
+        Lanes.checkLane(lane, lanes);
+        checkFinite(lane, llr, off);
+        int[] group = channel[lane / WIDTH];
+        int w = lane % WIDTH;
+        for (int c = 0; c < columns; c++) {
+            group[slot[c] + w] = FixedPointDecoder.quantise(llr[off + c]);
+        }
+    }
+
+    @Override
+    int decision(int lane, int column) {
+        return decided[lane / WIDTH][slot[column] + lane % WIDTH] >>> 31;
+    }
+
+    @Override
+    public void decode(int frames) {
+        Lanes.checkFrames(frames, lanes);
+        for (int g = 0; g * WIDTH < frames; g++) {
+            decodeGroup(g, Math.min(WIDTH, frames - g * WIDTH));
+        }
+        decodedLanes = frames;
+    }
+
+    private void decodeGroup(int group, int n) {
+        System.arraycopy(channel[group], 0, posterior, 0, posterior.length);
+        for (int[] row : check) {
+            Arrays.fill(row, 0);
+        }
+        Arrays.fill(active, false);
+        Arrays.fill(active, 0, n, true);
+        int limit = decoding.iterations();
+        int running = n;
+        int done = 0;
+        while (done < limit && running > 0) {
+            for (int i = 0; i < blockRows; i++) {
+                updateBlockRow(i);
+            }
+            done++;
+            if (decoding.earlyStop() && done < limit) {
+                running -= finish(group, done, false);
+            }
+        }
+        if (running > 0) {
+            finish(group, done, true);
+        }
+    }
+
+    /**
+     * The posteriors block b's rows see, into {@link #rotated}: row z of the block reads column
+     * (z + s) mod Z of its base column, so the rows are the column's block turned by s (two copies).
+     */
+    private void rotateIn(int b) {
+        int p = blockColumn[b] * slice;
+        int head = (lifting - blockShift[b]) * WIDTH;
+        System.arraycopy(posterior, p + slice - head, rotated, 0, head);
+        System.arraycopy(posterior, p, rotated, head, slice - head);
+    }
+
+    /** {@link #rotated} back into block b's base column: the inverse of {@link #rotateIn}. */
+    private void rotateOut(int b) {
+        int p = blockColumn[b] * slice;
+        int head = (lifting - blockShift[b]) * WIDTH;
+        System.arraycopy(rotated, 0, posterior, p + slice - head, head);
+        System.arraycopy(rotated, head, posterior, p, slice - head);
+    }
+
+    private void updateBlockRow(int i) {
+        Arrays.fill(least, MinSumLoops.ABOVE);
+        Arrays.fill(second, MinSumLoops.ABOVE);
+        Arrays.fill(parity, 0);
+        for (int b = blockStart[i]; b < blockStart[i + 1]; b++) {
+            rotateIn(b);
+            MinSumLoops.subtractAndMinima(rotated, check[b], parity, least, second, slice);
+        }
+        if (normalised) {
+            MinSumLoops.scale(least, second, parity, leastOut, gap, factor, slice);
+        } else {
+            MinSumLoops.lessOffset(least, second, parity, leastOut, gap, offset, slice);
+        }
+        for (int b = blockStart[i]; b < blockStart[i + 1]; b++) {
+            MinSumLoops.scatter(rotated, check[b], least, leastOut, gap, slice);
+            rotateOut(b);
+        }
+    }
+
+    /**
+     * Computes the syndromes of the group's lanes and finishes those still running whose checks all
+     * hold (all running lanes if {@code last}): iterations, satisfied, decisions. Returns how many
+     * it finished.
+     */
+    private int finish(int group, int done, boolean last) {
+        computeSyndromes();
+        int count = 0;
+        for (int w = 0; w < WIDTH; w++) {
+            int failed = 0;
+            for (int z = 0; z < lifting; z++) {
+                failed |= failedRows[z * WIDTH + w];
+            }
+            boolean ok = failed >= 0;
+            boolean stop = active[w] && (ok || last);
+            mask[w] = stop ? -1 : 0;
+            if (stop) {
+                int lane = group * WIDTH + w;
+                active[w] = false;
+                iterations[lane] = done;
+                satisfied[lane] = ok;
+                count++;
+            }
+        }
+        if (count > 0) {
+            for (int at = WIDTH; at < mask.length; at += WIDTH) {
+                System.arraycopy(mask, 0, mask, at, WIDTH);
+            }
+            MinSumLoops.keep(posterior, decided[group], mask, mask.length);
+        }
+        return count;
+    }
+
+    /** failedRows[z·WIDTH + w] negative iff a check of row z of some block row fails for lane w, on the signs of P. */
+    private void computeSyndromes() {
+        Arrays.fill(failedRows, 0);
+        for (int i = 0; i < blockRows; i++) {
+            Arrays.fill(syndrome, 0);
+            for (int b = blockStart[i]; b < blockStart[i + 1]; b++) {
+                rotateIn(b);
+                MinSumLoops.exclusiveOr(syndrome, rotated, slice);
+            }
+            MinSumLoops.or(failedRows, syndrome, slice);
+        }
+    }
+}
