@@ -12,19 +12,20 @@ import java.util.Optional;
  * so the high-degree columns stay whole and each removed column lightens three checks. Their
  * columns are removed from H (known zeros, never sent).
  *
- * <p>Puncturing: of the mb·Z parity bits, mb·Z − (sent − k) are not sent; for the family's round(k / R)
- * bits sent that is round(f·mb / kb) for f fillers, at most mb. They are taken one per staircase
- * column (parity column 1, 2, …, mb − 1), at offset 0 in odd and ⌊Z/2⌋ in even ones; when more are
- * needed than there are staircase columns, a second round takes one more per column from column 1
- * on, at ⌊Z/4⌋ in odd and ⌊3Z/4⌋ in even ones (at most 2·(mb − 1) in all). Staircase column c
- * has its ones in rows c − 1 and c at the same offset (shift 0), so a check of row c sees column c's
- * and column c + 1's bit at its own offset; odd columns use offsets {0, ⌊Z/4⌋}, even ones
- * {⌊Z/2⌋, ⌊3Z/4⌋}, four distinct offsets for Z ≥ 4 (the family's smallest Z is ⌈64/20⌉ = 4), so no
- * check sees two punctured bits: each punctured bit has degree 2 and both its checks are otherwise
- * sent, so the first iteration already gives it a message (the idea of recoverable punctured
- * nodes, J. Ha, J. Kim, S. W. McLaughlin, "Rate-compatible puncturing of low-density parity-check
- * codes", IEEE Trans. Inf. Theory 50(11), 2004; from memory). The degree-3 parity column and the
- * information bits are always sent. The first round is the whole rule wherever it suffices.
+ * <p>Puncturing: of the mb·Z parity bits, mb·Z − (sent − k) are not sent; at the family's
+ * round(k / R) bits sent that is f·mb / kb rounded, for f fillers: at most mb. They are taken one per
+ * staircase column (parity column 1 … mb − 1), at offset 0 in odd and ⌊Z/2⌋ in even columns; when
+ * that is not enough, a second round takes one more per column from column 1 on, at ⌊Z/4⌋ in odd
+ * and ⌊3Z/4⌋ in even columns (at most 2·(mb − 1) bits in all; the family needs the second round only
+ * at rates 3/4 and 5/6, for the largest f, and then one bit of it). Staircase column c has its ones in
+ * rows c − 1 and c at its own offset (shift 0), so a check meets the bits of two neighbouring
+ * columns at one offset: odd columns use offsets {0, ⌊Z/4⌋}, even ones {⌊Z/2⌋, ⌊3Z/4⌋}, four
+ * distinct offsets for Z ≥ 4 (the family's smallest Z is ⌈64 / 20⌉ = 4). So no check sees two
+ * punctured bits: each punctured bit has degree 2 and both its checks are otherwise sent, so the
+ * first iteration already gives it a message (the idea of recoverable punctured nodes, J. Ha,
+ * J. Kim, S. W. McLaughlin, "Rate-compatible puncturing of low-density parity-check codes", IEEE
+ * Trans. Inf. Theory 50(11), 2004; from memory). The degree-3 parity column and the information
+ * bits are always sent.
  *
  * <p>Columns of H: the k information bits in block order, then the mb·Z parity bits (block c at
  * k + c·Z). Bits sent in column order, the punctured ones left out. Immutable.
