@@ -9,9 +9,11 @@ import org.fadebench.modem.QamConstellation;
 /**
  * Coded frames ({@link InterleavedTransmission}): payload bits → CRC, channel code, interleaver →
  * QAM → … → LLRs → deinterleaver, channel decoder, CRC. Frames are sent one by one and decoded in
- * lanes, up to {@link LinkSettings#lanes()} frames at once; each frame's outcome is the same as if
- * it were decoded alone. A frame's raw symbol errors are the hard decisions on its coded bits'
- * LLRs against the bits sent.
+ * lanes, up to {@link LinkSettings#lanes()} frames at once, or continuously where the codec can (a
+ * lane takes the next frame as soon as its own is decided, so an LDPC frame that needs every
+ * iteration does not hold up the others); each frame's outcome is the same as if it were decoded
+ * alone. A frame's raw symbol errors are the hard decisions on its coded bits' LLRs against the
+ * bits sent.
  */
 final class CodedPath implements FramePath {
 
@@ -33,6 +35,8 @@ final class CodedPath implements FramePath {
     private final byte[] payloadOut;
     private final byte[] codedBits;
     private final double[] llr;
+    /** Lanes the codec decodes continuously (empty if it decodes in groups only), for the lanes it finishes. */
+    private final int[] finished;
 
     CodedPath(LinkSettings settings, InterleavedTransmission transmission) {
         FrameCoding coding = settings.coding();
@@ -51,6 +55,7 @@ final class CodedPath implements FramePath {
         this.payloadOut = new byte[frameBits];
         this.codedBits = new byte[symbols * bitsPerSymbol];
         this.llr = new double[symbols * bitsPerSymbol];
+        this.finished = new int[codec.continuousLanes()];
     }
 
     /** Bytes the constructor allocates: payloads of every lane, bits and LLRs sent, and the codec's buffers. */
@@ -63,6 +68,10 @@ final class CodedPath implements FramePath {
 
     @Override
     public void runFrames(Draws draws, double n0, long first, int count, FrameCounters counters) {
+        if (finished.length > 0) {
+            runContinuously(draws, n0, first, count, counters);
+            return;
+        }
         for (int done = 0; done < count; done += lanes) {
             int group = Math.min(lanes, count - done);
             for (int lane = 0; lane < group; lane++) {
@@ -71,6 +80,31 @@ final class CodedPath implements FramePath {
             codec.decodeReceived(group);
             for (int lane = 0; lane < group; lane++) {
                 count(lane, counters);
+            }
+        }
+    }
+
+    /**
+     * The frames through a codec that decodes continuously: each lane it decodes so takes the next
+     * frame as soon as its own is counted. Frames are sent in order, as in groups, so every frame
+     * meets the same draws and is decoded as it would be alone: the counters equal those of groups.
+     */
+    private void runContinuously(Draws draws, double n0, long first, int count, FrameCounters counters) {
+        int sent = 0;
+        while (sent < Math.min(finished.length, count)) {
+            send(draws, n0, first + sent, sent);
+            sent++;
+        }
+        for (int running = sent; running > 0; ) {
+            int done = codec.advance(finished);
+            for (int k = 0; k < done; k++) {
+                int lane = finished[k];
+                count(lane, counters);
+                if (sent < count) {
+                    send(draws, n0, first + sent++, lane);
+                } else {
+                    running--;
+                }
             }
         }
     }

@@ -100,6 +100,22 @@ public final class FecCodec {
         coder.decode(frames);
     }
 
+    /** Lanes 0 .. L − 1 that {@link #advance} decodes continuously; 0 if the code decodes in groups only. */
+    public int continuousLanes() {
+        return coder.continuousLanes();
+    }
+
+    /**
+     * Continuous decoding ({@link LaneCoder#advance}): starts the lanes received since the last
+     * call, decodes until at least one is finished and writes those lanes to {@code finished[0 ..]},
+     * whose payloads {@link #decided} then reads.
+     *
+     * @return how many lanes finished; 0 only when no lane is running
+     */
+    public int advance(int[] finished) {
+        return coder.advance(finished);
+    }
+
     /**
      * Writes the decided payload of a lane of the last {@link #decodeReceived} to
      * {@code payload[outOff ..]}.

@@ -43,4 +43,24 @@ public interface LaneCoder {
     default int iterations(int lane) {
         return 0;
     }
+
+    /**
+     * Lanes 0 .. L − 1 that {@link #advance} decodes continuously (a finished lane takes the next
+     * frame while the others go on); 0, the default, for a coder that decodes in groups only.
+     */
+    default int continuousLanes() {
+        return 0;
+    }
+
+    /**
+     * Continuous decoding: starts the lanes {@link #load loaded} since the last call, decodes the
+     * running lanes until at least one is finished and writes those lanes to {@code finished[0 ..]};
+     * {@link #decided} and {@link #iterations} then read them until they are loaded again.
+     *
+     * @return how many lanes finished; 0 only when no lane is running
+     * @throws UnsupportedOperationException if {@link #continuousLanes} is 0
+     */
+    default int advance(int[] finished) {
+        throw new UnsupportedOperationException("this coder decodes in groups only");
+    }
 }

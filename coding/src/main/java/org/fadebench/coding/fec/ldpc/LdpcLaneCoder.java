@@ -61,6 +61,18 @@ final class LdpcLaneCoder implements LaneCoder {
     }
 
     @Override
+    public int continuousLanes() {
+        return decoder.continuousLanes();
+    }
+
+    @Override
+    public int advance(int[] finished) {
+        int count = decoder.advance(finished);
+        decodedLanes = decoder.continuousLanes();
+        return count;
+    }
+
+    @Override
     public void decided(int lane, byte[] info, int off) {
         Lanes.checkLane(lane, decodedLanes);
         for (int t = 0; t < infoColumns.length; t++) {

@@ -59,6 +59,10 @@ final class QcDecoder extends LayeredDecoder {
     private final int[] failedRows;
     private final int[] mask;
     private final boolean[] active;
+    /** Per lane of the working set: iterations done so far. */
+    private final int[] done;
+    /** Per lane of group 0: loaded since it last started (continuous decoding). */
+    private final boolean[] loaded;
 
     QcDecoder(QcStructure qc, LdpcDecoding decoding, int lanes) {
         super(qc.columns(), decoding, lanes);
@@ -112,6 +116,8 @@ final class QcDecoder extends LayeredDecoder {
         syndrome = new int[slice];
         failedRows = new int[slice];
         active = new boolean[WIDTH];
+        done = new int[WIDTH];
+        loaded = new boolean[WIDTH];
     }
 
     private static int blocks(QcBaseMatrix base) {
@@ -138,7 +144,7 @@ final class QcDecoder extends LayeredDecoder {
         return sharedBytes(lanes) + Lanes.rowBytes(4L * (base.baseRows() + 1)) + 2 * Lanes.rowBytes(4L * blocks)
                 + Lanes.rowBytes(4L * qc.columns()) + 2 * (Lanes.rowBytes(4L * groups) + groups * Lanes.rowBytes(frame))
                 + 2 * Lanes.rowBytes(frame) + Lanes.rowBytes(4L * blocks) + blocks * Lanes.rowBytes(slice)
-                + 8 * Lanes.rowBytes(slice) + Lanes.rowBytes(WIDTH);
+                + 8 * Lanes.rowBytes(slice) + 2 * Lanes.rowBytes(WIDTH) + Lanes.rowBytes(4L * WIDTH);
     }
 
     @Override
@@ -150,6 +156,9 @@ final class QcDecoder extends LayeredDecoder {
         for (int c = 0; c < columns; c++) {
             group[slot[c] + w] = FixedPointDecoder.quantise(llr[off + c]);
         }
+        if (lane < WIDTH) {
+            loaded[lane] = true;
+        }
     }
 
     @Override
@@ -160,34 +169,117 @@ final class QcDecoder extends LayeredDecoder {
     @Override
     public void decode(int frames) {
         Lanes.checkFrames(frames, lanes);
+        Arrays.fill(loaded, false);
         for (int g = 0; g * WIDTH < frames; g++) {
-            decodeGroup(g, Math.min(WIDTH, frames - g * WIDTH));
+            int n = Math.min(WIDTH, frames - g * WIDTH);
+            System.arraycopy(channel[g], 0, posterior, 0, posterior.length);
+            for (int[] row : check) {
+                Arrays.fill(row, 0);
+            }
+            Arrays.fill(active, false);
+            Arrays.fill(active, 0, n, true);
+            Arrays.fill(done, 0);
+            for (int running = n; running > 0; running -= iterate(g, null)) {
+                // each pass is one iteration of the running lanes
+            }
         }
         decodedLanes = frames;
     }
 
-    private void decodeGroup(int group, int n) {
-        System.arraycopy(channel[group], 0, posterior, 0, posterior.length);
+    /** The first {@value #WIDTH} lanes (one group), or fewer if the decoder has fewer. */
+    @Override
+    public int continuousLanes() {
+        return Math.min(WIDTH, lanes);
+    }
+
+    /**
+     * Starts the lanes loaded since the last call (their posteriors from the channel, their
+     * messages 0, no iteration done), then runs iterations of the group until at least one lane is
+     * finished.
+     */
+    @Override
+    public int advance(int[] finished) {
+        int started = 0;
+        for (int w = 0; w < continuousLanes(); w++) {
+            if (loaded[w]) {
+                start(w);
+            }
+            started += active[w] ? 1 : 0;
+        }
+        decodedLanes = continuousLanes();
+        int count = 0;
+        while (started > 0 && count == 0) {
+            count = iterate(0, finished);
+        }
+        return count;
+    }
+
+    /** Lane w of group 0 from its channel values: posteriors, messages 0, running, no iteration done. */
+    private void start(int w) {
+        int[] values = channel[0];
+        for (int x = w; x < posterior.length; x += WIDTH) {
+            posterior[x] = values[x];
+        }
         for (int[] row : check) {
-            Arrays.fill(row, 0);
+            for (int x = w; x < slice; x += WIDTH) {
+                row[x] = 0;
+            }
         }
-        Arrays.fill(active, false);
-        Arrays.fill(active, 0, n, true);
+        loaded[w] = false;
+        active[w] = true;
+        done[w] = 0;
+    }
+
+    /**
+     * One iteration of every block row over the working set (the lanes of {@code group}), then
+     * finishes the running lanes whose checks all hold (early stop) or that reached the limit:
+     * iterations, satisfied, decisions. Lanes not running are computed too, unseen.
+     *
+     * @param finished where the lanes finished (within the group) go, or null
+     * @return how many lanes it finished
+     */
+    private int iterate(int group, int[] finished) {
+        for (int i = 0; i < blockRows; i++) {
+            updateBlockRow(i);
+        }
         int limit = decoding.iterations();
-        int running = n;
-        int done = 0;
-        while (done < limit && running > 0) {
-            for (int i = 0; i < blockRows; i++) {
-                updateBlockRow(i);
-            }
-            done++;
-            if (decoding.earlyStop() && done < limit) {
-                running -= finish(group, done, false);
+        boolean atLimit = false;
+        for (int w = 0; w < WIDTH; w++) {
+            if (active[w] && ++done[w] >= limit) {
+                atLimit = true;
             }
         }
-        if (running > 0) {
-            finish(group, done, true);
+        if (!atLimit && !decoding.earlyStop()) {
+            return 0;
         }
+        computeSyndromes();
+        int count = 0;
+        for (int w = 0; w < WIDTH; w++) {
+            int failed = 0;
+            for (int z = 0; z < lifting; z++) {
+                failed |= failedRows[z * WIDTH + w];
+            }
+            boolean ok = failed >= 0;
+            boolean stop = active[w] && (ok && decoding.earlyStop() || done[w] >= limit);
+            mask[w] = stop ? -1 : 0;
+            if (stop) {
+                int lane = group * WIDTH + w;
+                active[w] = false;
+                iterations[lane] = done[w];
+                satisfied[lane] = ok;
+                if (finished != null) {
+                    finished[count] = w;
+                }
+                count++;
+            }
+        }
+        if (count > 0) {
+            for (int at = WIDTH; at < mask.length; at += WIDTH) {
+                System.arraycopy(mask, 0, mask, at, WIDTH);
+            }
+            MinSumLoops.keep(posterior, decided[group], mask, mask.length);
+        }
+        return count;
     }
 
     /**
@@ -226,39 +318,6 @@ final class QcDecoder extends LayeredDecoder {
             MinSumLoops.scatter(rotated, check[b], least, leastOut, gap, slice);
             rotateOut(b);
         }
-    }
-
-    /**
-     * Computes the syndromes of the group's lanes and finishes those still running whose checks all
-     * hold (all running lanes if {@code last}): iterations, satisfied, decisions. Returns how many
-     * it finished.
-     */
-    private int finish(int group, int done, boolean last) {
-        computeSyndromes();
-        int count = 0;
-        for (int w = 0; w < WIDTH; w++) {
-            int failed = 0;
-            for (int z = 0; z < lifting; z++) {
-                failed |= failedRows[z * WIDTH + w];
-            }
-            boolean ok = failed >= 0;
-            boolean stop = active[w] && (ok || last);
-            mask[w] = stop ? -1 : 0;
-            if (stop) {
-                int lane = group * WIDTH + w;
-                active[w] = false;
-                iterations[lane] = done;
-                satisfied[lane] = ok;
-                count++;
-            }
-        }
-        if (count > 0) {
-            for (int at = WIDTH; at < mask.length; at += WIDTH) {
-                System.arraycopy(mask, 0, mask, at, WIDTH);
-            }
-            MinSumLoops.keep(posterior, decided[group], mask, mask.length);
-        }
-        return count;
     }
 
     /** failedRows[z·WIDTH + w] negative iff a check of row z of some block row fails for lane w, on the signs of P. */

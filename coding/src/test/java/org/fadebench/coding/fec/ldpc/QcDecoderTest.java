@@ -64,6 +64,82 @@ class QcDecoderTest {
         }
     }
 
+    /**
+     * Continuous decoding gives every frame the result of decoding it in a group: 60 frames through
+     * the 16 lanes, each finished lane loaded with the next frame at once, against the same frames
+     * decoded in groups of 20 (decisions on every column, iterations, satisfied), both min-sum
+     * variants, early stop on and off, two rates and sizes with shortened and punctured bits.
+     */
+    @Test
+    void decodesContinuouslyAsInGroups() {
+        Random random = new Random(31);
+        int frames = 60;
+        for (LdpcFamily family : new LdpcFamily[] {LdpcFamily.R12, LdpcFamily.R56}) {
+            for (int k : new int[] {100, 1024}) {
+                CodeLayout layout = family.layout(k);
+                int n = layout.matrix().columns();
+                double[][] llr = frames(layout, frames, random);
+                for (LdpcDecoding decoding : MIN_SUMS) {
+                    LdpcDecoder groups = LdpcDecoders.create(layout, decoding, 20);
+                    byte[][] expected = new byte[frames][];
+                    int[] expectedIterations = new int[frames];
+                    boolean[] expectedSatisfied = new boolean[frames];
+                    for (int first = 0; first < frames; first += 20) {
+                        for (int l = 0; l < 20; l++) {
+                            groups.load(l, llr[first + l], 0);
+                        }
+                        groups.decode(20);
+                        for (int l = 0; l < 20; l++) {
+                            expected[first + l] = LdpcDecodersTest.decisions(groups, l, n);
+                            expectedIterations[first + l] = groups.iterations(l);
+                            expectedSatisfied[first + l] = groups.satisfied(l);
+                        }
+                    }
+                    LdpcDecoder continuous = LdpcDecoders.create(layout, decoding, 20);
+                    int lanes = continuous.continuousLanes();
+                    assertEquals(QcDecoder.WIDTH, lanes);
+                    int[] frameOf = new int[lanes];
+                    int[] finished = new int[lanes];
+                    int next = 0;
+                    for (; next < lanes; next++) {
+                        continuous.load(next, llr[next], 0);
+                        frameOf[next] = next;
+                    }
+                    int checked = 0;
+                    for (int running = lanes; running > 0; ) {
+                        int done = continuous.advance(finished);
+                        assertTrue(done > 0);
+                        for (int d = 0; d < done; d++) {
+                            int lane = finished[d];
+                            int f = frameOf[lane];
+                            String where = family + " k " + k + " " + decoding + " frame " + f;
+                            assertArrayEquals(expected[f], LdpcDecodersTest.decisions(continuous, lane, n), where);
+                            assertEquals(expectedIterations[f], continuous.iterations(lane), where);
+                            assertEquals(expectedSatisfied[f], continuous.satisfied(lane), where);
+                            checked++;
+                            if (next < frames) {
+                                continuous.load(lane, llr[next], 0);
+                                frameOf[lane] = next++;
+                            } else {
+                                running--;
+                            }
+                        }
+                    }
+                    assertEquals(frames, checked);
+                    assertEquals(0, continuous.advance(finished), "nothing left running");
+                }
+            }
+        }
+    }
+
+    /** A decoder that decodes in groups only says so, and refuses to advance. */
+    @Test
+    void rowKernelDecodesInGroupsOnly() {
+        LdpcDecoder rows = new FixedPointDecoder(DecoderTestCodes.QC_960.expand(), LdpcDecoding.DEFAULT, 4);
+        assertEquals(0, rows.continuousLanes());
+        assertThrows(UnsupportedOperationException.class, () -> rows.advance(new int[4]));
+    }
+
     /** Noisy BPSK frames of random codewords, Eb/N0 spread around the code's waterfall; punctured columns at LLR 0. */
     private static double[][] frames(CodeLayout layout, int lanes, Random random) {
         int n = layout.matrix().columns();
