@@ -1,5 +1,7 @@
 package org.fadebench.coding.fec.ldpc;
 
+import java.util.Arrays;
+
 /**
  * A quasi-cyclic LDPC code given by a base matrix of circulant shifts and a lifting size Z: entry
  * s_ij = −1 is the Z x Z zero block, 0 ≤ s_ij < Z the identity with its columns shifted
@@ -62,6 +64,17 @@ public final class QcBaseMatrix {
 
     /** The expanded parity-check matrix, (rows · Z) x (columns · Z). */
     public ParityCheckMatrix expand() {
+        int[] column = new int[shifts[0].length * lifting];
+        Arrays.setAll(column, p -> p);
+        return expand(column, column.length);
+    }
+
+    /**
+     * The expanded matrix with its columns renumbered: lifted column p (block p / Z, offset p mod Z)
+     * becomes column {@code column[p]} of a matrix of {@code columns} columns, or is left out where
+     * {@code column[p]} is −1 (a shortened bit, a known zero).
+     */
+    ParityCheckMatrix expand(int[] column, int columns) {
         int count = 0;
         for (int[] row : shifts) {
             for (int s : row) {
@@ -78,12 +91,15 @@ public final class QcBaseMatrix {
                     continue;
                 }
                 for (int t = 0; t < lifting; t++) {
-                    r[e] = i * lifting + t;
-                    c[e++] = j * lifting + (t + s) % lifting;
+                    int col = column[j * lifting + (t + s) % lifting];
+                    if (col >= 0) {
+                        r[e] = i * lifting + t;
+                        c[e++] = col;
+                    }
                 }
             }
         }
-        return ParityCheckMatrix.of(shifts.length * lifting, shifts[0].length * lifting, r, c, count);
+        return ParityCheckMatrix.of(shifts.length * lifting, columns, r, c, e);
     }
 
     /**

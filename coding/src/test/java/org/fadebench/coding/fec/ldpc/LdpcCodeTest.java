@@ -180,6 +180,50 @@ class LdpcCodeTest {
                 + " and CRC); valid: no payload with crc16 fits; use a shorter --crc", e.getMessage());
     }
 
+    /**
+     * A family code takes every size of its range, also those that need the second round of
+     * puncturing (rate 3/4 at k = 73: Z = 5, 17 fillers, 6 punctured; rate 5/6 at k = 81 and 82: Z = 5,
+     * 19 and 18 fillers, 4 punctured): noiseless LLRs of the sent bits decode to the information sent.
+     * Outside the range, one line names the sizes it takes.
+     */
+    @Test
+    void familyCodeTakesEverySizeOfItsRangeAndNamesItOutside() {
+        Random random = new Random(9);
+        decodesNoiselessFrames(LdpcFamily.R34, 73, random);
+        decodesNoiselessFrames(LdpcFamily.R56, 81, random);
+        decodesNoiselessFrames(LdpcFamily.R56, 82, random);
+        LdpcCode code = LdpcCode.of(LdpcFamily.R34, LdpcDecoding.DEFAULT);
+        for (int k : new int[] {63, 8225}) {
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> code.codedBits(k));
+            assertEquals("channel code ldpc-r34 takes 64 to 8224 information bits per frame, not " + k, e.getMessage());
+        }
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> new FecScheme(Crc.CRC32, code).checkPayload(8193));
+        assertEquals("--frame-bits 8193 with crc32: channel code ldpc-r34 carries 64 to 8224 information bits per frame"
+                + " (payload and CRC); valid: --frame-bits 32 to 8192 with crc32", e.getMessage());
+    }
+
+    private static void decodesNoiselessFrames(LdpcFamily family, int k, Random random) {
+        LdpcCode code = LdpcCode.of(family, LdpcDecoding.DEFAULT);
+        int n = code.codedBits(k);
+        assertEquals(Math.round(k / family.rate()), n);
+        LaneCoder coder = code.newCoder(k, 4);
+        byte[] coded = new byte[n];
+        double[] llr = new double[n];
+        byte[] decided = new byte[k];
+        for (int f = 0; f < 4; f++) {
+            byte[] info = randomBits(k, random);
+            coder.encode(info, 0, coded, 0);
+            for (int p = 0; p < n; p++) {
+                llr[p] = coded[p] == 0 ? 6 : -6;
+            }
+            coder.load(0, llr, 0);
+            coder.decode(1);
+            coder.decided(0, decided, 0);
+            assertArrayEquals(info, decided, family + " k " + k + " frame " + f);
+        }
+    }
+
     @Test
     void describesItsDecoding() {
         assertEquals("LDPC code of qc960 (n 960, k 480), min-sum decoder (factor 0.8125), at most 50 iterations",

@@ -20,7 +20,6 @@ import org.junit.jupiter.api.Test;
 
 class LdpcFamilyTest {
 
-    private static final int[] SIZES = {64, 65, 100, 255, 256, 700, 1000, 1024, 1500, 4097, 8224};
     private static final int[] POWERS = {64, 128, 256, 512, 1024, 2048, 4096, 8192};
 
     @Test
@@ -33,13 +32,21 @@ class LdpcFamilyTest {
         assertEquals(5.0 / 6, LdpcFamily.R56.rate(), 1e-15);
     }
 
-    /** Lifting by ⌈k / kb⌉, fewer than kb fillers, round(k / R) bits sent, H of k + mb·Z columns. */
+    /**
+     * Every k from 64 to 8224 at every rate: lifting by ⌈k / kb⌉, fewer than kb fillers, round(k / R)
+     * bits sent, H of k + mb·Z columns, the punctured bits recoverable ({@link #puncturedBits}); the
+     * second round of puncturing serves exactly the sizes the first could not (a filler count f with
+     * round(f·mb / kb) = mb: f = 17 of 18 at rate 3/4, f = 18 and 19 of 20 at rate 5/6, one or two
+     * sizes per Z). H·c = 0 for one encoded word at each of those sizes and at every 64th k.
+     */
     @Test
-    void layoutsSendExactlyTheNominalRate() {
+    void everySizeIsServedAtTheNominalRate() {
+        SplittableRandom random = new SplittableRandom(23);
+        int[] secondRoundSizes = new int[LdpcFamily.values().length];
         for (LdpcFamily code : LdpcFamily.values()) {
             int kb = code.infoColumns();
             int mb = LdpcFamily.BASE_COLUMNS - kb;
-            for (int k : SIZES) {
+            for (int k = LdpcFamily.MIN_INFO_BITS; k <= LdpcFamily.MAX_INFO_BITS; k++) {
                 CodeLayout layout = code.layout(k);
                 int z = code.lifting(k);
                 assertTrue(kb * z >= k && kb * (z - 1) < k, code + " k " + k);
@@ -48,29 +55,84 @@ class LdpcFamilyTest {
                 ParityCheckMatrix h = layout.matrix();
                 assertEquals(k + mb * z, h.columns());
                 assertEquals(mb * z, h.rows());
-                boolean[] isSent = new boolean[h.columns()];
-                for (int p = 0; p < layout.sentBits(); p++) {
-                    int c = layout.sentColumn(p);
-                    assertTrue(p == 0 || c > layout.sentColumn(p - 1), "ascending, distinct");
-                    isSent[c] = true;
+                int punctured = puncturedBits(layout, z, code + " k " + k);
+                if (punctured == mb) {
+                    secondRoundSizes[code.ordinal()]++;
                 }
-                for (int t = 0; t < k; t++) {
-                    assertEquals(t, layout.infoColumn(t));
-                    assertTrue(isSent[t], "information bits are sent");
-                }
-                // punctured bits: degree-2 parity bits, no check with two of them
-                int[] puncturedPerCheck = new int[h.rows()];
-                for (int c = 0; c < h.columns(); c++) {
-                    if (!isSent[c]) {
-                        assertTrue(c >= k + z, "not in parity column 0");
-                        assertEquals(2, h.columnDegree(c));
-                        for (int p = 0; p < 2; p++) {
-                            assertTrue(++puncturedPerCheck[h.columnEntry(c, p)] < 2, code + " k " + k);
-                        }
+                if (punctured == mb || k % 64 == 0) {
+                    byte[] info = new byte[k];
+                    for (int t = 0; t < k; t++) {
+                        info[t] = (byte) random.nextInt(2);
                     }
+                    byte[] word = new byte[h.columns()];
+                    layout.newEncoder().encode(info, 0, word, 0);
+                    assertTrue(h.isCodeword(word, 0), code + " k " + k);
                 }
             }
         }
+        assertArrayEquals(new int[] {0, 0, 453, 816}, secondRoundSizes);
+    }
+
+    /**
+     * The puncturing rule at its most, two rounds of mb − 1 bits, at every lifting size the family
+     * uses (from Z = ⌈64 / kb⌉ ≥ 4): each check still sees at most one punctured bit. One bit more,
+     * or a second round below Z = 4 (where ⌊qZ/4⌋, q = 0 … 3, are no longer distinct), is refused.
+     */
+    @Test
+    void twoRoundsOfPuncturingLeaveOnePuncturedBitPerCheck() {
+        for (LdpcFamily code : LdpcFamily.values()) {
+            int kb = code.infoColumns();
+            int mb = LdpcFamily.BASE_COLUMNS - kb;
+            int middle = code.protograph().middleRow();
+            int smallest = code.lifting(LdpcFamily.MIN_INFO_BITS);
+            assertTrue(smallest >= 4, code + " Z " + smallest);
+            for (int z = smallest; z <= code.lifting(LdpcFamily.MAX_INFO_BITS); z++) {
+                int k = kb * z;
+                CodeLayout layout = new LiftedLayout(code.baseMatrix(z), middle, k, k + mb * z - 2 * (mb - 1));
+                assertEquals(2 * (mb - 1), puncturedBits(layout, z, code + " Z " + z));
+            }
+            int k = kb * smallest;
+            assertThrows(IllegalArgumentException.class, () -> new LiftedLayout(code.baseMatrix(smallest), middle, k,
+                    k + mb * smallest - 2 * (mb - 1) - 1));
+            assertThrows(IllegalArgumentException.class, () -> new LiftedLayout(code.baseMatrix(3), middle, 3 * kb,
+                    3 * kb + 3 * mb - mb));
+            new LiftedLayout(code.baseMatrix(3), middle, 3 * kb, 3 * kb + 3 * mb - (mb - 1));
+        }
+    }
+
+    /**
+     * Checks a layout's sent columns (ascending, every information bit sent) and its punctured bits:
+     * parity bits of degree 2 outside parity column 0, no check with two of them, so each is
+     * recovered from either of its checks in the first iteration (J. Ha, J. Kim, S. W. McLaughlin,
+     * IEEE Trans. Inf. Theory 50(11), 2004; from memory). Returns how many are punctured.
+     */
+    private static int puncturedBits(CodeLayout layout, int z, String what) {
+        ParityCheckMatrix h = layout.matrix();
+        int k = layout.infoBits();
+        boolean[] isSent = new boolean[h.columns()];
+        for (int p = 0; p < layout.sentBits(); p++) {
+            int c = layout.sentColumn(p);
+            assertTrue(p == 0 || c > layout.sentColumn(p - 1), "ascending, distinct");
+            isSent[c] = true;
+        }
+        for (int t = 0; t < k; t++) {
+            assertEquals(t, layout.infoColumn(t));
+            assertTrue(isSent[t], "information bits are sent");
+        }
+        int[] puncturedPerCheck = new int[h.rows()];
+        int punctured = 0;
+        for (int c = 0; c < h.columns(); c++) {
+            if (!isSent[c]) {
+                punctured++;
+                assertTrue(c >= k + z, "not in parity column 0");
+                assertEquals(2, h.columnDegree(c));
+                for (int p = 0; p < 2; p++) {
+                    assertTrue(++puncturedPerCheck[h.columnEntry(c, p)] < 2, what);
+                }
+            }
+        }
+        assertEquals(h.columns() - layout.sentBits(), punctured);
+        return punctured;
     }
 
     @Test
