@@ -15,6 +15,6 @@ public record AwgnChannel() implements ChannelModel {
 
     @Override
     public String describe() {
-        return name();
+        return "AWGN (no fading, h = 1)";
     }
 }

@@ -178,12 +178,13 @@ public record LinkSettings(Modulation modulation, SpaceTimeCode code, int receiv
 
     /** One line for tables and file headers. */
     public String describe() {
-        String coherence = coherenceSlots == 0 || coherenceSlots >= slotsPerFrame()
-                ? "one fading block per frame"
-                : effectiveCoherenceSlots() + " slots per fading block (" + fadingBlocksPerFrame() + " per frame)";
+        String coherence = channel.awgn() ? ""
+                : coherenceSlots == 0 || coherenceSlots >= slotsPerFrame()
+                ? ", one fading block per frame"
+                : ", " + effectiveCoherenceSlots() + " slots per fading block (" + fadingBlocksPerFrame() + " per frame)";
         String dec = code.isOrthogonal() ? "" : ", " + equaliser.cliName() + " decoder";
         String fec = coding.coded() ? ", " + coding.describe() : "";
-        return String.format(java.util.Locale.ROOT, "%s %dx%d, %s, %s, %d bits/frame (%d symbols, %d slots), %s%s%s",
+        return String.format(java.util.Locale.ROOT, "%s %dx%d, %s, %s, %d bits/frame (%d symbols, %d slots)%s%s%s",
                 code.name(), transmitAntennas, receiveAntennas, modulation.cliName(), channel.describe(),
                 frameBits, symbolsPerFrame(), slotsPerFrame(), coherence, dec, fec);
     }

@@ -104,6 +104,8 @@ public final class FerPlot {
     static final String BER_AXIS_TITLE = "BER (not comparable with outage)";
     static final String STYLE_WORDS = "simulated: solid lines with markers   ·   outage bounds: broken lines"
             + "   ·   grey line: target FER";
+    /** The style line of a plot without outage bounds. */
+    static final String STYLE_WORDS_NO_BOUNDS = "simulated: solid lines with markers   ·   grey line: target FER";
     static final String NORMAL_APPROX_WORDS =
             "AWGN finite-length limit (normal approximation): orange dash-dot-dot line";
 
@@ -250,7 +252,7 @@ public final class FerPlot {
                 : String.format(Locale.ROOT, "bars: %s %% confidence intervals   ·   %s", Numbers.db(100 * confidence),
                         link.channel().awgn() ? "no outage bounds over AWGN" : RunSummary.NO_BOUNDS);
         chart.addSubtitle(textLine(sub, RUN_FONT, new Color(0x444444), 6));
-        chart.addSubtitle(textLine(STYLE_WORDS, RUN_FONT, new Color(0x444444), 0));
+        chart.addSubtitle(textLine(bounds != null ? STYLE_WORDS : STYLE_WORDS_NO_BOUNDS, RUN_FONT, new Color(0x444444), 0));
         if (normal.isPresent()) {
             chart.addSubtitle(textLine(NORMAL_APPROX_WORDS, RUN_FONT, new Color(0x444444), 0));
         }

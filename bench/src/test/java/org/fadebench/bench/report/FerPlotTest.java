@@ -255,6 +255,8 @@ class FerPlotTest {
         assertTrue(subtitles(chart).contains(FerPlot.NORMAL_APPROX_WORDS));
         assertTrue(subtitles(chart).contains("bars: 95 % confidence intervals   ·   no outage bounds over AWGN"),
                 "an AWGN link has no outage bounds, and the plot says so: " + subtitles(chart));
+        assertTrue(subtitles(chart).contains(FerPlot.STYLE_WORDS_NO_BOUNDS) && !subtitles(chart).contains(FerPlot.STYLE_WORDS),
+                "and its style line names no broken lines of bounds: " + subtitles(chart));
         assertTrue(panels(chart(sweep(), FerPlot.Axes.AUTOMATIC)).get(0).getDataset(3) == null);
         assertFalse(subtitles(chart(sweep(), FerPlot.Axes.AUTOMATIC)).contains(FerPlot.NORMAL_APPROX_WORDS));
     }
