@@ -44,9 +44,7 @@ final class FixedPointDecoder extends RowDecoder {
     /** The most |R|, in steps. */
     static final int MESSAGE_LIMIT = 4095;
 
-    private final boolean normalised;
-    private final int factor;
-    private final int offset;
+    private final MinSumLoops.Correction correction;
     private final int[][] channel;
     private final int[][] posterior;
     private final int[][] check;
@@ -63,12 +61,7 @@ final class FixedPointDecoder extends RowDecoder {
 
     FixedPointDecoder(ParityCheckMatrix h, LdpcDecoding decoding, int lanes) {
         super(h, decoding, lanes);
-        if (decoding.algorithm() == LdpcAlgorithm.SUM_PRODUCT) {
-            throw new IllegalArgumentException("sum-product runs in floating point only");
-        }
-        normalised = decoding.algorithm() == LdpcAlgorithm.MIN_SUM;
-        factor = (int) Math.round(decoding.correction() * 16);
-        offset = (int) Math.round(decoding.correction() * SCALE);
+        correction = MinSumLoops.Correction.of(decoding);
         channel = new int[columns][lanes];
         posterior = new int[columns][lanes];
         check = new int[edgeColumn.length][lanes];
@@ -186,11 +179,7 @@ final class FixedPointDecoder extends RowDecoder {
         for (int e = from; e < to; e++) {
             MinSumLoops.subtractAndMinima(posterior[edgeColumn[e]], check[e], parity, least, second, n);
         }
-        if (normalised) {
-            MinSumLoops.scale(least, second, parity, leastOut, gap, factor, n);
-        } else {
-            MinSumLoops.lessOffset(least, second, parity, leastOut, gap, offset, n);
-        }
+        correction.apply(least, second, parity, leastOut, gap, n);
         for (int e = from; e < to; e++) {
             MinSumLoops.scatter(posterior[edgeColumn[e]], check[e], least, leastOut, gap, n);
         }

@@ -19,6 +19,33 @@ final class MinSumLoops {
     }
 
     /**
+     * A min-sum decoding's correction in steps, and the loop that applies it: the normalisation
+     * factor α as a multiple of 1/16 ({@link #scale}), or the offset β as a multiple of a step
+     * ({@link #lessOffset}).
+     */
+    record Correction(boolean normalised, int amount) {
+
+        /** @throws IllegalArgumentException for sum-product, which has no fixed-point kernel */
+        static Correction of(LdpcDecoding decoding) {
+            if (decoding.algorithm() == LdpcAlgorithm.SUM_PRODUCT) {
+                throw new IllegalArgumentException("sum-product runs in floating point only");
+            }
+            boolean normalised = decoding.algorithm() == LdpcAlgorithm.MIN_SUM;
+            int amount = (int) Math.round(decoding.correction() * (normalised ? 16 : FixedPointDecoder.SCALE));
+            return new Correction(normalised, amount);
+        }
+
+        /** The minima corrected, into {@code leastOut} and {@code gap} (see {@link #scale} and {@link #lessOffset}). */
+        void apply(int[] least, int[] second, int[] sign, int[] leastOut, int[] gap, int len) {
+            if (normalised) {
+                scale(least, second, sign, leastOut, gap, amount, len);
+            } else {
+                lessOffset(least, second, sign, leastOut, gap, amount, len);
+            }
+        }
+    }
+
+    /**
      * r = Q = p − r, and the sign parity, the least and the second least |Q| updated (one loop:
      * Math.abs on ints vectorises, Math.min and Math.max do not, so the minima use sign masks).
      */

@@ -42,9 +42,7 @@ final class QcDecoder extends LayeredDecoder {
     private final int[] blockColumn;
     private final int[] blockShift;
     private final int[] slot;
-    private final boolean normalised;
-    private final int factor;
-    private final int offset;
+    private final MinSumLoops.Correction correction;
     private final int[][] channel;
     private final int[][] decided;
     private final int[] posterior;
@@ -66,9 +64,6 @@ final class QcDecoder extends LayeredDecoder {
 
     QcDecoder(QcStructure qc, LdpcDecoding decoding, int lanes) {
         super(qc.columns(), decoding, lanes);
-        if (decoding.algorithm() == LdpcAlgorithm.SUM_PRODUCT) {
-            throw new IllegalArgumentException("sum-product runs in floating point only");
-        }
         QcBaseMatrix base = qc.base();
         lifting = base.lifting();
         slice = lifting * WIDTH;
@@ -91,9 +86,7 @@ final class QcDecoder extends LayeredDecoder {
         for (int c = 0; c < columns; c++) {
             slot[c] = qc.position(c) * WIDTH;
         }
-        normalised = decoding.algorithm() == LdpcAlgorithm.MIN_SUM;
-        factor = (int) Math.round(decoding.correction() * 16);
-        offset = (int) Math.round(decoding.correction() * FixedPointDecoder.SCALE);
+        correction = MinSumLoops.Correction.of(decoding);
         int groups = groups(lanes);
         int frame = baseColumns * slice;
         channel = new int[groups][frame];
@@ -179,8 +172,9 @@ final class QcDecoder extends LayeredDecoder {
             Arrays.fill(active, false);
             Arrays.fill(active, 0, n, true);
             Arrays.fill(done, 0);
-            for (int running = n; running > 0; running -= iterate(g, null)) {
-                // each pass is one iteration of the running lanes
+            int running = n;
+            while (running > 0) {
+                running -= iterate(g, null);
             }
         }
         decodedLanes = frames;
@@ -309,11 +303,7 @@ final class QcDecoder extends LayeredDecoder {
             rotateIn(b);
             MinSumLoops.subtractAndMinima(rotated, check[b], parity, least, second, slice);
         }
-        if (normalised) {
-            MinSumLoops.scale(least, second, parity, leastOut, gap, factor, slice);
-        } else {
-            MinSumLoops.lessOffset(least, second, parity, leastOut, gap, offset, slice);
-        }
+        correction.apply(least, second, parity, leastOut, gap, slice);
         for (int b = blockStart[i]; b < blockStart[i + 1]; b++) {
             MinSumLoops.scatter(rotated, check[b], least, leastOut, gap, slice);
             rotateOut(b);
