@@ -14,7 +14,7 @@ import picocli.CommandLine.Command;
             "Outputs: run writes " + FadebenchCli.RUN_OUTPUTS + " into its --out folder, with checkpoint.json while it"
                 + " runs, the --trace-out file and the --archive file when asked; bounds writes bounds.csv; demo"
                 + " writes a run's outputs per sensor."},
-        subcommands = {RunCommand.class, BoundsCommand.class, CodesCommand.class, DemoCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {RunCommand.class, StudyCommand.class, CompareCommand.class, BoundsCommand.class, CodesCommand.class, DemoCommand.class, CommandLine.HelpCommand.class})
 public final class FadebenchCli implements Runnable {
 
     /** The files every {@code run} writes, for the help texts. */
@@ -80,7 +80,7 @@ public final class FadebenchCli implements Runnable {
     @Override
     public void run() {
         throw new CommandLine.ParameterException(spec.commandLine(),
-                "choose a command: run, bounds, codes, demo (or --help)");
+                "choose a command: run, study, compare, bounds, codes, demo (or --help)");
     }
 
     /** The project version, as the build recorded it. */

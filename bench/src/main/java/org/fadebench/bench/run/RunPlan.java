@@ -134,6 +134,20 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
                 v.flag(QUIET), bounds, targetFer, traceOut, traceOutBlocks, axes, warnings(link));
     }
 
+    /**
+     * The same run on {@code workers} threads, its {@code threads} setting left as it was: a
+     * study gives its thread count to every design this way, so that the scenario each design
+     * writes names none and is the same on any machine (threads change no number).
+     */
+    public RunPlan onThreads(int workers) {
+        if (workers <= 0 || workers > 1024) {
+            throw new InvalidSettingException(THREADS, "must be between 1 and 1024, got " + workers);
+        }
+        requireHeap(link, workers, traceOut == null ? 0 : traceOutBlocks);
+        return new RunPlan(values, source, link, snrDb, rules, seed, workers, confidence, outDir, archive, quiet, bounds,
+                targetFer, traceOut, traceOutBlocks, plotAxes, warnings);
+    }
+
     /** What the user should know before trusting the results: a decoder that is not ML, CSI that is meaningless. */
     private static List<String> warnings(LinkSettings link) {
         List<String> w = new ArrayList<>();

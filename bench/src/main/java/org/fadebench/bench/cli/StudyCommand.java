@@ -1,0 +1,99 @@
+package org.fadebench.bench.cli;
+
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.fadebench.bench.report.FerPlot;
+import org.fadebench.bench.scenario.ScenarioException;
+import org.fadebench.bench.settings.InvalidSettingException;
+import org.fadebench.bench.settings.RunSettings;
+import org.fadebench.bench.settings.SettingValues;
+import org.fadebench.bench.study.StudyFile;
+import org.fadebench.bench.study.StudyLoader;
+import org.fadebench.bench.study.StudyPlan;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/**
+ * {@code fadebench study FILE [--out DIR] [--resume] [--threads N] [--x-axis snr|ebn0]}: several
+ * designs from one study file, one after another on all threads, each into {@code DIR/<design>/}
+ * as {@code run} writes it, then ranked in study.csv and study.json.
+ */
+@Command(name = "study", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Run several designs from one study file (the scenario sections as common settings, plus "
+                + "designs: and/or vary:), each into DIR/<design>/ as run writes it; rank them against the target FER "
+                + "in study.csv and study.json.", "See README, Design studies."})
+final class StudyCommand implements Callable<Integer> {
+
+    @Parameters(paramLabel = "FILE", description = "The study file (YAML).")
+    Path file;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Folder of the study (default: the file's output.folder, "
+            + "else fadebench-study).")
+    String out;
+
+    @Option(names = "--resume", description = "Continue an interrupted study: finished designs are kept, the one "
+            + "interrupted continues from its checkpoint.")
+    boolean resume;
+
+    @Option(names = "--threads", paramLabel = "N", description = "Worker threads of every design (default: all cores).")
+    Integer threads;
+
+    @Option(names = "--x-axis", paramLabel = "NAME", description = "X axis of the designs' plots: snr, ebn0.")
+    String xAxis;
+
+    @Option(names = "--overwrite", description = "Replace the results of other runs in the designs' folders.")
+    boolean overwrite;
+
+    @Option(names = "--quiet", description = "Print nothing but errors and the ranking.")
+    boolean quiet;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        StudyFile study;
+        try {
+            study = StudyLoader.load(file);
+        } catch (ScenarioException e) {
+            throw new InvalidInputException(e.getMessage());
+        }
+        SettingValues given = SettingValues.empty();
+        if (xAxis != null) {
+            try {
+                FerPlot.XQuantity.fromCliName(xAxis);
+            } catch (IllegalArgumentException e) {
+                throw new InvalidInputException("--x-axis: " + e.getMessage());
+            }
+            given = given.with(RunSettings.PLOT_X, xAxis, SettingValues.Origin.COMMAND_LINE);
+        }
+        if (overwrite) {
+            given = given.with(RunSettings.OVERWRITE, "true", SettingValues.Origin.COMMAND_LINE);
+        }
+        if (quiet) {
+            given = given.with(RunSettings.QUIET, "true", SettingValues.Origin.COMMAND_LINE);
+        }
+        String dir = out != null ? out : study.common().isSet(RunSettings.FOLDER) ? study.common().text(RunSettings.FOLDER)
+                : "fadebench-study";
+        StudyRunner runner = new StudyRunner(plan(study, Path.of(SweepJob.checkOutDir(dir).toString()), threads, given),
+                resume, spec.commandLine().getOut(), spec.commandLine().getErr());
+        runner.checkBeforeRun(file);
+        return runner.run();
+    }
+
+    /** The checked study; an invalid design becomes invalid input naming the file, line and key. */
+    static StudyPlan plan(StudyFile study, Path dir, Integer threads, SettingValues given) {
+        if (threads != null && (threads < 1 || threads > 1024)) {
+            throw new InvalidInputException("--threads must be between 1 and 1024, got " + threads);
+        }
+        try {
+            return StudyPlan.of(study, dir, threads, given);
+        } catch (ScenarioException e) {
+            throw new InvalidInputException(e.getMessage());
+        } catch (InvalidSettingException e) {
+            throw new InvalidInputException(study.common().locate(e.setting(), e.problem()));
+        }
+    }
+}
