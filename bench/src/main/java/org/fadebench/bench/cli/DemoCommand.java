@@ -11,7 +11,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
-import org.fadebench.bench.settings.RunSettings;
 import org.fadebench.bench.settings.SettingValues;
 import org.fadebench.bench.study.DesignRow;
 import org.fadebench.bench.study.StudyFile;
@@ -58,10 +57,9 @@ final class DemoCommand implements Callable<Integer> {
         StudyFile study = StudyLoader.parse("built-in demo study.yaml", resource("study.yaml"));
         w.println("Demo: a hilltop gateway sends 256-bit QPSK telemetry frames (rate-1/2 convolutional code) to field");
         w.println("sensors through slow (per-frame) Rayleigh fading. Three designs: " + designNames(study) + ".");
-        // the demo replaces its own earlier output, so that it can be run again and again
-        SettingValues given = SettingValues.empty().with(RunSettings.OVERWRITE, "true", SettingValues.Origin.COMMAND_LINE);
-        StudyRunner runner = new StudyRunner(StudyCommand.plan(study, dir, threads, given), false, w,
-                spec.commandLine().getErr());
+        // the demo replaces its own earlier output (overwrite), so that it can be run again and again
+        StudyRunner runner = new StudyRunner(StudyCommand.plan(study, dir, threads, false, SettingValues.empty()), false,
+                true, w, spec.commandLine().getErr());
         runner.checkBeforeRun(null);
         int code = runner.run();
         if (code != ExitCodes.OK) {

@@ -69,27 +69,21 @@ final class StudyCommand implements Callable<Integer> {
             }
             given = given.with(RunSettings.PLOT_X, xAxis, SettingValues.Origin.COMMAND_LINE);
         }
-        if (overwrite) {
-            given = given.with(RunSettings.OVERWRITE, "true", SettingValues.Origin.COMMAND_LINE);
-        }
-        if (quiet) {
-            given = given.with(RunSettings.QUIET, "true", SettingValues.Origin.COMMAND_LINE);
-        }
         String dir = out != null ? out : study.common().isSet(RunSettings.FOLDER) ? study.common().text(RunSettings.FOLDER)
                 : "fadebench-study";
-        StudyRunner runner = new StudyRunner(plan(study, Path.of(SweepJob.checkOutDir(dir).toString()), threads, given),
-                resume, spec.commandLine().getOut(), spec.commandLine().getErr());
+        StudyRunner runner = new StudyRunner(plan(study, SweepJob.checkOutDir(dir), threads, quiet, given),
+                resume, overwrite, spec.commandLine().getOut(), spec.commandLine().getErr());
         runner.checkBeforeRun(file);
         return runner.run();
     }
 
     /** The checked study; an invalid design becomes invalid input naming the file, line and key. */
-    static StudyPlan plan(StudyFile study, Path dir, Integer threads, SettingValues given) {
+    static StudyPlan plan(StudyFile study, Path dir, Integer threads, boolean quiet, SettingValues given) {
         if (threads != null && (threads < 1 || threads > 1024)) {
             throw new InvalidInputException("--threads must be between 1 and 1024, got " + threads);
         }
         try {
-            return StudyPlan.of(study, dir, threads, given);
+            return StudyPlan.of(study, dir, threads, quiet, given);
         } catch (ScenarioException e) {
             throw new InvalidInputException(e.getMessage());
         } catch (InvalidSettingException e) {

@@ -10,6 +10,8 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import org.fadebench.bench.report.Checkpoint;
+import org.fadebench.bench.run.RunPlan;
+import org.fadebench.bench.settings.RunSettings;
 import org.fadebench.bench.study.DesignRow;
 import org.fadebench.bench.study.Screening;
 import org.fadebench.bench.study.StudyOutputs;
@@ -26,14 +28,17 @@ final class StudyRunner {
 
     private final StudyPlan plan;
     private final boolean resume;
+    private final boolean overwrite;
     private final PrintWriter out;
     private final PrintWriter err;
     /** The ranking, once {@link #run} has finished every design. */
     private StudyTable table;
 
-    StudyRunner(StudyPlan plan, boolean resume, PrintWriter out, PrintWriter err) {
+    /** @param overwrite replace other runs' results in the designs' folders (the study's --overwrite) */
+    StudyRunner(StudyPlan plan, boolean resume, boolean overwrite, PrintWriter out, PrintWriter err) {
         this.plan = plan;
         this.resume = resume;
+        this.overwrite = overwrite;
         this.out = out;
         this.err = err;
     }
@@ -47,7 +52,10 @@ final class StudyRunner {
     void checkBeforeRun(Path studyFile) {
         SweepJob.checkOutDir(plan.dir().toString());
         for (StudyPlan.Entry e : plan.designs()) {
-            RunOutputs.checkBeforeRun(e.plan(), studyFile, resume);
+            RunPlan p = e.plan();
+            String text = p.scenarioText();
+            RunOutputs.checkDistinct(RunOutputs.inputs(p, studyFile), RunOutputs.outputs(p), text);
+            RunOutputs.checkFolderReuse(p.outDir(), overwrite || p.values().flag(RunSettings.OVERWRITE), resume, text);
         }
     }
 

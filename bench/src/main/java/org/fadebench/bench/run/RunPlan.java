@@ -135,11 +135,12 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     }
 
     /**
-     * The same run on {@code workers} threads, its {@code threads} setting left as it was: a
-     * study gives its thread count to every design this way, so that the scenario each design
-     * writes names none and is the same on any machine (threads change no number).
+     * The same run on {@code workers} threads, printing nothing but errors when {@code quiet}, its
+     * settings left as they were: a study gives its thread count and its quietness to every design
+     * this way, so that the scenario each design writes names neither (neither changes a number)
+     * and is the same on any machine and however the study is run.
      */
-    public RunPlan onThreads(int workers) {
+    public RunPlan onThreads(int workers, boolean quiet) {
         if (workers <= 0 || workers > 1024) {
             throw new InvalidSettingException(THREADS, "must be between 1 and 1024, got " + workers);
         }

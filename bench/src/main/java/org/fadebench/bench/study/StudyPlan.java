@@ -11,8 +11,8 @@ import org.fadebench.bench.settings.SettingValues;
 
 /**
  * A checked study: one {@link RunPlan} per design, each writing into {@code DIR/<design>/} exactly
- * what {@code run} writes, on the study's thread count, with the thread count kept out of its
- * settings (so each design's scenario.yaml is the same on any machine). A design of {@code designs:}
+ * what {@code run} writes, on the study's thread count, with the thread count and quietness kept
+ * out of its settings (so each design's scenario.yaml is the same on any machine). A design of {@code designs:}
  * that is invalid is refused; a combination of {@code vary:} that is impossible is skipped with its
  * reason, unless a value is used by no design at all or no design is left.
  *
@@ -44,13 +44,15 @@ public record StudyPlan(StudyFile file, Path dir, int threads, List<Entry> desig
      *
      * @param dir       the study's folder
      * @param threads   worker threads, or null for the study file's {@code sweep.threads} or all cores
-     * @param overrides values given on the command line over the common settings (e.g. {@code --seed}), or empty
+     * @param quiet     print nothing but errors (and the ranking), whatever the file says
+     * @param overrides values given on the command line over the common settings (e.g. the plots' x axis), or empty
      */
-    public static StudyPlan of(StudyFile file, Path dir, Integer threads, SettingValues overrides) {
+    public static StudyPlan of(StudyFile file, Path dir, Integer threads, boolean quiet, SettingValues overrides) {
         SettingValues common = file.common().overlaidBy(overrides);
         int workers = threads != null ? threads
                 : common.isSet(RunSettings.THREADS) ? common.integer(RunSettings.THREADS)
                 : Runtime.getRuntime().availableProcessors();
+        boolean silent = quiet || common.flag(RunSettings.QUIET);
         common = common.with(RunSettings.THREADS, null, null);
         List<Entry> designs = new ArrayList<>();
         List<Skipped> skipped = new ArrayList<>();
@@ -59,7 +61,7 @@ public record StudyPlan(StudyFile file, Path dir, int threads, List<Entry> desig
                     dir.resolve(d.name()).toString(), SettingValues.Origin.DERIVED);
             String problem;
             try {
-                designs.add(new Entry(d, RunPlan.from(values, file.source()).onThreads(workers)));
+                designs.add(new Entry(d, RunPlan.from(values, file.source()).onThreads(workers, silent)));
                 continue;
             } catch (InvalidSettingException e) {
                 problem = values.locate(e.setting(), e.problem());
