@@ -8,12 +8,13 @@ import org.fadebench.bench.report.ToolVersion;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
-/** The {@code fadebench} command: {@code run}, {@code bounds}, {@code codes}, {@code demo}. */
+/** The {@code fadebench} command: {@code run}, {@code study}, {@code compare}, {@code bounds}, {@code codes}, {@code demo}. */
 @Command(name = "fadebench", mixinStandardHelpOptions = true, versionProvider = FadebenchCli.Version.class,
         description = {"Monte Carlo link-level bench for multi-antenna diversity links over block fading.",
             "Outputs: run writes " + FadebenchCli.RUN_OUTPUTS + " into its --out folder, with checkpoint.json while it"
-                + " runs, the --trace-out file and the --archive file when asked; bounds writes bounds.csv; demo"
-                + " writes a run's outputs per sensor."},
+                + " runs, the --trace-out file and the --archive file when asked; study writes a run's outputs per"
+                + " design into DIR/<design>/ and study.csv and study.json into DIR; compare writes study.csv and"
+                + " study.json with --out; bounds writes bounds.csv; demo runs a built-in study."},
         subcommands = {RunCommand.class, StudyCommand.class, CompareCommand.class, BoundsCommand.class, CodesCommand.class, DemoCommand.class, CommandLine.HelpCommand.class})
 public final class FadebenchCli implements Runnable {
 

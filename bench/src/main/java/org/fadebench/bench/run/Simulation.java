@@ -28,7 +28,7 @@ import org.fadebench.bench.sweep.SweepOutcome;
  *         "sweep.snr_db", "0..20/2", "sweep.seed", 7))
  *     .run(p -> System.out.println("point " + (p.point() + 1) + " of " + p.points()));
  * r.points().forEach(p -> System.out.println(p.snrDb() + " dB: FER " + p.counts().fer()));
- * System.out.println(r.summary().snrDbAtTarget());
+ * System.out.println(r.summary().snrDbAtTarget().orElse(Double.NaN));
  * }</pre>
  *
  * A study's designs run the same way, each from its plan:
