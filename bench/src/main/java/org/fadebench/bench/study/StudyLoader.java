@@ -184,6 +184,10 @@ public final class StudyLoader {
             throw new ScenarioException(name + " line " + line + ", key designs.name: a design name is 1 to 64 "
                     + "letters, digits or . _ + - (it names the design's folder), got '" + designName + "'");
         }
+        if (designName.equals(StudyOutputs.CSV) || designName.equals(StudyOutputs.JSON)) {
+            throw new ScenarioException(name + " line " + line + ", key designs.name: '" + designName + "' is the name "
+                    + "of the study's own file; give the design another name");
+        }
     }
 
     /** Every design crossed with every combination of the grid's values, named from them. */

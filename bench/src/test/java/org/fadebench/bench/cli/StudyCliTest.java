@@ -15,7 +15,6 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
 import org.fadebench.bench.report.Numbers;
 import org.junit.jupiter.api.Test;
@@ -204,28 +203,15 @@ class StudyCliTest {
                   - name: long
                     link: {code: alamouti, modulation: 16qam, frame_bits: 256}
                 """;
-        Path f = file("cut.yaml", text);
         Path straight = tmp.resolve("straight");
         Path cut = tmp.resolve("interrupted");
-        String longErrors = "60000";
-        Path longFile = file("cut-long.yaml", text.replace("  seed: 21", "  seed: 21\n  min_errors: " + longErrors));
+        Path longFile = file("cut.yaml", text.replace("  seed: 21", "  seed: 21\n  min_errors: 60000"));
         assertEquals(0, study(longFile, straight, "--threads", "1").code());
 
-        List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-cp", System.getProperty("java.class.path"), FadebenchCli.class.getName(), "study", longFile.toString(),
-                "--out", cut.toString(), "--threads", "1"));
-        Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(tmp.resolve("cut.log").toFile())
-                .start();
         Path checkpoint = cut.resolve("long").resolve("checkpoint.json");
-        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
-        while (!Files.exists(checkpoint) && p.isAlive() && System.nanoTime() < deadline) {
-            Thread.sleep(20);
-        }
-        boolean running = p.isAlive();
-        p.destroy(); // SIGTERM on Unix
-        assertTrue(p.waitFor(30, TimeUnit.SECONDS), "the process stops");
+        Process p = InterruptResumeTest.terminatedOnceWritten(List.of("study", longFile.toString(), "--out",
+                cut.toString(), "--threads", "1"), checkpoint, tmp.resolve("cut.log"));
         String log = Files.readString(tmp.resolve("cut.log"));
-        assertTrue(running, "still running when the second design's checkpoint appeared: " + log);
         assertEquals(143, p.exitValue(), log);
         assertTrue(log.contains("run the same command with --resume"), log);
         assertTrue(Files.exists(cut.resolve("quick").resolve("results.csv")), "the finished design is kept");
@@ -235,7 +221,6 @@ class StudyCliTest {
         assertEquals(0, resumed.code(), resumed.err());
         assertSameFiles(straight, cut);
         assertFalse(Files.exists(checkpoint));
-        assertTrue(f.toFile().exists());
     }
 
     /** Bad study files: one line naming the file, line and key, exit 2, nothing written. */
