@@ -44,12 +44,22 @@ import org.fadebench.bench.analysis.TargetCrossing;
  * @param gapNote            why a gap is undefined, or null
  * @param frames             frames simulated over all points (the points' counts)
  * @param seconds            the run's wall-clock seconds (timing)
+ * @param curve              the run's points, for a figure of every design's FER
  */
 public record DesignRow(String design, Path folder, String version, String snrConvention, long seed, String link,
                         double targetFer, double bitsPerChannelUse, double snrDbAtTarget, double snrDbLow,
                         double snrDbHigh, String targetNote, double lowestSnrDb, double highestSnrDb,
                         boolean ferBelowAtLowest, double diversityOrder, Map<Bound, Double> gapDb,
-                        Map<Bound, String> gapNote, long frames, double seconds) {
+                        Map<Bound, String> gapNote, long frames, double seconds, Curve curve) {
+
+    /**
+     * A run's points in the order of its results.json: SNR, Eb/N0, FER and its interval, and the
+     * QAM-constrained outage bound at the same SNR (NaN where the run has none or a count does not
+     * resolve it).
+     */
+    public record Curve(double[] snrDb, double[] ebn0Db, double[] fer, double[] ferLow, double[] ferHigh,
+                        double[] qamOutage) {
+    }
 
     /** The file a row is read from. */
     public static final String RESULTS_JSON = "results.json";
@@ -102,6 +112,8 @@ public record DesignRow(String design, Path folder, String version, String snrCo
         double[] low = new double[n];
         double[] high = new double[n];
         double[] fer = new double[n];
+        double[] ebn0 = new double[n];
+        double[] qam = new double[n];
         long frames = 0;
         for (int i = 0; i < n; i++) {
             JsonNode p = points.get(i);
@@ -109,6 +121,8 @@ public record DesignRow(String design, Path folder, String version, String snrCo
             low[i] = number(p.path("fer_ci_low"));
             high[i] = number(p.path("fer_ci_high"));
             fer[i] = number(p.path("fer"));
+            ebn0[i] = p.path("ebn0_db").asDouble();
+            qam[i] = number(root.path("bounds").path("points").path(i).path("qam").path("value"));
             frames += p.path("frames").asLong();
         }
         int lowest = 0;
@@ -131,7 +145,7 @@ public record DesignRow(String design, Path folder, String version, String snrCo
                 or(TargetCrossing.interpolate(snr, low, target)), or(TargetCrossing.interpolate(snr, high, target)),
                 targetNote.isTextual() ? targetNote.asText() : null, snr[lowest], snr[highest],
                 fer[lowest] <= target, number(summary.path("diversity_order")), gaps, notes, frames,
-                root.path("timing").path("seconds").asDouble());
+                root.path("timing").path("seconds").asDouble(), new Curve(snr, ebn0, fer, low, high, qam));
     }
 
     private static double number(JsonNode n) {

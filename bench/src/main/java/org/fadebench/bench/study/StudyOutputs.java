@@ -35,10 +35,11 @@ public final class StudyOutputs {
             out.write('\n');
         });
         written.add(json);
-        // The one place for the study's figure and report: fer.png/fer.svg (every design's FER from
-        // its folder's results, the target and budget lines) and report.html (the ranking table of
-        // `table`, the figure, each design's settings and summary) are to be written here, from the
-        // same table and the designs' folders (table.rows().get(i).folder()).
+        // The one place for the study's figure and report: fer.png/fer.svg (every design's FER with its
+        // interval from table.rows().get(i).curve(), the target FER and table.budgetDb() as lines, the
+        // QAM-constrained bound curve().qamOutage() dashed when asked, SNR or Eb/N0 on the x axis) and
+        // report.html (the ranking of table.json(), the figure's SVG, each design's settings and summary
+        // from its folder table.rows().get(i).folder()) are to be written here.
         return written;
     }
 }

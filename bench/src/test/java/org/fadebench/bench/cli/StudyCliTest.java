@@ -17,6 +17,7 @@ import java.util.Map;
 import java.util.TreeMap;
 import java.util.stream.Stream;
 import org.fadebench.bench.report.Numbers;
+import org.fadebench.bench.study.DesignRow;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -376,6 +377,14 @@ class StudyCliTest {
                 frames += p.path("frames").asLong();
             }
             assertEquals(frames, row.path("frames").asLong());
+            // the points a figure draws are the run's own
+            DesignRow read = DesignRow.read("x", run);
+            for (int i = 0; i < results.path("points").size(); i++) {
+                JsonNode p = results.path("points").get(i);
+                assertEquals(p.path("fer").asDouble(), read.curve().fer()[i], 0.0);
+                assertEquals(p.path("fer_ci_high").asDouble(), read.curve().ferHigh()[i], 0.0);
+                assertEquals(p.path("ebn0_db").asDouble(), read.curve().ebn0Db()[i], 0.0);
+            }
             String line = csv.stream().filter(l -> l.contains("," + run.getFileName() + ",")).findFirst().orElseThrow();
             assertTrue(line.contains("," + Numbers.db(summary.path("snr_db_at_target").asDouble()) + ","), line);
         }
