@@ -7,7 +7,9 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.HashSet;
 import java.util.Locale;
+import java.util.Set;
 import org.fadebench.bench.analysis.Bound;
 import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundPoint;
@@ -178,7 +180,8 @@ public final class ComparisonPlot {
     /**
      * Writes {@link FerPlot#PNG_FILE} ({@value #WIDTH} x {@value #HEIGHT} pixels) and
      * {@link FerPlot#SVG_FILE} into {@code directory}, each atomically, and returns the drawing as an
-     * SVG element to embed in {@link HtmlReport}.
+     * SVG element to embed in {@link HtmlReport}. The designs need distinct names (the legend tells
+     * them apart by name); an empty list or a repeated name is an {@link IllegalArgumentException}.
      */
     public static String write(Path directory, List<Design> designs, Layout layout) throws IOException {
         JFreeChart chart = chart(designs, layout);
@@ -186,10 +189,19 @@ public final class ComparisonPlot {
                 directory.resolve(FerPlot.SVG_FILE), "compare-");
     }
 
-    /** The chart: dataset 0 the simulated FER (series i: design i), 1 the upper limits, 2 the bounds. */
+    /**
+     * The chart: dataset 0 the simulated FER (series i: design i), 1 the upper limits, 2 the bounds.
+     * Refuses an empty list and two designs of one name.
+     */
     static JFreeChart chart(List<Design> designs, Layout layout) {
         if (designs.isEmpty()) {
             throw new IllegalArgumentException("nothing to plot: no designs");
+        }
+        Set<String> names = new HashSet<>();
+        for (Design d : designs) {
+            if (!names.add(d.name())) {
+                throw new IllegalArgumentException("two designs are named '" + d.name() + "'; each needs its own name");
+            }
         }
         double floor = Double.isNaN(layout.floor()) ? PlotParts.floorBelow(lowest(designs)) : layout.floor();
         XYPlot plot = PlotParts.panel(FER_AXIS_TITLE, floor);

@@ -92,8 +92,8 @@ public final class HtmlReport {
      * @param keyNumbers its summary, name to value, in the order given (see {@link RunReport#keyNumbers})
      * @param settings   its settings as a scenario file's text (its scenario.yaml)
      */
-    public record Design(String name, Map<String, String> keyNumbers, String settings) {
-        public Design {
+    public record DesignSection(String name, Map<String, String> keyNumbers, String settings) {
+        public DesignSection {
             keyNumbers = Collections.unmodifiableMap(new LinkedHashMap<>(keyNumbers));
         }
     }
@@ -131,7 +131,7 @@ public final class HtmlReport {
      * @param figures the plots, in order
      * @param designs one section per design, in the table's order
      */
-    public record Report(String title, List<String> summary, Table table, List<Figure> figures, List<Design> designs,
+    public record Report(String title, List<String> summary, Table table, List<Figure> figures, List<DesignSection> designs,
                          Provenance provenance) {
         public Report {
             summary = List.copyOf(summary);
@@ -162,7 +162,7 @@ public final class HtmlReport {
                     .append("</figcaption>\n</figure>\n");
         }
         h.append("<h2>").append(r.designs().size() == 1 ? "Design" : "Designs").append("</h2>\n");
-        for (Design d : r.designs()) {
+        for (DesignSection d : r.designs()) {
             h.append("<section>\n<h3>").append(escape(d.name())).append("</h3>\n<table class=\"numbers\">\n");
             d.keyNumbers().forEach((k, v) -> h.append("<tr><th scope=\"row\">").append(escape(k)).append("</th>")
                     .append(cell(v)).append("</tr>\n"));

@@ -51,7 +51,7 @@ public final class RunReport {
         }
         List<HtmlReport.Figure> figures = svg == null ? List.of()
                 : List.of(new HtmlReport.Figure("FER and BER of the run (" + FerPlot.SVG_FILE + ")", svg));
-        HtmlReport.Design design = new HtmlReport.Design(FerPlot.title(link),
+        HtmlReport.DesignSection design = new HtmlReport.DesignSection(FerPlot.title(link),
                 keyNumbers(link, run.summary(), run.framesSimulated(), run.seconds()), settings);
         return new HtmlReport.Report("fadebench run: " + FerPlot.title(link), sentences,
                 points(run.results(), confidence), figures, List.of(design), provenance);

@@ -245,6 +245,9 @@ class ComparisonPlotTest {
                 () -> new Layout("t", XQuantity.SNR, 1.5, Double.NaN, false, 0.95, Double.NaN));
         assertEquals("target FER must be in (0, 1), e.g. 0.01, got 1.5", e.getMessage());
         assertThrows(IllegalArgumentException.class, () -> chart(List.of(), layout(XQuantity.SNR, 1, false)));
+        Design d = designs().get(0);
+        e = assertThrows(IllegalArgumentException.class, () -> chart(List.of(d, d), layout(XQuantity.SNR, 1, false)));
+        assertEquals("two designs are named '1x2 combining'; each needs its own name", e.getMessage());
     }
 
     private static JFreeChart chart(List<Design> designs, Layout layout) {

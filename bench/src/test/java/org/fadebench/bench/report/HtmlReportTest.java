@@ -30,7 +30,7 @@ class HtmlReportTest {
         String svg = ComparisonPlot.write(dir, designs, new ComparisonPlot.Layout("Three designs", XQuantity.SNR, 0.01,
                 14, true, 0.95, Double.NaN));
         List<List<String>> rows = new ArrayList<>();
-        List<HtmlReport.Design> sections = new ArrayList<>();
+        List<HtmlReport.DesignSection> sections = new ArrayList<>();
         for (int i = 0; i < designs.size(); i++) {
             String name = designs.get(i).name();
             rows.add(List.of(Integer.toString(i + 1), name, Numbers.db(designs.get(i).bitsPerChannelUse()),
@@ -38,7 +38,7 @@ class HtmlReportTest {
             Map<String, String> numbers = new LinkedHashMap<>();
             numbers.put("SNR at FER 0.01", (7.5 + i) + " dB");
             numbers.put("note", HOSTILE);
-            sections.add(new HtmlReport.Design(name, numbers, "link:\n  rx: " + (i + 1) + "\n# " + HOSTILE + "\n"));
+            sections.add(new HtmlReport.DesignSection(name, numbers, "link:\n  rx: " + (i + 1) + "\n# " + HOSTILE + "\n"));
         }
         return new HtmlReport.Report("Study <of> three & more", List.of("Alamouti 2x1 needs 3.01 dB more than "
                 + "1x2 combining.", HOSTILE),
@@ -77,7 +77,7 @@ class HtmlReportTest {
         assertEquals(3, doc.select("section > h3").size());
         for (int i = 0; i < 3; i++) {
             Element section = doc.select("section").get(i);
-            HtmlReport.Design d = r.designs().get(i);
+            HtmlReport.DesignSection d = r.designs().get(i);
             assertEquals(d.name(), section.selectFirst("h3").text());
             assertEquals(d.settings(), section.selectFirst("pre").wholeText(), "settings verbatim");
             assertEquals(List.copyOf(d.keyNumbers().keySet()), section.select("th").eachText());
