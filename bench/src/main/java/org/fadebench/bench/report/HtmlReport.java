@@ -9,6 +9,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
@@ -16,7 +17,8 @@ import java.util.regex.Pattern;
  * inline SVG, no scripts, and no link to any other file, font or image. It shows a title, a few
  * computed sentences, one table (a study's ranking, one row per design; a run's points), the plots,
  * each design's key numbers and settings, and where the results came from. Every text is
- * HTML-escaped; the plots are SVG elements from {@link FerPlot#write} or {@link ComparisonPlot#write}.
+ * HTML-escaped; the plots are SVG elements from {@link FerPlot#write} or {@link ComparisonPlot#write},
+ * each given ids of its own in the page.
  *
  * <p>Fill a {@link Report} and call {@link #write}; {@link RunReport} does so for a single run.
  */
@@ -28,6 +30,9 @@ public final class HtmlReport {
     /** Cells right-aligned: a number, alone or followed by a space and more (a unit, an interval). */
     private static final Pattern NUMERIC = Pattern.compile("[-+−]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?(\\s.*)?",
             Pattern.DOTALL);
+
+    /** An {@code id='…'} or {@code id="…"} attribute. */
+    private static final Pattern ID = Pattern.compile("\\sid=(['\"])([^'\"]+)\\1");
 
     private static final String STYLE = String.join("\n",
             "body { font-family: sans-serif; color: #222; margin: 2em auto; max-width: 72em; padding: 0 1em;"
@@ -157,9 +162,10 @@ public final class HtmlReport {
             h.append("<p class=\"summary\">").append(escape(s)).append("</p>\n");
         }
         table(h, r.table());
-        for (Figure f : r.figures()) {
-            h.append("<figure>\n").append(f.svg().strip()).append("\n<figcaption>").append(escape(f.caption()))
-                    .append("</figcaption>\n</figure>\n");
+        for (int i = 0; i < r.figures().size(); i++) {
+            Figure f = r.figures().get(i);
+            h.append("<figure>\n").append(ownIds(f.svg().strip(), "figure" + (i + 1) + "-"))
+                    .append("\n<figcaption>").append(escape(f.caption())).append("</figcaption>\n</figure>\n");
         }
         h.append("<h2>").append(r.designs().size() == 1 ? "Design" : "Designs").append("</h2>\n");
         for (DesignSection d : r.designs()) {
@@ -178,6 +184,24 @@ public final class HtmlReport {
         definition(h, "command", p.commandLine());
         h.append("</dl>\n</body>\n</html>\n");
         return h.toString();
+    }
+
+    /**
+     * The SVG with {@code prefix} before each of its ids and each reference to them ({@code url(#id)},
+     * {@code href="#id"}): two plots drawn alike use the same ids, and in one page a reference finds
+     * the first element of its id, which may be the other plot's.
+     */
+    static String ownIds(String svg, String prefix) {
+        Matcher ids = ID.matcher(svg);
+        StringBuilder alternatives = new StringBuilder();
+        while (ids.find()) {
+            alternatives.append(alternatives.length() == 0 ? "" : "|").append(Pattern.quote(ids.group(2)));
+        }
+        if (alternatives.length() == 0) {
+            return svg;
+        }
+        return Pattern.compile("(\\sid=['\"]|url\\(#|href=['\"]#)(" + alternatives + ")(?=['\")])").matcher(svg)
+                .replaceAll(m -> Matcher.quoteReplacement(m.group(1) + prefix + m.group(2)));
     }
 
     private static void table(StringBuilder h, Table t) {

@@ -6,8 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.StringReader;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.xml.parsers.DocumentBuilderFactory;
@@ -40,7 +42,8 @@ public final class HtmlChecks {
      * Parses the page and checks it: an HTML5 doctype, no parse errors, every {@code <svg>} well-formed
      * XML on its own, nothing that runs code or reaches for another file, font or the network (no
      * loading elements, no reference attributes other than a fragment {@code #id}, no {@code url(}
-     * but to a fragment, no {@code @import} in CSS or attributes, no event-handler attributes). Returns the document.
+     * but to a fragment, no {@code @import} in CSS or attributes, every id once, every {@code url(#id)}
+     * of a plot to an element of that plot, no event-handler attributes). Returns the document.
      */
     public static Document selfContained(String html) throws Exception {
         assertTrue(html.startsWith("<!DOCTYPE html>"), "HTML5 doctype");
@@ -73,6 +76,17 @@ public final class HtmlChecks {
         }
         for (Element style : doc.select("style")) {
             noCssLoads(style.data());
+        }
+        Set<String> ids = new HashSet<>();
+        for (Element e : doc.select("[id]")) {
+            assertTrue(ids.add(e.id()), "id '" + e.id() + "' twice in the page");
+        }
+        for (Element svg : doc.select("svg")) {
+            Set<String> own = new HashSet<>(svg.select("[id]").eachAttr("id"));
+            Matcher refs = Pattern.compile("url\\(#([^)]+)\\)").matcher(svg.outerHtml());
+            while (refs.find()) {
+                assertTrue(own.contains(refs.group(1)), "url(#" + refs.group(1) + ") refers outside its <svg>");
+            }
         }
         return doc;
     }

@@ -89,6 +89,26 @@ class HtmlReportTest {
         assertEquals(List.of("tool", "seed", "Java", "date", "command"), doc.select("dt").eachText());
     }
 
+    /**
+     * Two plots drawn alike (here the same run's plot twice) use the same ids; in the page each gets
+     * its own, and every reference of each plot stays within it.
+     */
+    @Test
+    void twoPlotsKeepTheirOwnIds(@TempDir Path dir) throws Exception {
+        String svg = FerPlot.write(dir, FerPlotTest.LINK, 1, FerPlotTest.sweep(), 0.95, FerPlotTest.bounds(), 0.01,
+                FerPlot.Axes.AUTOMATIC);
+        assertTrue(svg.contains("id='fer-clip-0'") && svg.contains("url(#fer-clip-0)"), "ids as drawn");
+        HtmlReport.Figure figure = new HtmlReport.Figure("plot", svg);
+        HtmlReport.Report r = new HtmlReport.Report("two plots", List.of(), new HtmlReport.Table("t", List.of("a"),
+                List.of()), List.of(figure, figure), List.of(), new HtmlReport.Provenance("v", "1", "17", "d", "c"));
+        Document doc = HtmlChecks.selfContained(HtmlReport.html(r));
+        assertEquals(2, doc.select("svg").size());
+        assertEquals(1, doc.select("#figure1-fer-clip-0").size());
+        assertEquals(1, doc.select("#figure2-fer-clip-0").size());
+        assertThrows(Throwable.class, () -> HtmlChecks.selfContained(HtmlReport.html(r).replaceAll("figure[12]-", "")),
+                "the same page without its own ids fails the checks");
+    }
+
     /** A page that loads something fails the checks the report is held to: they can fail. */
     @Test
     void theChecksCatchWhatWouldLoad() {
