@@ -111,8 +111,10 @@ class HtmlReportTest {
 
     /** A page that loads something fails the checks the report is held to: they can fail. */
     @Test
-    void theChecksCatchWhatWouldLoad() {
+    void theChecksCatchWhatWouldLoad() throws Exception {
         String head = "<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\"><title>t</title></head><body>";
+        assertEquals("fine", HtmlChecks.selfContained(head + "<p><a href=\"#x\" id=\"x\">fine</a></p></body></html>")
+                .selectFirst("p").text(), "the same page without the bad part passes");
         for (String bad : List.of("<script>1</script>", "<img src=\"https://example.org/a.png\" alt=\"\">",
                 "<a href=\"other.html\">x</a>", "<p style=\"background: url(http://example.org/x)\">x</p>",
                 "<svg xmlns=\"http://www.w3.org/2000/svg\"><path d=\"M0 0\"></svg>",
