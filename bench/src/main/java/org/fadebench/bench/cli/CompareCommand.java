@@ -27,18 +27,25 @@ import picocli.CommandLine.Parameters;
  */
 @Command(name = "compare", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Rank finished runs side by side without simulating: each DIR is a run folder, or a study "
-                + "folder (its designs' folders are taken). Prints the ranking; with --out writes study.csv and "
-                + "study.json there."})
+                + "folder (its designs' folders are taken). Prints the ranking; with --out writes study.csv, "
+                + "study.json, fer.png, fer.svg (every run's FER) and report.html there."})
 final class CompareCommand implements Callable<Integer> {
 
     @Parameters(arity = "1..*", paramLabel = "DIR", description = "Run folders (or study folders).")
     List<Path> dirs;
 
-    @Option(names = "--out", paramLabel = "DIR", description = "Write study.csv and study.json into DIR.")
+    @Option(names = "--out", paramLabel = "DIR", description = "Write study.csv, study.json, the plot and report.html "
+            + "into DIR.")
     String out;
 
     @Option(names = "--budget-db", paramLabel = "DB", description = "The SNR the link budget allows, dB (meets_target).")
     Double budgetDb;
+
+    @Option(names = "--x-axis", paramLabel = "NAME", description = "X axis of the plot: snr, ebn0 (default: snr).")
+    String xAxis;
+
+    @Option(names = "--with-bounds", description = "Draw each run's QAM-constrained outage bound, dashed in its colour.")
+    boolean withBounds;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -46,6 +53,10 @@ final class CompareCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Path outDir = out == null ? null : SweepJob.checkOutDir(out);
+        if (outDir != null) {
+            StudyRunner.checkNotARun(outDir);
+        }
+        StudyOutputs.Figure figure = new StudyOutputs.Figure(StudyCommand.xQuantity(xAxis), withBounds);
         List<DesignRow> rows = rows(dirs);
         StudyTable table = StudyTable.ranked("comparison of " + String.join(", ", dirs.stream().map(Path::toString)
                 .toList()), budgetDb == null ? Double.NaN : budgetDb, rows, List.of(), List.of(), flags(rows));
@@ -53,7 +64,8 @@ final class CompareCommand implements Callable<Integer> {
         table.lines().forEach(w::println);
         if (outDir != null) {
             try {
-                StudyOutputs.write(outDir, table).forEach(p -> w.println("wrote " + p));
+                StudyOutputs.write(outDir, table, figure, table.sentences(), RunCommand.commandArgs(spec))
+                        .forEach(p -> w.println("wrote " + p));
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
             }

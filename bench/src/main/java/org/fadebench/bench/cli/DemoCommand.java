@@ -11,6 +11,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.fadebench.bench.report.FerPlot;
+import org.fadebench.bench.report.HtmlReport;
 import org.fadebench.bench.settings.SettingValues;
 import org.fadebench.bench.study.DesignRow;
 import org.fadebench.bench.study.StudyFile;
@@ -59,7 +61,8 @@ final class DemoCommand implements Callable<Integer> {
         w.println("sensors through slow (per-frame) Rayleigh fading. Three designs: " + designNames(study) + ".");
         // the demo replaces its own earlier output (overwrite), so that it can be run again and again
         StudyRunner runner = new StudyRunner(StudyCommand.plan(study, dir, threads, false, SettingValues.empty()), false,
-                true, w, spec.commandLine().getErr());
+                true, w, spec.commandLine().getErr(), new StudyOutputs.Figure(FerPlot.XQuantity.SNR, true),
+                DemoCommand::closing, RunCommand.commandArgs(spec));
         runner.checkBeforeRun(null);
         int code = runner.run();
         if (code != ExitCodes.OK) {
@@ -67,8 +70,9 @@ final class DemoCommand implements Callable<Integer> {
         }
         w.println();
         closing(runner.table()).forEach(w::println);
-        w.println("Outputs: " + dir + " (" + StudyOutputs.CSV + ", " + StudyOutputs.JSON + ") and one folder per design ("
-                + FadebenchCli.RUN_OUTPUTS + ").");
+        w.println("Outputs: " + dir + " (" + StudyOutputs.CSV + ", " + StudyOutputs.JSON + ", " + FerPlot.PNG_FILE + ", "
+                + FerPlot.SVG_FILE + ", " + HtmlReport.FILE + ") and one folder per design (" + FadebenchCli.RUN_OUTPUTS
+                + ").");
         return ExitCodes.OK;
     }
 
@@ -83,17 +87,7 @@ final class DemoCommand implements Callable<Integer> {
      * target at the budget.
      */
     static List<String> closing(StudyTable table) {
-        List<String> lines = new ArrayList<>();
-        List<DesignRow> reached = table.rows().stream().filter(DesignRow::reached).toList();
-        if (reached.isEmpty()) {
-            lines.add("No design reached the target FER within the sweep.");
-            return lines;
-        }
-        DesignRow best = table.rows().get(0);
-        if (best.reached()) {
-            lines.add(String.format(Locale.ROOT, "Best at FER %s: %s, at %.2f dB SNR (%s).", best.targetFer(),
-                    best.design(), best.snrDbAtTarget(), interval(best.snrDbLow(), best.snrDbHigh())));
-        }
+        List<String> lines = new ArrayList<>(table.sentences());
         Optional<DesignRow> mrc = find(table, MRC);
         Optional<DesignRow> alamouti = find(table, ALAMOUTI);
         if (mrc.isPresent() && alamouti.isPresent() && mrc.get().reached() && alamouti.get().reached()) {
@@ -107,27 +101,16 @@ final class DemoCommand implements Callable<Integer> {
                             + "antennas", POWER_SPLIT_DB)
                     : String.format(Locale.ROOT, "; this does not hold the %.2f dB of splitting the power over two "
                             + "transmit antennas", POWER_SPLIT_DB);
-            lines.add(String.format(Locale.ROOT, "%s needs %.2f dB %s SNR than %s (%s)%s.", a.design(),
+            lines.add(1, String.format(Locale.ROOT, "%s needs %.2f dB %s SNR than %s (%s)%s.", a.design(),
                     Math.abs(a.snrDbAtTarget() - m.snrDbAtTarget()),
-                    a.snrDbAtTarget() >= m.snrDbAtTarget() ? "more" : "less", m.design(), interval(low, high), holds));
-        }
-        if (!Double.isNaN(table.budgetDb())) {
-            List<String> meet = table.rows().stream().filter(r -> Boolean.TRUE.equals(StudyTable.meets(r,
-                    table.budgetDb()))).map(DesignRow::design).toList();
-            lines.add(String.format(Locale.ROOT, "At the budget of %s dB, %d of %d designs meet the target%s.",
-                    org.fadebench.bench.report.Numbers.db(table.budgetDb()), meet.size(), table.rows().size(),
-                    meet.isEmpty() ? "" : ": " + String.join(", ", meet)));
+                    a.snrDbAtTarget() >= m.snrDbAtTarget() ? "more" : "less", m.design(),
+                    StudyTable.interval(low, high), holds));
         }
         return lines;
     }
 
     private static Optional<DesignRow> find(StudyTable table, String name) {
         return table.rows().stream().filter(r -> r.design().equals(name)).findFirst();
-    }
-
-    private static String interval(double low, double high) {
-        return Double.isNaN(low) || Double.isNaN(high) ? "interval not resolved by the sweep"
-                : String.format(Locale.ROOT, "interval from the FER intervals: %.2f to %.2f dB", low, high);
     }
 
     private static String resource(String name) {

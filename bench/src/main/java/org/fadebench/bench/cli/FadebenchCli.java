@@ -13,8 +13,8 @@ import picocli.CommandLine.Command;
         description = {"Monte Carlo link-level bench for multi-antenna diversity links over block fading.",
             "Outputs: run writes " + FadebenchCli.RUN_OUTPUTS + " into its --out folder, with checkpoint.json while it"
                 + " runs, the --trace-out file and the --archive file when asked; study writes a run's outputs per"
-                + " design into DIR/<design>/ and study.csv and study.json into DIR; compare writes study.csv and"
-                + " study.json with --out; bounds writes bounds.csv; demo runs a built-in study."},
+                + " design into DIR/<design>/ and study.csv, study.json, fer.png, fer.svg and report.html into DIR;"
+                + " compare writes the same five with --out; bounds writes bounds.csv; demo runs a built-in study."},
         subcommands = {RunCommand.class, StudyCommand.class, CompareCommand.class, BoundsCommand.class, CodesCommand.class, DemoCommand.class, CommandLine.HelpCommand.class})
 public final class FadebenchCli implements Runnable {
 

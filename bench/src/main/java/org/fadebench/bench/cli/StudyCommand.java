@@ -9,7 +9,9 @@ import org.fadebench.bench.settings.RunSettings;
 import org.fadebench.bench.settings.SettingValues;
 import org.fadebench.bench.study.StudyFile;
 import org.fadebench.bench.study.StudyLoader;
+import org.fadebench.bench.study.StudyOutputs;
 import org.fadebench.bench.study.StudyPlan;
+import org.fadebench.bench.study.StudyTable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -40,8 +42,13 @@ final class StudyCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads of every design (default: all cores).")
     Integer threads;
 
-    @Option(names = "--x-axis", paramLabel = "NAME", description = "X axis of the designs' plots: snr, ebn0.")
+    @Option(names = "--x-axis", paramLabel = "NAME", description = "X axis of the study's plot and the designs' plots: "
+            + "snr, ebn0 (default: the file's output.plot_x, else snr).")
     String xAxis;
+
+    @Option(names = "--with-bounds", description = "Draw each design's QAM-constrained outage bound, dashed in its "
+            + "colour, on the study's plot.")
+    boolean withBounds;
 
     @Option(names = "--overwrite", description = "Replace the results of other runs in the designs' folders.")
     boolean overwrite;
@@ -62,19 +69,25 @@ final class StudyCommand implements Callable<Integer> {
         }
         SettingValues given = SettingValues.empty();
         if (xAxis != null) {
-            try {
-                FerPlot.XQuantity.fromCliName(xAxis);
-            } catch (IllegalArgumentException e) {
-                throw new InvalidInputException("--x-axis: " + e.getMessage());
-            }
             given = given.with(RunSettings.PLOT_X, xAxis, SettingValues.Origin.COMMAND_LINE);
         }
+        FerPlot.XQuantity x = xQuantity(xAxis != null ? xAxis : study.common().text(RunSettings.PLOT_X));
         String dir = out != null ? out : study.common().isSet(RunSettings.FOLDER) ? study.common().text(RunSettings.FOLDER)
                 : "fadebench-study";
         StudyRunner runner = new StudyRunner(plan(study, SweepJob.checkOutDir(dir), threads, quiet, given),
-                resume, overwrite, spec.commandLine().getOut(), spec.commandLine().getErr());
+                resume, overwrite, spec.commandLine().getOut(), spec.commandLine().getErr(),
+                new StudyOutputs.Figure(x, withBounds), StudyTable::sentences, RunCommand.commandArgs(spec));
         runner.checkBeforeRun(file);
         return runner.run();
+    }
+
+    /** The x axis named by {@code --x-axis} (or the file's {@code output.plot_x}); snr when null. */
+    static FerPlot.XQuantity xQuantity(String name) {
+        try {
+            return name == null ? FerPlot.XQuantity.SNR : FerPlot.XQuantity.fromCliName(name);
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException("--x-axis: " + e.getMessage());
+        }
     }
 
     /** The checked study; an invalid design becomes invalid input naming the file, line and key. */

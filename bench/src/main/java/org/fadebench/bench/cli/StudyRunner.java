@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.function.Function;
 import org.fadebench.bench.report.Checkpoint;
 import org.fadebench.bench.run.RunPlan;
 import org.fadebench.bench.settings.RunSettings;
@@ -31,14 +32,26 @@ final class StudyRunner {
     private final boolean overwrite;
     private final PrintWriter out;
     private final PrintWriter err;
+    private final StudyOutputs.Figure figure;
+    private final Function<StudyTable, List<String>> sentences;
+    private final List<String> args;
     /** The ranking, once {@link #run} has finished every design. */
     private StudyTable table;
 
-    /** @param overwrite replace other runs' results in the designs' folders (the study's --overwrite) */
-    StudyRunner(StudyPlan plan, boolean resume, boolean overwrite, PrintWriter out, PrintWriter err) {
+    /**
+     * @param overwrite replace other runs' results in the designs' folders (the study's --overwrite)
+     * @param figure    how the plot of every design is drawn
+     * @param sentences the report's sentences about the result, from the ranking
+     * @param args      the command line after {@code fadebench}, for the reports' provenance
+     */
+    StudyRunner(StudyPlan plan, boolean resume, boolean overwrite, PrintWriter out, PrintWriter err,
+                StudyOutputs.Figure figure, Function<StudyTable, List<String>> sentences, List<String> args) {
         this.plan = plan;
         this.resume = resume;
         this.overwrite = overwrite;
+        this.figure = figure;
+        this.sentences = sentences;
+        this.args = List.copyOf(args);
         this.out = out;
         this.err = err;
     }
@@ -50,12 +63,24 @@ final class StudyRunner {
      * @param studyFile the study file read, or null (the demo's is built in)
      */
     void checkBeforeRun(Path studyFile) {
-        SweepJob.checkOutDir(plan.dir().toString());
+        checkNotARun(plan.dir());
         for (StudyPlan.Entry e : plan.designs()) {
             RunPlan p = e.plan();
             String text = p.scenarioText();
             RunOutputs.checkDistinct(RunOutputs.inputs(p, studyFile), RunOutputs.outputs(p), text);
             RunOutputs.checkFolderReuse(p.outDir(), overwrite || p.values().flag(RunSettings.OVERWRITE), resume, text);
+        }
+    }
+
+    /**
+     * Refuses, as the folder of a study or comparison, a run's own folder: its plot and report
+     * would be replaced by the study's.
+     */
+    static void checkNotARun(Path dir) {
+        SweepJob.checkOutDir(dir.toString());
+        if (Files.exists(dir.resolve(RunOutputs.RESULTS_JSON)) || Files.exists(dir.resolve(Checkpoint.FILE_NAME))) {
+            throw new InvalidInputException("--out " + dir + " holds a run's results (its plot and report.html would be "
+                    + "replaced); give a folder of its own to the study or comparison");
         }
     }
 
@@ -89,7 +114,7 @@ final class StudyRunner {
                 if (!quiet) {
                     e.plan().warnings().forEach(w -> err.println("fadebench study: " + e.name() + ": warning: " + w));
                 }
-                int code = new SweepJob(e.plan(), resume, out).run();
+                int code = new SweepJob(e.plan(), resume, out, args).run();
                 if (code != ExitCodes.OK) {
                     out.println("study interrupted in design " + e.name() + "; run the same command with --resume to "
                             + "continue (finished designs are kept)");
@@ -103,7 +128,7 @@ final class StudyRunner {
                 .map(s -> new StudyTable.Named(s.name(), s.reason())).toList();
         table = StudyTable.ranked(plan.file().source(), plan.file().budgetDb(), rows, screened, skipped, List.of());
         try {
-            List<Path> written = StudyOutputs.write(plan.dir(), table);
+            List<Path> written = StudyOutputs.write(plan.dir(), table, figure, sentences.apply(table), args);
             out.println();
             out.println("Ranking (" + plan.file().source() + "):");
             table.lines().forEach(out::println);

@@ -5,11 +5,14 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.EnumMap;
+import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
 import org.fadebench.bench.analysis.Bound;
 import org.fadebench.bench.analysis.TargetCrossing;
+import org.fadebench.bench.report.ComparisonPlot;
 
 /**
  * One design's line of a study or comparison, read from its finished run folder
@@ -44,22 +47,15 @@ import org.fadebench.bench.analysis.TargetCrossing;
  * @param gapNote            why a gap is undefined, or null
  * @param frames             frames simulated over all points (the points' counts)
  * @param seconds            the run's wall-clock seconds (timing)
- * @param curve              the run's points, for a figure of every design's FER
+ * @param confidence         the level of the run's FER intervals
+ * @param curve              the run's points and QAM-constrained bound, as a figure of every design draws them
  */
 public record DesignRow(String design, Path folder, String version, String snrConvention, long seed, String link,
                         double targetFer, double bitsPerChannelUse, double snrDbAtTarget, double snrDbLow,
                         double snrDbHigh, String targetNote, double lowestSnrDb, double highestSnrDb,
                         boolean ferBelowAtLowest, double diversityOrder, Map<Bound, Double> gapDb,
-                        Map<Bound, String> gapNote, long frames, double seconds, Curve curve) {
-
-    /**
-     * A run's points in the order of its results.json: SNR, Eb/N0, FER and its interval, and the
-     * QAM-constrained outage bound at the same SNR (NaN where the run has none or a count does not
-     * resolve it).
-     */
-    public record Curve(double[] snrDb, double[] ebn0Db, double[] fer, double[] ferLow, double[] ferHigh,
-                        double[] qamOutage) {
-    }
+                        Map<Bound, String> gapNote, long frames, double seconds, double confidence,
+                        ComparisonPlot.Design curve) {
 
     /** The file a row is read from. */
     public static final String RESULTS_JSON = "results.json";
@@ -112,8 +108,8 @@ public record DesignRow(String design, Path folder, String version, String snrCo
         double[] low = new double[n];
         double[] high = new double[n];
         double[] fer = new double[n];
-        double[] ebn0 = new double[n];
-        double[] qam = new double[n];
+        List<ComparisonPlot.Point> plotted = new ArrayList<>();
+        List<ComparisonPlot.BoundValue> qam = new ArrayList<>();
         long frames = 0;
         for (int i = 0; i < n; i++) {
             JsonNode p = points.get(i);
@@ -121,9 +117,12 @@ public record DesignRow(String design, Path folder, String version, String snrCo
             low[i] = number(p.path("fer_ci_low"));
             high[i] = number(p.path("fer_ci_high"));
             fer[i] = number(p.path("fer"));
-            ebn0[i] = p.path("ebn0_db").asDouble();
-            qam[i] = number(root.path("bounds").path("points").path(i).path("qam").path("value"));
             frames += p.path("frames").asLong();
+            plotted.add(new ComparisonPlot.Point(snr[i], p.path("frames").asLong(), p.path("frame_errors").asLong(),
+                    low[i], high[i]));
+        }
+        for (JsonNode b : root.path("bounds").path("points")) {
+            qam.add(new ComparisonPlot.BoundValue(b.path("snr_db").asDouble(), number(b.path("qam").path("value"))));
         }
         int lowest = 0;
         int highest = 0;
@@ -145,7 +144,8 @@ public record DesignRow(String design, Path folder, String version, String snrCo
                 or(TargetCrossing.interpolate(snr, low, target)), or(TargetCrossing.interpolate(snr, high, target)),
                 targetNote.isTextual() ? targetNote.asText() : null, snr[lowest], snr[highest],
                 fer[lowest] <= target, number(summary.path("diversity_order")), gaps, notes, frames,
-                root.path("timing").path("seconds").asDouble(), new Curve(snr, ebn0, fer, low, high, qam));
+                root.path("timing").path("seconds").asDouble(), root.path("settings").path("confidence").asDouble(),
+                new ComparisonPlot.Design(design, root.path("bits_per_channel_use").asDouble(), plotted, qam));
     }
 
     private static double number(JsonNode n) {

@@ -8,6 +8,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import org.fadebench.bench.analysis.Bound;
+import org.fadebench.bench.report.HtmlReport;
 import org.fadebench.bench.report.Numbers;
 import org.fadebench.bench.report.ToolVersion;
 
@@ -194,6 +195,66 @@ public record StudyTable(String title, double budgetDb, List<DesignRow> rows, Li
 
     private static com.fasterxml.jackson.databind.JsonNode nullable(double v) {
         return Double.isNaN(v) ? JSON.nullNode() : JSON.getNodeFactory().numberNode(v);
+    }
+
+    /**
+     * A few sentences about the result, each computed from it: the best design with its SNR
+     * interval, and which designs meet the target at the budget.
+     */
+    public List<String> sentences() {
+        List<String> lines = new ArrayList<>();
+        if (rows.isEmpty() || !rows.get(0).reached()) {
+            lines.add(rows.stream().anyMatch(DesignRow::reached) ? "The best-ranked design has no SNR at the target FER "
+                    + "within its sweep." : "No design reached the target FER within its sweep.");
+        } else {
+            DesignRow best = rows.get(0);
+            lines.add(String.format(Locale.ROOT, "Best at FER %s: %s, at %.2f dB SNR (%s).", best.targetFer(),
+                    best.design(), best.snrDbAtTarget(), interval(best.snrDbLow(), best.snrDbHigh())));
+        }
+        if (!Double.isNaN(budgetDb)) {
+            List<String> meet = rows.stream().filter(r -> Boolean.TRUE.equals(meets(r, budgetDb)))
+                    .map(DesignRow::design).toList();
+            lines.add(String.format(Locale.ROOT, "At the budget of %s dB, %d of %d designs meet the target%s.",
+                    Numbers.db(budgetDb), meet.size(), rows.size() + screened.size(),
+                    meet.isEmpty() ? "" : ": " + String.join(", ", meet)));
+        }
+        return lines;
+    }
+
+    /** An SNR interval in words: {@code interval from the FER intervals: 4.98 to 5.80 dB}. */
+    public static String interval(double low, double high) {
+        return Double.isNaN(low) || Double.isNaN(high) ? "interval not resolved by the sweep"
+                : String.format(Locale.ROOT, "interval from the FER intervals: %.2f to %.2f dB", low, high);
+    }
+
+    /** The ranking as report.html's table: one row per design, then those not simulated with their reasons. */
+    public HtmlReport.Table reportTable() {
+        List<List<String>> cells = new ArrayList<>();
+        int rank = 1;
+        for (DesignRow r : rows) {
+            Boolean meets = meets(r, budgetDb);
+            cells.add(List.of(Integer.toString(rank++), r.design(), Numbers.db(r.bitsPerChannelUse()),
+                    r.reached() ? String.format(Locale.ROOT, "%.2f (%s to %s)", r.snrDbAtTarget(), two(r.snrDbLow()),
+                            two(r.snrDbHigh())) : "none: " + r.targetNote(),
+                    two(r.ebn0DbAtTarget()), two(r.diversityOrder()), two(r.gapDb().get(Bound.MIMO)),
+                    two(r.gapDb().get(Bound.STBC)), two(r.gapDb().get(Bound.QAM)),
+                    meets == null ? "-" : meets ? "yes" : "no", Long.toString(r.frames())));
+        }
+        for (Named n : screened) {
+            cells.add(List.of("-", n.design(), "", n.reason(), "", "", "", "", "", "no", "0"));
+        }
+        for (Named n : skipped) {
+            cells.add(List.of("-", n.design(), "", "skipped: " + n.reason(), "", "", "", "", "", "", "0"));
+        }
+        String target = rows.isEmpty() ? "" : " " + rows.get(0).targetFer();
+        return new HtmlReport.Table("Ranking", List.of("rank", "design", "bits per channel use",
+                "SNR at FER" + target + " (dB, interval)", "Eb/N0 (dB)", "diversity order", "gap to mimo (dB)",
+                "gap to stbc (dB)", "gap to qam (dB)", Double.isNaN(budgetDb) ? "meets the target (no budget)"
+                        : "meets the target at " + Numbers.db(budgetDb) + " dB", "frames"), cells);
+    }
+
+    private static String two(double v) {
+        return Double.isNaN(v) ? "-" : String.format(Locale.ROOT, "%.2f", v);
     }
 
     /** The ranking for the terminal: one line per design, then those not simulated. */

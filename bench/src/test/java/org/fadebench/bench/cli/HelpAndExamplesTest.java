@@ -216,7 +216,7 @@ class HelpAndExamplesTest {
             notes.put(b, "none");
         }
         return new DesignRow(name, Path.of(name), "v", "convention", 1, "link", 0.01, 1, snrDb, low, high, null, 0, 16,
-                false, 2, gaps, notes, 1000, 1, null);
+                false, 2, gaps, notes, 1000, 1, 0.95, null);
     }
 
     /**

@@ -16,6 +16,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import java.util.stream.Stream;
+import org.fadebench.bench.report.HtmlChecks;
 import org.fadebench.bench.report.Numbers;
 import org.fadebench.bench.study.DesignRow;
 import org.junit.jupiter.api.Test;
@@ -82,7 +83,7 @@ class StudyCliTest {
      * (diversity 4) ranks first; with the budget of 6 dB only it meets the target.
      */
     @Test
-    void alamoutiTwoByOneIsThreeDbBehindCombining() throws IOException {
+    void alamoutiTwoByOneIsThreeDbBehindCombining() throws Exception {
         Path out = tmp.resolve("three");
         CliTest.Outcome o = study(file("three.yaml", THREE), out, "--threads", "2");
         assertEquals(0, o.code(), o.err());
@@ -115,6 +116,16 @@ class StudyCliTest {
             assertEquals(results.path("summary").path("snr_db_at_target").asDouble(),
                     d.get(name).path("snr_db_at_target").asDouble(), 0.0);
             assertTrue(Files.exists(out.resolve(name).resolve("scenario.yaml")));
+        }
+        // the study's plot and report: one ranking row per design, every SVG well-formed (HtmlChecks)
+        assertTrue(Files.size(out.resolve("fer.png")) > 0 && Files.size(out.resolve("fer.svg")) > 0);
+        String html = Files.readString(out.resolve("report.html"));
+        org.jsoup.nodes.Document page = HtmlChecks.selfContained(html);
+        assertEquals(3, page.select("table").first().select("tbody tr").size());
+        List<String> svgs = HtmlChecks.svgElements(html);
+        assertEquals(1, svgs.size());
+        for (String svg : svgs) {
+            HtmlChecks.wellFormedXml(svg);
         }
         List<String> csv = Files.readAllLines(out.resolve("study.csv"));
         assertTrue(csv.contains("rank,design,bits_per_channel_use,snr_db_at_target,snr_db_at_target_low,"
@@ -161,7 +172,8 @@ class StudyCliTest {
     private static Map<String, String> files(Path dir) throws IOException {
         Map<String, String> m = new TreeMap<>();
         try (Stream<Path> s = Files.walk(dir)) {
-            for (Path p : s.filter(Files::isRegularFile).toList()) {
+            // report.html holds the date and the command line (as results.json holds timing): left out
+            for (Path p : s.filter(Files::isRegularFile).filter(p -> !p.endsWith("report.html")).toList()) {
                 String name = dir.relativize(p).toString();
                 String text = name.endsWith(".png") ? java.util.Base64.getEncoder().encodeToString(Files.readAllBytes(p))
                         : Files.readString(p);
@@ -381,9 +393,9 @@ class StudyCliTest {
             DesignRow read = DesignRow.read("x", run);
             for (int i = 0; i < results.path("points").size(); i++) {
                 JsonNode p = results.path("points").get(i);
-                assertEquals(p.path("fer").asDouble(), read.curve().fer()[i], 0.0);
-                assertEquals(p.path("fer_ci_high").asDouble(), read.curve().ferHigh()[i], 0.0);
-                assertEquals(p.path("ebn0_db").asDouble(), read.curve().ebn0Db()[i], 0.0);
+                assertEquals(p.path("fer").asDouble(), read.curve().points().get(i).fer(), 0.0);
+                assertEquals(p.path("fer_ci_high").asDouble(), read.curve().points().get(i).ferHigh(), 0.0);
+                assertEquals(p.path("snr_db").asDouble(), read.curve().points().get(i).snrDb(), 0.0);
             }
             String line = csv.stream().filter(l -> l.contains("," + run.getFileName() + ",")).findFirst().orElseThrow();
             assertTrue(line.contains("," + Numbers.db(summary.path("snr_db_at_target").asDouble()) + ","), line);
