@@ -400,6 +400,11 @@ class StudyCliTest {
             String line = csv.stream().filter(l -> l.contains("," + run.getFileName() + ",")).findFirst().orElseThrow();
             assertTrue(line.contains("," + Numbers.db(summary.path("snr_db_at_target").asDouble()) + ","), line);
         }
+        // the plot and report of the comparison; a run's own folder is refused as its folder
+        assertTrue(Files.exists(out.resolve("fer.svg")) && Files.exists(out.resolve("report.html")));
+        CliTest.Outcome intoRun = CliTest.run("compare", a.toString(), b.toString(), "--out", a.toString());
+        assertEquals(2, intoRun.code(), intoRun.err());
+        assertTrue(intoRun.err().contains("holds a run's results"), intoRun.err());
         // another SNR convention is refused; another version is flagged
         Path c = tmp.resolve("c");
         copy(a, c);
