@@ -105,6 +105,10 @@ public final class StudyLoader {
             throw new ScenarioException(own.locate(SCREEN_MARGIN, "must be at least 1 (a factor over the target FER), got "
                     + margin));
         }
+        if (own.flag(SCREEN) && !own.isSet(BUDGET_DB)) {
+            throw new ScenarioException(own.locate(SCREEN, "needs analysis.budget_db, the SNR at which the outage "
+                    + "bound is judged"));
+        }
         if (designsNode == null && varyNode == null) {
             throw new ScenarioException(name + ": no designs: give designs: (a list of {name, link}) or vary: "
                     + "(a map from a link key to a list of values)");

@@ -263,6 +263,9 @@ class StudyCliTest {
             // a study key of the wrong kind
             {"analysis:\n  budget_db: high\ndesigns:\n  - name: a\n", "line 2, key analysis.budget_db: expected a "
                     + "number, got 'high'"},
+            // a screen without a budget
+            {"analysis:\n  screen: true\ndesigns:\n  - name: a\n", "line 2, key analysis.screen: needs "
+                    + "analysis.budget_db"},
             // an explicit YAML tag
             {"designs:\n  - name: !!str a\n", "line 2: YAML tags are not allowed"},
         };
