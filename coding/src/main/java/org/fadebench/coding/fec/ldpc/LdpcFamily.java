@@ -106,27 +106,13 @@ public enum LdpcFamily {
         if (lifting < 2) {
             throw new IllegalArgumentException("lifting size " + lifting + "; valid: at least 2");
         }
-        return lifted.computeIfAbsent(lifting, z -> {
-            QcBaseMatrix searched = new QcBaseMatrix(search.shifts(z), z);
-            if (!searched.hasFourCycle()) {
-                return searched;
-            }
-            QcBaseMatrix pruned = new QcBaseMatrix(search.prunedShifts(z), z);
-            return pruned.hasFourCycle() ? searched : pruned;
-        });
+        return lifted.computeIfAbsent(lifting, z -> new QcBaseMatrix(search.shifts(z), z));
     }
 
-    /**
-     * The lifting size for k information bits: ⌈k / kb⌉ if the base matrix lifts by it without
-     * 4-cycles, else the next size up that does (the information bits it has to spare are shortened).
-     */
+    /** The lifting size for k information bits, ⌈k / kb⌉. */
     public int lifting(int infoBits) {
         check(infoBits);
-        int z = (infoBits + protograph.infoColumns() - 1) / protograph.infoColumns();
-        while (baseMatrix(z).hasFourCycle()) {
-            z++;
-        }
-        return z;
+        return (infoBits + protograph.infoColumns() - 1) / protograph.infoColumns();
     }
 
     /** Bits sent per codeword of k information bits, round(k / R). */

@@ -58,7 +58,7 @@ final class LiftedLayout implements CodeLayout {
         int fillers = kb * z - infoBits;
         int punctured = infoBits + mb * z - sentBits;
         int staircase = mb - 1;
-        if (infoBits < 1 || fillers < 0 || punctured < 0 || punctured > staircase * z) {
+        if (fillers < 0 || fillers >= kb || punctured < 0 || punctured > (z < 4 ? 1 : 2) * staircase) {
             throw new IllegalArgumentException("layout of " + infoBits + " information and " + sentBits
                     + " sent bits does not fit lifting size " + z);
         }
@@ -66,23 +66,18 @@ final class LiftedLayout implements CodeLayout {
         int[] column = new int[base.baseColumns() * z]; // lifted column -> column of H, −1 if shortened
         int[] position = new int[n]; // column of H -> lifted column
         for (int p = 0, c = 0; p < column.length; p++) {
-            // filler i is in block kb − 1 − (i mod kb) at offset Z − 1 − ⌊i / kb⌋
-            boolean filler = p < kb * z && (z - 1 - p % z) * kb + (kb - 1 - p / z) < fillers;
+            boolean filler = p < kb * z && p % z == z - 1 && p / z >= kb - fillers;
             column[p] = filler ? -1 : c;
             if (!filler) {
                 position[c++] = p;
             }
         }
         infoPosition = Arrays.copyOf(position, infoBits);
-        int[] offsets = puncturingOffsets(z);
         boolean[] skip = new boolean[n];
         for (int i = 0; i < punctured; i++) {
             int c = 1 + i % staircase;
-            int round = i / staircase;
-            // odd columns take offsets 0, 2, 4 … of the order, even ones 1, 3, 5 …, then the other's
-            int own = (z + (c % 2 == 1 ? 1 : 0)) / 2;
-            int slot = round < own ? 2 * round + (c % 2 == 1 ? 0 : 1) : 2 * (round - own) + (c % 2 == 1 ? 1 : 0);
-            skip[infoBits + c * z + offsets[slot]] = true;
+            int quarter = (c % 2 == 1 ? 0 : 2) + i / staircase; // 0 or 2 in the first round, 1 or 3 in the second
+            skip[infoBits + c * z + quarter * z / 4] = true;
         }
         sent = new int[sentBits];
         for (int j = 0, p = 0; j < n; j++) {
@@ -92,25 +87,6 @@ final class LiftedLayout implements CodeLayout {
         }
         matrix = base.expand(column, n);
         structure = new QcStructure(base, position);
-    }
-
-    /**
-     * The offsets 0 … Z − 1 in the order the puncturing takes them: ⌊v·Z⌋ for v = 0, 1/2, 1/4, 3/4,
-     * 1/8, 5/8, 3/8, 7/8 … (the binary van der Corput sequence), each offset at its first
-     * appearance; all Z appear by the time v has 2^⌈log2 Z⌉ terms.
-     */
-    static int[] puncturingOffsets(int z) {
-        int[] order = new int[z];
-        boolean[] taken = new boolean[z];
-        for (int i = 0, found = 0; found < z; i++) {
-            long v = Integer.reverse(i) >>> 1; // v / 2^31 is the i-th term
-            int o = (int) (v * z >>> 31);
-            if (!taken[o]) {
-                taken[o] = true;
-                order[found++] = o;
-            }
-        }
-        return order;
     }
 
     @Override

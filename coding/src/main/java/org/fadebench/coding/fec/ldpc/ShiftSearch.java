@@ -26,11 +26,6 @@ final class ShiftSearch {
 
     /** Attempts before settling for the best found. */
     static final int ATTEMPTS = 16;
-    /** Attempts of {@link #prunedShifts}. */
-    static final int PRUNING_ATTEMPTS = 64;
-    /** Fewest ones {@link #prunedShifts} leaves in a column. */
-    static final int MIN_DEGREE = 2;
-    private static final int LEFT_OUT = -1;
 
     private final int[][] template;
     private final int[] entryRow;
@@ -151,47 +146,21 @@ final class ShiftSearch {
 
     /** The base matrix of shifts for lifting size Z (−1 for zero blocks). */
     int[][] shifts(int lifting) {
-        return search(lifting, ATTEMPTS, Integer.MAX_VALUE);
-    }
-
-    /**
-     * The base matrix of shifts for lifting size Z with entries left out where 4-cycles leave no
-     * choice: as {@link #shifts}, but a free entry every value of which would complete a 4-cycle
-     * becomes a zero block, as long as its column keeps {@link #MIN_DEGREE} ones or more. Up to
-     * {@link #PRUNING_ATTEMPTS} attempts, the best the one with the fewest 4-cycles, then the fewest
-     * entries left out, then the fewest 6-cycles.
-     */
-    int[][] prunedShifts(int lifting) {
-        return search(lifting, PRUNING_ATTEMPTS, MIN_DEGREE);
-    }
-
-    private int[][] search(int lifting, int attempts, int minDegree) {
         int[] best = null;
         long bestScore = Long.MAX_VALUE;
         int[] value = new int[entryRow.length];
         int[] forbidFour = new int[lifting];
         int[] forbidSix = new int[lifting];
         int[] candidates = new int[lifting];
-        int[] free = new int[template[0].length]; // free entries per column
-        for (int e = fixed; e < value.length; e++) {
-            free[entryColumn[e]]++;
-        }
-        int[] kept = new int[free.length];
-        int[] left = new int[free.length];
-        for (int attempt = 0; attempt < attempts && bestScore > 0; attempt++) {
+        for (int attempt = 0; attempt < ATTEMPTS && bestScore > 0; attempt++) {
             SplittableRandom random = new SplittableRandom(lifting * 1_000_003L + attempt);
             long four = 0;
             long six = 0;
-            long leftOut = 0;
-            Arrays.fill(kept, 0);
-            System.arraycopy(free, 0, left, 0, free.length);
             for (int e = 0; e < value.length; e++) {
                 if (e < fixed) {
                     value[e] = template[entryRow[e]][entryColumn[e]];
                     continue;
                 }
-                int column = entryColumn[e];
-                left[column]--;
                 forbid(fourCycles[e], 4, value, lifting, forbidFour);
                 forbid(sixCycles[e], 6, value, lifting, forbidSix);
                 for (int v = 0; v < lifting; v++) { // Fisher–Yates shuffle of 0 .. Z − 1
@@ -207,17 +176,11 @@ final class ShiftSearch {
                         choice = v;
                     }
                 }
-                if (forbidFour[choice] > 0 && kept[column] + left[column] >= minDegree) {
-                    value[e] = LEFT_OUT;
-                    leftOut++;
-                    continue;
-                }
-                kept[column]++;
                 value[e] = choice;
                 four += forbidFour[choice];
                 six += forbidSix[choice];
             }
-            long score = four * (1L << 40) + leftOut * (1L << 24) + six;
+            long score = four * (1L << 32) + six;
             if (score < bestScore) {
                 bestScore = score;
                 best = value.clone();
@@ -245,31 +208,20 @@ final class ShiftSearch {
         int[] forbidden = new int[lifting];
         long closed = 0;
         for (int e = fixed; e < value.length; e++) {
-            if (value[e] == LEFT_OUT) {
-                continue;
-            }
             forbid(length == 4 ? fourCycles[e] : sixCycles[e], length, value, lifting, forbidden);
             closed += forbidden[value[e]];
         }
         return closed;
     }
 
-    /**
-     * Counts, for each value of the entry, the cycles in {@code groups} it would complete (a cycle
-     * through an entry left out is no cycle).
-     */
+    /** Counts, for each value of the entry, the cycles in {@code groups} it would complete. */
     private static void forbid(int[] groups, int length, int[] value, int lifting, int[] forbidden) {
         Arrays.fill(forbidden, 0);
-        groups:
         for (int g = 0; g < groups.length; g += length) {
             long rest = 0;
             for (int p = 1; p < length; p++) {
                 int code = groups[g + p];
-                int v = value[Math.abs(code) - 1];
-                if (v == LEFT_OUT) {
-                    continue groups;
-                }
-                rest += code > 0 ? v : -v;
+                rest += code > 0 ? value[code - 1] : -value[-code - 1];
             }
             // own sign · s + rest ≡ 0
             forbidden[(int) Math.floorMod(-groups[g] * rest, (long) lifting)]++;

@@ -49,9 +49,7 @@ class LdpcFamilyTest {
             for (int k = LdpcFamily.MIN_INFO_BITS; k <= LdpcFamily.MAX_INFO_BITS; k++) {
                 CodeLayout layout = code.layout(k);
                 int z = code.lifting(k);
-                int smallest = (k + kb - 1) / kb;
-                assertTrue(z == smallest || z > smallest && code.baseMatrix(smallest).hasFourCycle(), code + " k " + k);
-                assertFalse(code.baseMatrix(z).hasFourCycle(), code + " k " + k);
+                assertTrue(kb * z >= k && kb * (z - 1) < k, code + " k " + k);
                 assertEquals(k, layout.infoBits());
                 assertEquals(Math.round(k / code.rate()), layout.sentBits(), code + " k " + k);
                 ParityCheckMatrix h = layout.matrix();
@@ -72,7 +70,7 @@ class LdpcFamilyTest {
                 }
             }
         }
-        assertArrayEquals(new int[] {0, 0, 454, 809}, secondRoundSizes);
+        assertArrayEquals(new int[] {0, 0, 453, 816}, secondRoundSizes);
     }
 
     /**
@@ -94,9 +92,11 @@ class LdpcFamilyTest {
                 assertEquals(2 * (mb - 1), puncturedBits(layout, z, code + " Z " + z));
             }
             int k = kb * smallest;
-            new LiftedLayout(code.baseMatrix(smallest), middle, k, k + mb * smallest - (mb - 1) * smallest);
             assertThrows(IllegalArgumentException.class, () -> new LiftedLayout(code.baseMatrix(smallest), middle, k,
-                    k + mb * smallest - (mb - 1) * smallest - 1));
+                    k + mb * smallest - 2 * (mb - 1) - 1));
+            assertThrows(IllegalArgumentException.class, () -> new LiftedLayout(code.baseMatrix(3), middle, 3 * kb,
+                    3 * kb + 3 * mb - mb));
+            new LiftedLayout(code.baseMatrix(3), middle, 3 * kb, 3 * kb + 3 * mb - (mb - 1));
         }
     }
 
@@ -127,27 +127,9 @@ class LdpcFamilyTest {
                 assertTrue(c >= k + z, "not in parity column 0");
                 assertEquals(2, h.columnDegree(c));
                 for (int p = 0; p < 2; p++) {
-                    puncturedPerCheck[h.columnEntry(c, p)]++;
+                    assertTrue(++puncturedPerCheck[h.columnEntry(c, p)] < 2, what);
                 }
             }
-        }
-        // peeling: a check with one unknown bit gives it; every punctured bit is recovered
-        boolean[] known = isSent.clone();
-        for (int recovered = 1; recovered > 0;) {
-            recovered = 0;
-            for (int c = 0; c < h.columns(); c++) {
-                for (int p = 0; p < 2 && !known[c]; p++) {
-                    if (puncturedPerCheck[h.columnEntry(c, p)] == 1) {
-                        known[c] = true;
-                        recovered++;
-                        puncturedPerCheck[h.columnEntry(c, 0)]--;
-                        puncturedPerCheck[h.columnEntry(c, 1)]--;
-                    }
-                }
-            }
-        }
-        for (boolean b : known) {
-            assertTrue(b, what);
         }
         assertEquals(h.columns() - layout.sentBits(), punctured);
         return punctured;
@@ -224,7 +206,8 @@ class LdpcFamilyTest {
     @Test
     void noFourCyclesAboveTwoHundredTwentyBits() {
         for (LdpcFamily code : LdpcFamily.values()) {
-            for (int z = code.lifting(LdpcFamily.MIN_INFO_BITS); z <= code.lifting(LdpcFamily.MAX_INFO_BITS); z++) {
+            int from = code == LdpcFamily.R12 ? LdpcFamily.MIN_INFO_BITS : 221;
+            for (int z = code.lifting(from); z <= code.lifting(LdpcFamily.MAX_INFO_BITS); z++) {
                 assertFalse(code.baseMatrix(z).hasFourCycle(), code + " Z " + z);
             }
         }
@@ -232,9 +215,9 @@ class LdpcFamilyTest {
 
     private static final int[][] GIRTHS = {
         {6, 6, 6, 8, 8, 8, 8, 8},
-        {6, 6, 6, 6, 6, 8, 8, 8},
-        {6, 6, 6, 6, 6, 8, 8, 8},
-        {6, 6, 6, 6, 6, 6, 8, 8},
+        {4, 4, 6, 6, 6, 8, 8, 8},
+        {4, 4, 6, 6, 6, 8, 8, 8},
+        {4, 4, 6, 6, 6, 6, 8, 8},
     };
 
     /** The shift tables are the same in every run: SHA-256 of every rate's tables at a list of Z. */
@@ -253,7 +236,7 @@ class LdpcFamilyTest {
                 sha.update(b.array());
             }
         }
-        assertEquals("b39a80e9d710c78858f2cc21e7770f7873371393bfd041d474ee3cdb3413c3e0", HexFormat.of().formatHex(sha.digest()));
+        assertEquals("2e58873cd3e4bf9c4a1478c8af7cf55ee84765f3d3d3405ed34975506b16a04e", HexFormat.of().formatHex(sha.digest()));
     }
 
     @Test
