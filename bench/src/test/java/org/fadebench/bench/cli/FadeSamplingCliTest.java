@@ -51,6 +51,16 @@ class FadeSamplingCliTest {
         assertFalse(String.join("\n", plainLines).contains("estimator"));
     }
 
+    /** A point cut at 10 frames cannot have 10 effective error frames: results.csv and results.json say so. */
+    @Test
+    void aPointWithTooFewEffectiveErrorsSaysSo() throws IOException {
+        Path out = tmp.resolve("short");
+        assertEquals(0, run(out, "--snr", "20", "--estimator", "fade-sampling", "--max-frames", "10").code());
+        List<String> lines = Files.readAllLines(out.resolve("results.csv"));
+        assertTrue(lines.get(lines.size() - 1).endsWith("," + ResultsCsv.UNTRUSTED), lines.get(lines.size() - 1));
+        assertTrue(Files.readString(out.resolve("results.json")).contains("\"trusted\" : false"));
+    }
+
     @Test
     void modelsWithoutAScaledLawAreRefused() throws IOException {
         Path out = tmp.resolve("x");
