@@ -1,5 +1,8 @@
 package org.fadebench.coding.fec.ldpc;
 
+import java.util.Arrays;
+import org.fadebench.coding.fec.Lanes;
+
 /**
  * The loops of the fixed-point min-sum check update, shared by both kernels ({@link FixedPointDecoder}
  * on rows over lanes, {@link QcDecoder} on the Z rows of a block row over lanes): each runs over
@@ -42,25 +45,6 @@ final class MinSumLoops {
             } else {
                 lessOffset(least, second, sign, leastOut, gap, amount, len);
             }
-        }
-    }
-
-    /**
-     * r = Q = p − r, and the sign parity, the least and the second least |Q| updated (one loop:
-     * Math.abs on ints vectorises, Math.min and Math.max do not, so the minima use sign masks).
-     */
-    static void subtractAndMinima(int[] p, int[] r, int[] sign, int[] least, int[] second, int len) {
-        for (int x = 0; x < len; x++) {
-            int q = p[x] - r[x];
-            r[x] = q;
-            sign[x] ^= q;
-            int a = Math.abs(q);
-            int low = least[x];
-            int d = a - low;
-            int cut = d & (d >> 31);
-            least[x] = low + cut;
-            int high = a - cut - second[x];
-            second[x] += high & (high >> 31);
         }
     }
 
@@ -113,6 +97,105 @@ final class MinSumLoops {
             int v = (leastOut[x] + (gap[x] & own) ^ s) - s;
             r[x] = v;
             p[x] = q + v;
+        }
+    }
+
+    /** Edges of a check row per call of {@link #subtractAndMinima}. */
+    static final int GROUP = 4;
+
+    /**
+     * The posteriors and messages of up to {@value #GROUP} edges of a check row, for
+     * {@link #subtractAndMinima}: views of the decoder's rows, no copies. A place with no edge holds
+     * a filler, whose Q = P − R is {@value #FILLER} and stays so (R becomes Q, and the message
+     * loop never runs on it): above every |Q| of an edge, so never a least, and positive, so it
+     * flips no sign; if it is taken as a second least it is held at MESSAGE_LIMIT as ABOVE would be.
+     */
+    static final class Group {
+        /** Q of a filler. */
+        static final int FILLER = 1 << 29;
+
+        final int[][] p = new int[GROUP][];
+        final int[][] r = new int[GROUP][];
+        private final int[][] fillerP;
+        private final int[][] fillerR;
+
+        /** @param len elements per row */
+        Group(int len) {
+            fillerP = new int[GROUP][len];
+            fillerR = new int[GROUP][len];
+            for (int k = 0; k < GROUP; k++) {
+                Arrays.fill(fillerP[k], 2 * FILLER);
+                Arrays.fill(fillerR[k], FILLER);
+            }
+        }
+
+        /** Bytes of a group's fillers and views for rows of {@code len} elements. */
+        static long bytes(int len) {
+            return 4 * Lanes.rowBytes(4L * GROUP) + 2 * GROUP * Lanes.rowBytes(4L * len);
+        }
+
+        /** Place k: the edge with posteriors p and messages r. */
+        void edge(int k, int[] pk, int[] rk) {
+            p[k] = pk;
+            r[k] = rk;
+        }
+
+        /** Place k: a filler. */
+        void filler(int k) {
+            p[k] = fillerP[k];
+            r[k] = fillerR[k];
+        }
+    }
+
+    /**
+     * For each edge k of the group: r = Q = p − r, the sign parity, the least and the second least
+     * |Q| updated (one loop over the {@value #GROUP} edges, the parity and minima held in registers
+     * between them: Math.abs on ints vectorises, Math.min and Math.max do not, so the minima use
+     * sign masks; the minima of a set do not depend on the order the values come in).
+     */
+    static void subtractAndMinima(Group group, int[] sign, int[] least, int[] second, int len) {
+        int[][] p = group.p;
+        int[][] r = group.r;
+        int[] p0 = p[0], p1 = p[1], p2 = p[2], p3 = p[3];
+        int[] r0 = r[0], r1 = r[1], r2 = r[2], r3 = r[3];
+        for (int x = 0; x < len; x++) {
+            int q0 = p0[x] - r0[x];
+            int q1 = p1[x] - r1[x];
+            int q2 = p2[x] - r2[x];
+            int q3 = p3[x] - r3[x];
+            r0[x] = q0;
+            r1[x] = q1;
+            r2[x] = q2;
+            r3[x] = q3;
+            sign[x] ^= q0 ^ q1 ^ q2 ^ q3;
+            int low = least[x];
+            int high = second[x];
+            int a = Math.abs(q0);
+            int d = a - low;
+            int cut = d & (d >> 31);
+            low += cut;
+            int h = a - cut - high;
+            high += h & (h >> 31);
+            a = Math.abs(q1);
+            d = a - low;
+            cut = d & (d >> 31);
+            low += cut;
+            h = a - cut - high;
+            high += h & (h >> 31);
+            a = Math.abs(q2);
+            d = a - low;
+            cut = d & (d >> 31);
+            low += cut;
+            h = a - cut - high;
+            high += h & (h >> 31);
+            a = Math.abs(q3);
+            d = a - low;
+            cut = d & (d >> 31);
+            low += cut;
+            h = a - cut - high;
+            high += h & (h >> 31);
+            least[x] = low;
+            second[x] = high;
         }
     }
 
