@@ -178,9 +178,6 @@ final class FixedPointDecoder extends RowDecoder {
     private void updateRow(int row, int n) {
         int from = rowStart[row];
         int to = rowStart[row + 1];
-        Arrays.fill(least, 0, n, MinSumLoops.ABOVE);
-        Arrays.fill(second, 0, n, MinSumLoops.ABOVE);
-        Arrays.fill(parity, 0, n, 0);
         for (int e = from; e < to; e += MinSumLoops.GROUP) {
             for (int k = 0; k < MinSumLoops.GROUP; k++) {
                 if (e + k < to) {
@@ -189,7 +186,7 @@ final class FixedPointDecoder extends RowDecoder {
                     group.filler(k);
                 }
             }
-            MinSumLoops.subtractAndMinima(group, parity, least, second, n);
+            MinSumLoops.subtractAndMinima(group, e == from, parity, least, second, n);
         }
         correction.apply(least, second, parity, leastOut, gap, n);
         for (int e = from; e < to; e++) {

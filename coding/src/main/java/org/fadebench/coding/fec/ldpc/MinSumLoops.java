@@ -118,6 +118,9 @@ final class MinSumLoops {
         final int[][] r = new int[GROUP][];
         private final int[][] fillerP;
         private final int[][] fillerR;
+        /** Where a check's parity and minima start: 0 and {@link #ABOVE}. */
+        private final int[] zero;
+        private final int[] above;
 
         /** @param len elements per row */
         Group(int len) {
@@ -127,11 +130,14 @@ final class MinSumLoops {
                 Arrays.fill(fillerP[k], 2 * FILLER);
                 Arrays.fill(fillerR[k], FILLER);
             }
+            zero = new int[len];
+            above = new int[len];
+            Arrays.fill(above, ABOVE);
         }
 
         /** Bytes of a group's fillers and views for rows of {@code len} elements. */
         static long bytes(int len) {
-            return 4 * Lanes.rowBytes(4L * GROUP) + 2 * GROUP * Lanes.rowBytes(4L * len);
+            return 4 * Lanes.rowBytes(4L * GROUP) + (2 * GROUP + 2) * Lanes.rowBytes(4L * len);
         }
 
         /** Place k: the edge with posteriors p and messages r. */
@@ -151,11 +157,16 @@ final class MinSumLoops {
      * For each edge k of the group: r = Q = p − r, the sign parity, the least and the second least
      * |Q| updated (one loop over the {@value #GROUP} edges, the parity and minima held in registers
      * between them: Math.abs on ints vectorises, Math.min and Math.max do not, so the minima use
-     * sign masks; the minima of a set do not depend on the order the values come in).
+     * sign masks; the minima of a set do not depend on the order the values come in). The first
+     * group of a check ({@code first}) starts the parity at 0 and the minima at {@link #ABOVE}
+     * instead of reading them.
      */
-    static void subtractAndMinima(Group group, int[] sign, int[] least, int[] second, int len) {
+    static void subtractAndMinima(Group group, boolean first, int[] sign, int[] least, int[] second, int len) {
         int[][] p = group.p;
         int[][] r = group.r;
+        int[] signIn = first ? group.zero : sign;
+        int[] leastIn = first ? group.above : least;
+        int[] secondIn = first ? group.above : second;
         int[] p0 = p[0], p1 = p[1], p2 = p[2], p3 = p[3];
         int[] r0 = r[0], r1 = r[1], r2 = r[2], r3 = r[3];
         for (int x = 0; x < len; x++) {
@@ -167,9 +178,9 @@ final class MinSumLoops {
             r1[x] = q1;
             r2[x] = q2;
             r3[x] = q3;
-            sign[x] ^= q0 ^ q1 ^ q2 ^ q3;
-            int low = least[x];
-            int high = second[x];
+            sign[x] = signIn[x] ^ q0 ^ q1 ^ q2 ^ q3;
+            int low = leastIn[x];
+            int high = secondIn[x];
             int a = Math.abs(q0);
             int d = a - low;
             int cut = d & (d >> 31);

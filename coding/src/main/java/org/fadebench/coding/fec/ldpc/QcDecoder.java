@@ -160,14 +160,24 @@ final class QcDecoder extends LayeredDecoder {
                 + 2 * Lanes.rowBytes(WIDTH) + Lanes.rowBytes(4L * WIDTH);
     }
 
+    /**
+     * {@inheritDoc} Each LLR is checked as it is put: after an error (an LLR not finite) the lane
+     * holds part of the frame and is not loaded; load it again.
+     */
     @Override
     public void load(int lane, double[] llr, int off) {
         Lanes.checkLane(lane, lanes);
-        checkFinite(lane, llr, off);
         int[] group = channel[lane / WIDTH];
         int w = lane % WIDTH;
+        if (lane < WIDTH) {
+            loaded[lane] = false;
+        }
         for (int c = 0; c < columns; c++) {
-            group[slot[c] + w] = FixedPointDecoder.quantise(llr[off + c]);
+            double value = llr[off + c];
+            if (!Double.isFinite(value)) {
+                throw notFinite(lane, c, value);
+            }
+            group[slot[c] + w] = FixedPointDecoder.quantise(value);
         }
         if (lane < WIDTH) {
             loaded[lane] = true;
@@ -331,9 +341,6 @@ final class QcDecoder extends LayeredDecoder {
     }
 
     private void updateBlockRow(int i) {
-        Arrays.fill(least, MinSumLoops.ABOVE);
-        Arrays.fill(second, MinSumLoops.ABOVE);
-        Arrays.fill(parity, 0);
         int end = blockStart[i + 1];
         for (int b = blockStart[i]; b < end; b += MinSumLoops.GROUP) {
             for (int k = 0; k < MinSumLoops.GROUP; k++) {
@@ -343,7 +350,7 @@ final class QcDecoder extends LayeredDecoder {
                     group.filler(k);
                 }
             }
-            MinSumLoops.subtractAndMinima(group, parity, least, second, slice);
+            MinSumLoops.subtractAndMinima(group, b == blockStart[i], parity, least, second, slice);
         }
         correction.apply(least, second, parity, leastOut, gap, slice);
         for (int b = blockStart[i]; b < blockStart[i + 1]; b++) {
