@@ -21,8 +21,8 @@ import org.fadebench.coding.fec.Lanes;
  * edge e in row order, {@code posterior[j][lane]} per column j), and the check update is a few
  * short loops over lanes with branch-free selects ({@link MinSumLoops}, shared with the block-row
  * kernel {@link QcDecoder}; C2 in Java 17 vectorises only short loop bodies, and no 16-bit min, so
- * the messages are ints). Per check row and edge: Q = P − R into the message row with the sign
- * parity and the least and second least |Q| per lane; one loop corrects the two minima (the
+ * the messages are ints). Per check row, four edges per loop: Q = P − R into the message row with
+ * the sign parity and the least and second least |Q| per lane; one loop corrects the two minima (the
  * parity's sign put on them); then per edge R = ±(the corrected least of the others) and P = Q + R.
  * The edge of the least is not kept: an edge whose |Q| equals the least takes the second least,
  * which on a tie is the same value. This kernel decodes any H; for a quasi-cyclic code
@@ -45,7 +45,7 @@ final class FixedPointDecoder extends RowDecoder {
     static final int MESSAGE_LIMIT = 4095;
 
     private final MinSumLoops.Correction correction;
-    private final MinSumLoops.Group group;
+    private final MinSumLoops.Group edges;
     private final int[][] channel;
     private final int[][] posterior;
     private final int[][] check;
@@ -63,7 +63,7 @@ final class FixedPointDecoder extends RowDecoder {
     FixedPointDecoder(ParityCheckMatrix h, LdpcDecoding decoding, int lanes) {
         super(h, decoding, lanes);
         correction = MinSumLoops.Correction.of(decoding);
-        group = new MinSumLoops.Group(lanes);
+        edges = new MinSumLoops.Group(lanes);
         channel = new int[columns][lanes];
         posterior = new int[columns][lanes];
         check = new int[edgeColumn.length][lanes];
@@ -181,12 +181,12 @@ final class FixedPointDecoder extends RowDecoder {
         for (int e = from; e < to; e += MinSumLoops.GROUP) {
             for (int k = 0; k < MinSumLoops.GROUP; k++) {
                 if (e + k < to) {
-                    group.edge(k, posterior[edgeColumn[e + k]], check[e + k]);
+                    edges.edge(k, posterior[edgeColumn[e + k]], check[e + k]);
                 } else {
-                    group.filler(k);
+                    edges.filler(k);
                 }
             }
-            MinSumLoops.subtractAndMinima(group, e == from, parity, least, second, n);
+            MinSumLoops.subtractAndMinima(edges, e == from, parity, least, second, n);
         }
         correction.apply(least, second, parity, leastOut, gap, n);
         for (int e = from; e < to; e++) {

@@ -157,7 +157,8 @@ final class MinSumLoops {
      * For each edge k of the group: r = Q = p − r, the sign parity, the least and the second least
      * |Q| updated (one loop over the {@value #GROUP} edges, the parity and minima held in registers
      * between them: Math.abs on ints vectorises, Math.min and Math.max do not, so the minima use
-     * sign masks; the minima of a set do not depend on the order the values come in). The first
+     * sign masks, {@link #below}; the two least of a set do not depend on the order the values
+     * come in). The first
      * group of a check ({@code first}) starts the parity at 0 and the minima at {@link #ABOVE}
      * instead of reading them.
      */
@@ -182,32 +183,32 @@ final class MinSumLoops {
             int low = leastIn[x];
             int high = secondIn[x];
             int a = Math.abs(q0);
-            int d = a - low;
-            int cut = d & (d >> 31);
-            low += cut;
-            int h = a - cut - high;
-            high += h & (h >> 31);
+            int c = below(a - low);
+            low += c;
+            high += below(a - c - high);
             a = Math.abs(q1);
-            d = a - low;
-            cut = d & (d >> 31);
-            low += cut;
-            h = a - cut - high;
-            high += h & (h >> 31);
+            c = below(a - low);
+            low += c;
+            high += below(a - c - high);
             a = Math.abs(q2);
-            d = a - low;
-            cut = d & (d >> 31);
-            low += cut;
-            h = a - cut - high;
-            high += h & (h >> 31);
+            c = below(a - low);
+            low += c;
+            high += below(a - c - high);
             a = Math.abs(q3);
-            d = a - low;
-            cut = d & (d >> 31);
-            low += cut;
-            h = a - cut - high;
-            high += h & (h >> 31);
+            c = below(a - low);
+            low += c;
+            high += below(a - c - high);
             least[x] = low;
             second[x] = high;
         }
+    }
+
+    /**
+     * d where negative, else 0 (by a sign mask: Math.min on ints does not vectorise). With
+     * c = below(a − low), low + c is min(low, a) and a − c is max(low, a).
+     */
+    private static int below(int d) {
+        return d & (d >> 31);
     }
 
     /** acc ^= p, element by element. */

@@ -10,13 +10,18 @@ import org.fadebench.coding.fec.Lanes;
  *
  * <p>In a block row every column is touched at most once (each circulant is a permutation), so its
  * Z rows are independent and updating them together gives exactly the row-by-row layered result.
- * Layout: posteriors as [base column][z][lane] (one flat row), the messages of a block edge as
+ * Layout: the posteriors of a base column as one row [z][lane], the messages of a block edge as
  * [z][lane] (a row per block edge), and the per-check quantities as [z][lane]. Row z of block
- * (i, j) with shift s reads column (z + s) mod Z of block j: the block's posteriors are copied into
- * a scratch row turned by s (two {@code System.arraycopy}) and back after the update, so each step
- * of the check update ({@link MinSumLoops}) is one loop over Z·{@value #WIDTH} ints with every
- * array indexed from 0 (C2 in Java 17 does not vectorise a loop whose arrays are indexed from
- * different offsets), instead of one short loop per row and edge.
+ * (i, j) with shift s reads column (z + s) mod Z of block j, so each base column's row is kept
+ * turned: row z holds column z + t mod Z, t the column's turn. Before block (i, j) is updated,
+ * column j is brought to turn s unless it is there already: turned into a spare row (two
+ * {@code System.arraycopy}) that then takes its place. It is not turned back; between iterations
+ * every column rests at the turn of its last block in the schedule (its home turn, in which
+ * channel values and decisions are kept too). So each step of the check update
+ * ({@link MinSumLoops}) is one loop over Z·{@value #WIDTH} ints with every array indexed from 0
+ * (C2 in Java 17 does not vectorise a loop whose arrays are indexed from different offsets),
+ * instead of one short loop per row and edge, and a block edge costs one turned copy or none (a
+ * column whose blocks in a row share a shift, as the 0 shifts of the dual-diagonal part do).
  *
  * <p>Lanes: up to {@code lanes} frames are loaded; they are decoded in groups of {@value #WIDTH},
  * one group after another through one working set (posteriors and messages), so the lane count
@@ -41,9 +46,10 @@ final class QcDecoder extends LayeredDecoder {
     private final int[] blockStart;
     private final int[] blockColumn;
     private final int[] blockShift;
-    /** Per base column: the turn it rests at between iterations (the shift of its last block in the schedule). */
-    private final int[] home;
-    /** Per base column: the turn its posterior row has now. */
+    /**
+     * Per base column: the turn its posterior row has now; between iterations its home turn (the
+     * shift of its last block in the schedule), the turn channel values and decisions are kept at.
+     */
     private final int[] turn;
     /** Per column of H: its place in the group's rows (base column · Z·WIDTH + turned row · WIDTH). */
     private final int[] slot;
@@ -55,7 +61,7 @@ final class QcDecoder extends LayeredDecoder {
     private final int[][] posterior;
     /** A row the next turned posteriors are copied into; swapped with the row it was turned from. */
     private int[] spare;
-    private final MinSumLoops.Group group;
+    private final MinSumLoops.Group edges;
     private final int[][] check;
     private final int[] least;
     private final int[] second;
@@ -91,16 +97,16 @@ final class QcDecoder extends LayeredDecoder {
             }
             blockStart[i + 1] = b;
         }
-        home = new int[baseColumns];
+        // each column's home turn: the shift of its last block in the schedule
+        turn = new int[baseColumns];
         for (int b = 0; b < blocks; b++) {
-            home[blockColumn[b]] = blockShift[b];
+            turn[blockColumn[b]] = blockShift[b];
         }
-        turn = home.clone();
         slot = new int[columns];
         for (int c = 0; c < columns; c++) {
             int j = qc.position(c) / lifting;
             int z = qc.position(c) % lifting;
-            slot[c] = j * slice + Math.floorMod(z - home[j], lifting) * WIDTH;
+            slot[c] = j * slice + Math.floorMod(z - turn[j], lifting) * WIDTH;
         }
         correction = MinSumLoops.Correction.of(decoding);
         int groups = groups(lanes);
@@ -116,7 +122,7 @@ final class QcDecoder extends LayeredDecoder {
         posterior = new int[baseColumns][slice];
         mask = new int[slice];
         spare = new int[slice];
-        group = new MinSumLoops.Group(slice);
+        edges = new MinSumLoops.Group(slice);
         check = new int[blocks][slice];
         least = new int[slice];
         second = new int[slice];
@@ -317,7 +323,7 @@ final class QcDecoder extends LayeredDecoder {
      * {@code from}, the posteriors of a base column at turn {@code at}, into {@code to} at turn
      * {@code want}: row z of {@code to} is row z + want − at (mod Z) of {@code from} (two copies).
      */
-    private void turn(int[] from, int at, int[] to, int want) {
+    private void copyTurned(int[] from, int at, int[] to, int want) {
         int d = Math.floorMod(want - at, lifting) * WIDTH;
         System.arraycopy(from, d, to, 0, slice - d);
         System.arraycopy(from, 0, to, slice - d, d);
@@ -331,7 +337,7 @@ final class QcDecoder extends LayeredDecoder {
     private int[] turned(int b) {
         int j = blockColumn[b];
         if (turn[j] != blockShift[b]) {
-            turn(posterior[j], turn[j], spare, blockShift[b]);
+            copyTurned(posterior[j], turn[j], spare, blockShift[b]);
             int[] old = posterior[j];
             posterior[j] = spare;
             spare = old;
@@ -345,12 +351,12 @@ final class QcDecoder extends LayeredDecoder {
         for (int b = blockStart[i]; b < end; b += MinSumLoops.GROUP) {
             for (int k = 0; k < MinSumLoops.GROUP; k++) {
                 if (b + k < end) {
-                    group.edge(k, turned(b + k), check[b + k]);
+                    edges.edge(k, turned(b + k), check[b + k]);
                 } else {
-                    group.filler(k);
+                    edges.filler(k);
                 }
             }
-            MinSumLoops.subtractAndMinima(group, b == blockStart[i], parity, least, second, slice);
+            MinSumLoops.subtractAndMinima(edges, b == blockStart[i], parity, least, second, slice);
         }
         correction.apply(least, second, parity, leastOut, gap, slice);
         for (int b = blockStart[i]; b < blockStart[i + 1]; b++) {
