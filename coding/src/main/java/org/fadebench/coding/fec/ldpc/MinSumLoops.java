@@ -7,8 +7,9 @@ import org.fadebench.coding.fec.Lanes;
  * The loops of the fixed-point min-sum check update, shared by both kernels ({@link FixedPointDecoder}
  * on rows over lanes, {@link QcDecoder} on the Z rows of a block row over lanes): each runs over
  * elements 0 to {@code len} − 1 of its arrays, branch-free (sign masks from arithmetic shifts), a
- * body short enough for C2's loop vectoriser (Java 17 vectorises only short bodies, and no loop
- * whose arrays are indexed from different offsets).
+ * body C2's loop vectoriser takes (Java 17 vectorises no loop whose arrays are indexed from
+ * different offsets or from a start other than 0; Q and the minima of four edges in one loop it
+ * does, the messages of two edges in one loop it does not).
  * Element x of the per-check rows ({@code sign}, {@code least}, {@code second}, {@code leastOut},
  * {@code gap}) belongs to the check whose message is element x of the edge's row. Numbers are in
  * the steps of {@link FixedPointDecoder}.
