@@ -159,9 +159,8 @@ final class MinSumLoops {
      * |Q| updated (one loop over the {@value #GROUP} edges, the parity and minima held in registers
      * between them: Math.abs on ints vectorises, Math.min and Math.max do not, so the minima use
      * sign masks, {@link #below}; the two least of a set do not depend on the order the values
-     * come in). The first
-     * group of a check ({@code first}) starts the parity at 0 and the minima at {@link #ABOVE}
-     * instead of reading them.
+     * come in). The first group of a check ({@code first}) starts the parity at 0 and the minima
+     * at {@link #ABOVE} instead of reading them.
      */
     static void subtractAndMinima(Group group, boolean first, int[] sign, int[] least, int[] second, int len) {
         int[][] p = group.p;
@@ -181,32 +180,23 @@ final class MinSumLoops {
             r2[x] = q2;
             r3[x] = q3;
             sign[x] = signIn[x] ^ q0 ^ q1 ^ q2 ^ q3;
+            // the two least of (least, second) and |q0| .. |q3|, one value after another (see below)
+            int a0 = Math.abs(q0), a1 = Math.abs(q1), a2 = Math.abs(q2), a3 = Math.abs(q3);
             int low = leastIn[x];
             int high = secondIn[x];
-            int a = Math.abs(q0);
-            int c = below(a - low);
-            low += c;
-            high += below(a - c - high);
-            a = Math.abs(q1);
-            c = below(a - low);
-            low += c;
-            high += below(a - c - high);
-            a = Math.abs(q2);
-            c = below(a - low);
-            low += c;
-            high += below(a - c - high);
-            a = Math.abs(q3);
-            c = below(a - low);
-            low += c;
-            high += below(a - c - high);
-            least[x] = low;
-            second[x] = high;
+            int c0 = below(a0 - low), l0 = low + c0, h0 = high + below(a0 - c0 - high);
+            int c1 = below(a1 - l0), l1 = l0 + c1, h1 = h0 + below(a1 - c1 - h0);
+            int c2 = below(a2 - l1), l2 = l1 + c2, h2 = h1 + below(a2 - c2 - h1);
+            int c3 = below(a3 - l2);
+            least[x] = l2 + c3;
+            second[x] = h2 + below(a3 - c3 - h2);
         }
     }
 
     /**
      * d where negative, else 0 (by a sign mask: Math.min on ints does not vectorise). With
-     * c = below(a − low), low + c is min(low, a) and a − c is max(low, a).
+     * c = below(a − low), low + c is min(low, a) and a − c is max(low, a), so the two least of
+     * (low, high) and a are low + c and high + below(a − c − high).
      */
     private static int below(int d) {
         return d & (d >> 31);
