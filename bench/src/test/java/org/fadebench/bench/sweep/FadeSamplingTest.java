@@ -104,19 +104,25 @@ class FadeSamplingTest {
         return new LinkSettings(mod, code, rx, code.transmitAntennas(), Fading.RAYLEIGH, frameBits, 0);
     }
 
+    /** At the closed form's FER 1e-7: the ±20 % estimate's interval covers it, with enough effective error frames. */
+    private static void assertCoversClosedFormAtFer1e7(LinkSettings link, long seed) {
+        double snrDb = snrDbAt(link, 1e-7);
+        double theory = closedFormFer(link, snrDb);
+        assertEquals(1e-7, theory, 1e-9);
+        PointResult r = fadeSampled(link, snrDb, seed, 4_000_000, 0.2);
+        String what = link.describe() + " at " + snrDb + " dB: " + r.counts().fer() + " [" + r.ferLow() + ", "
+                + r.ferHigh() + "], closed form " + theory + ", frames " + r.counts().frames();
+        assertTrue(r.ferLow() <= theory && theory <= r.ferHigh(), what);
+        assertTrue(r.trusted() && r.ferRelativeHalfWidth() <= 0.2, what);
+    }
+
     /** Nakagami-m 1×2 MRC, BPSK, 256-bit quasi-static frames, m = 2 and m = 0.7: the same check at FER 1e-7. */
     @Test
     void coversTheNakagamiClosedFormAtFer1e7() {
         for (double m : new double[] {2.0, 0.7}) {
             LinkSettings link = new LinkSettings(Modulation.BPSK, SpaceTimeCodes.NONE, 2, 1,
                     ChannelSpec.of(Fading.NAKAGAMI).withNakagamiM(m), 256, 0, Equaliser.MF, FrameCoding.NONE);
-            double snrDb = snrDbAt(link, 1e-7);
-            double theory = closedFormFer(link, snrDb);
-            PointResult r = fadeSampled(link, snrDb, 20261204L, 4_000_000, 0.2);
-            String what = link.describe() + " at " + snrDb + " dB: " + r.counts().fer() + " [" + r.ferLow() + ", "
-                    + r.ferHigh() + "], closed form " + theory + ", frames " + r.counts().frames();
-            assertTrue(r.ferLow() <= theory && theory <= r.ferHigh(), what);
-            assertTrue(r.trusted() && r.ferRelativeHalfWidth() <= 0.2, what);
+            assertCoversClosedFormAtFer1e7(link, 20261204L);
         }
     }
 
@@ -158,15 +164,7 @@ class FadeSamplingTest {
     void coversTheClosedFormAtFer1e7() {
         for (SpaceTimeCode code : new SpaceTimeCode[] {SpaceTimeCodes.NONE, SpaceTimeCodes.ALAMOUTI}) {
             for (Modulation mod : new Modulation[] {Modulation.BPSK, Modulation.QPSK}) {
-                LinkSettings link = link(mod, code, 2, 256);
-                double snrDb = snrDbAt(link, 1e-7);
-                double theory = closedFormFer(link, snrDb);
-                assertEquals(1e-7, theory, 1e-9);
-                PointResult r = fadeSampled(link, snrDb, 20261203L, 4_000_000, 0.2);
-                String what = link.describe() + " at " + snrDb + " dB: " + r.counts().fer() + " [" + r.ferLow() + ", "
-                        + r.ferHigh() + "], closed form " + theory + ", frames " + r.counts().frames();
-                assertTrue(r.ferLow() <= theory && theory <= r.ferHigh(), what);
-                assertTrue(r.trusted() && r.ferRelativeHalfWidth() <= 0.2, what);
+                assertCoversClosedFormAtFer1e7(link(mod, code, 2, 256), 20261203L);
             }
         }
     }
