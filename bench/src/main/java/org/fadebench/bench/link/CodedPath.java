@@ -123,8 +123,10 @@ final class CodedPath implements FramePath {
         draws.fillBits(codedBits, codedLength, codedBits.length - codedLength);
         constellation.map(codedBits, 0, transmission.symbols, 0, symbols);
         transmission.transmit(draws, n0, frame);
-        laneWeight[lane] = transmission.frameWeight();
-        laneFadeEnergy[lane] = transmission.frameFadeEnergy();
+        if (transmission.weighted()) {
+            laneWeight[lane] = transmission.frameWeight();
+            laneFadeEnergy[lane] = transmission.frameFadeEnergy();
+        }
         constellation.demap(llrMethod, transmission.estimates, transmission.gain, 0, n0, llr, 0, symbols);
         codec.receive(lane, llr, 0);
         int symbolErrors = 0;
