@@ -328,16 +328,33 @@ public final class QamConstellation {
     /**
      * The LLRs of one axis: the max-log term (min1 - min0)·w over the L amplitudes and, when
      * {@code exact}, the log-sum-exp correction ln Σ_{b=0} e^{-(d²-min0)w} - ln Σ_{b=1} e^{-(d²-min1)w}.
+     * Max-log with 2 or 4 levels (BPSK, QPSK, 16-QAM) takes each d² once and the minima of the
+     * label pattern's fixed subsets without a branch: the same doubles as the search.
      */
     private int axisLlr(double y, double weight, boolean exact, double[] llr, int l) {
+        final double[] amp = amplitudeOfLevel;
+        if (!exact && levels == 2) {
+            // labels 0, 1
+            llr[l] = (squared(y - amp[1]) - squared(y - amp[0])) * weight;
+            return l + 1;
+        }
+        if (!exact && levels == 4) {
+            // labels 0, 1, 3, 2: the first bit is 0 on levels 0 and 1, the second on levels 0 and 3
+            double d0 = squared(y - amp[0]);
+            double d1 = squared(y - amp[1]);
+            double d2 = squared(y - amp[2]);
+            double d3 = squared(y - amp[3]);
+            llr[l] = (Math.min(d2, d3) - Math.min(d0, d1)) * weight;
+            llr[l + 1] = (Math.min(d1, d2) - Math.min(d0, d3)) * weight;
+            return l + 2;
+        }
         final int m = bitsPerAxis;
         for (int j = 0; j < m; j++) {
             int shift = m - 1 - j;
             double min0 = Double.POSITIVE_INFINITY;
             double min1 = Double.POSITIVE_INFINITY;
             for (int i = 0; i < levels; i++) {
-                double d = y - amplitudeOfLevel[i];
-                double d2 = d * d;
+                double d2 = squared(y - amp[i]);
                 if (((labelOfLevel[i] >>> shift) & 1) == 0) {
                     if (d2 < min0) {
                         min0 = d2;
@@ -351,8 +368,7 @@ public final class QamConstellation {
                 double sum0 = 0;
                 double sum1 = 0;
                 for (int i = 0; i < levels; i++) {
-                    double d = y - amplitudeOfLevel[i];
-                    double d2 = d * d;
+                    double d2 = squared(y - amp[i]);
                     if (((labelOfLevel[i] >>> shift) & 1) == 0) {
                         sum0 += Math.exp(-(d2 - min0) * weight);
                     } else {
@@ -364,6 +380,10 @@ public final class QamConstellation {
             llr[l++] = value;
         }
         return l;
+    }
+
+    private static double squared(double d) {
+        return d * d;
     }
 
     /**
