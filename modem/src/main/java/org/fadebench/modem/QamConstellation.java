@@ -84,25 +84,31 @@ public final class QamConstellation {
      * @param symbols    interleaved complex output, written from complex index {@code symOffset}
      */
     public void map(byte[] bits, int bitOffset, double[] symbols, int symOffset, int count) {
-        int b = bitOffset;
-        int o = symOffset << 1;
-        final int m = bitsPerAxis;
-        for (int n = 0; n < count; n++) {
-            int labelI = 0;
-            for (int j = 0; j < m; j++) {
-                labelI = (labelI << 1) | bits[b++];
-            }
-            symbols[o++] = amplitudeOfLabel[labelI];
-            if (twoAxes) {
-                int labelQ = 0;
-                for (int j = 0; j < m; j++) {
-                    labelQ = (labelQ << 1) | bits[b++];
-                }
-                symbols[o++] = amplitudeOfLabel[labelQ];
-            } else {
-                symbols[o++] = 0.0;
-            }
+        for (int n = 0, b = bitOffset, o = symOffset << 1; n < count; n++, b += bitsPerSymbol, o += 2) {
+            symbols[o] = amplitudeOfLabel[axisLabel(bits, b)];
+            symbols[o + 1] = twoAxes ? amplitudeOfLabel[axisLabel(bits, b + bitsPerAxis)] : 0.0;
         }
+    }
+
+    /**
+     * {@link #map(byte[], int, double[], int, int)} into planes of real and imaginary parts, the
+     * symbols' bits {@code bitStride} apart: the bits at {@code bits[bitOffset + i·bitStride ..]}
+     * to {@code re[i]}, {@code im[i]} for i in {@code 0 .. count)}.
+     */
+    public void map(byte[] bits, int bitOffset, int bitStride, double[] re, double[] im, int count) {
+        for (int i = 0, b = bitOffset; i < count; i++, b += bitStride) {
+            re[i] = amplitudeOfLabel[axisLabel(bits, b)];
+            im[i] = twoAxes ? amplitudeOfLabel[axisLabel(bits, b + bitsPerAxis)] : 0.0;
+        }
+    }
+
+    /** The label of one axis: {@link #bitsPerAxis} bits from {@code bits[b]}, the first most significant. */
+    private int axisLabel(byte[] bits, int b) {
+        int label = 0;
+        for (int j = 0; j < bitsPerAxis; j++) {
+            label = (label << 1) | bits[b + j];
+        }
+        return label;
     }
 
     /**
@@ -302,14 +308,17 @@ public final class QamConstellation {
 
     private void demap(double[] estimates, double[] gain, int symOffset, double n0, double[] llr, int llrOffset,
                        int count, boolean exact) {
-        int l = llrOffset;
-        for (int n = 0; n < count; n++) {
+        for (int n = 0, l = llrOffset; n < count; n++, l += bitsPerSymbol) {
             int k = symOffset + n;
-            double w = gain[k] / n0;
-            l = axisLlr(estimates[2 * k], w, exact, llr, l);
-            if (twoAxes) {
-                l = axisLlr(estimates[2 * k + 1], w, exact, llr, l);
-            }
+            symbolLlr(estimates[2 * k], estimates[2 * k + 1], gain[k] / n0, exact, llr, l);
+        }
+    }
+
+    /** The LLRs of the estimate (re, im) at weight w = gain / n0 (BPSK: of re alone), from {@code llr[l]}. */
+    private void symbolLlr(double re, double im, double w, boolean exact, double[] llr, int l) {
+        int next = axisLlr(re, w, exact, llr, l);
+        if (twoAxes) {
+            axisLlr(im, w, exact, llr, next);
         }
     }
 
@@ -322,6 +331,20 @@ public final class QamConstellation {
             demapExact(estimates, gain, symOffset, n0, llr, llrOffset, count);
         } else {
             demapMaxLog(estimates, gain, symOffset, n0, llr, llrOffset, count);
+        }
+    }
+
+    /**
+     * {@link #demap(LlrMethod, double[], double[], int, double, double[], int, int)} from planes of
+     * real and imaginary parts, the symbols' LLRs {@code llrStride} apart: the estimate
+     * {@code re[i]}, {@code im[i]} with gain {@code gain[i]} to {@code llr[llrOffset + i·llrStride ..]}
+     * for i in {@code 0 .. count)}.
+     */
+    public void demap(LlrMethod method, double[] re, double[] im, double[] gain, double n0, double[] llr,
+                      int llrOffset, int llrStride, int count) {
+        boolean exact = method == LlrMethod.EXACT;
+        for (int i = 0, l = llrOffset; i < count; i++, l += llrStride) {
+            symbolLlr(re[i], im[i], gain[i] / n0, exact, llr, l);
         }
     }
 
