@@ -117,8 +117,11 @@ final class DualDiagonalEncoder implements LdpcEncoder {
             }
         }
         for (int c = 0, p = wordOff + k; c < mb; c++) {
-            for (int x = 0; x < z; x++) {
-                word[p++] = (byte) ((parity[c * words + (x >>> 6)] >>> x) & 1);
+            for (int w = 0; w < words; w++) {
+                long v = parity[c * words + w];
+                for (int x = 64 * w, end = Math.min(x + 64, z); x < end; x++, v >>>= 1) {
+                    word[p++] = (byte) (v & 1);
+                }
             }
         }
     }
