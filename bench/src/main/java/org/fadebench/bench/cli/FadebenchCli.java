@@ -18,7 +18,7 @@ import picocli.CommandLine.Command;
 public final class FadebenchCli implements Runnable {
 
     /** The files every {@code run} writes, for the help texts. */
-    static final String RUN_OUTPUTS = "results.csv, results.json, fer.png, fer.svg and scenario.yaml";
+    static final String RUN_OUTPUTS = "results.csv, results.json, fer.png, fer.svg, report.html and scenario.yaml";
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;

@@ -1,6 +1,8 @@
 package org.fadebench.bench.cli;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.fadebench.bench.analysis.RunSummary;
@@ -64,10 +66,22 @@ final class RunCommand implements Callable<Integer> {
         if (!plan.quiet()) {
             plan.warnings().forEach(w -> spec.commandLine().getErr().println("fadebench run: warning: " + w));
         }
-        SweepJob job = new SweepJob(plan, resume, spec.commandLine().getOut());
+        SweepJob job = new SweepJob(plan, resume, spec.commandLine().getOut(), commandArgs());
         int code = job.run();
         summary = job.summary();
         return code;
+    }
+
+    /**
+     * The arguments after {@code fadebench}; a run called from another command (the demo) names
+     * itself, so the line is the equivalent run.
+     */
+    private List<String> commandArgs() {
+        List<String> args = new ArrayList<>(spec.commandLine().getParseResult().originalArgs());
+        if (spec.parent() == null) {
+            args.add(0, spec.name());
+        }
+        return args;
     }
 
     /** Builds the plan; a problem becomes invalid input that points at the option or the scenario line. */

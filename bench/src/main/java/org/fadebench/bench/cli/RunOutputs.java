@@ -15,6 +15,7 @@ import java.util.Arrays;
 import java.util.List;
 import org.fadebench.bench.report.Checkpoint;
 import org.fadebench.bench.report.FerPlot;
+import org.fadebench.bench.report.HtmlReport;
 import org.fadebench.bench.run.RunPlan;
 import org.fadebench.bench.settings.RunSettings;
 import org.fadebench.bench.settings.Setting;
@@ -32,7 +33,7 @@ final class RunOutputs {
 
     /** The files of the output folder that belong to a run: its results and its checkpoint. */
     static final List<String> FOLDER_FILES = List.of(RESULTS_CSV, RESULTS_JSON, FerPlot.PNG_FILE, FerPlot.SVG_FILE,
-            SCENARIO, Checkpoint.FILE_NAME);
+            HtmlReport.FILE, SCENARIO, Checkpoint.FILE_NAME);
 
     /** A file the run reads or writes, with the words that name it in a message. */
     record Named(String label, Path path) {

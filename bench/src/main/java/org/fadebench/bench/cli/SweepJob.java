@@ -14,6 +14,8 @@ import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.channel.ChannelTrace;
 import org.fadebench.bench.report.Archive;
 import org.fadebench.bench.report.FerPlot;
+import org.fadebench.bench.report.HtmlReport;
+import org.fadebench.bench.report.RunReport;
 import org.fadebench.bench.report.AtomicFiles;
 import org.fadebench.bench.report.Checkpoint;
 import org.fadebench.bench.report.Numbers;
@@ -29,7 +31,7 @@ import org.fadebench.bench.sweep.SweepOutcome;
 /**
  * Runs a {@link RunPlan}: prints the table as points finish, shows progress on a terminal, keeps a
  * checkpoint, stops cleanly on Ctrl-C or SIGTERM (during the sweep and during the outage bounds;
- * exit code 130 or 143), and writes results.csv, results.json, the
+ * exit code 130 or 143), and writes results.csv, results.json, the plot, report.html, the
  * effective scenario and, if asked, an archive.
  */
 final class SweepJob {
@@ -37,13 +39,17 @@ final class SweepJob {
     private final RunPlan plan;
     private final boolean resume;
     private final PrintWriter out;
+    /** The command line's arguments after {@code fadebench}, for the report's provenance. */
+    private final List<String> args;
     /** The summary of the finished sweep, once {@link #run} has written the outputs. */
     private RunSummary summary;
 
-    SweepJob(RunPlan plan, boolean resume, PrintWriter out) {
+    /** @param args the command line's arguments after {@code fadebench}, named in report.html */
+    SweepJob(RunPlan plan, boolean resume, PrintWriter out, List<String> args) {
         this.plan = plan;
         this.resume = resume;
         this.out = out;
+        this.args = List.copyOf(args);
     }
 
     /** Checks that the output folder can be used, before any simulation starts. */
@@ -184,8 +190,9 @@ final class SweepJob {
                     plan.warnings());
             ResultsJson.write(json, run);
             written.add(json);
+            String svg = null;
             if (!results.isEmpty()) {
-                FerPlot.write(dir, plan.link(), plan.seed(), results, plan.confidence(), curves, plan.targetFer(),
+                svg = FerPlot.write(dir, plan.link(), plan.seed(), results, plan.confidence(), curves, plan.targetFer(),
                         plan.plotAxes());
                 written.add(dir.resolve(FerPlot.PNG_FILE));
                 written.add(dir.resolve(FerPlot.SVG_FILE));
@@ -197,6 +204,10 @@ final class SweepJob {
             Path scenario = dir.resolve(RunOutputs.SCENARIO);
             AtomicFiles.writeString(scenario, plan.scenarioText());
             written.add(scenario);
+            Path report = dir.resolve(HtmlReport.FILE);
+            RunReport.write(report, run, plan.confidence(), svg, plan.scenarioText(),
+                    HtmlReport.Provenance.now(Long.toString(plan.seed()), args));
+            written.add(report);
             if (interrupted) {
                 Checkpoint.write(dir, fingerprint, outcome.states());
             } else {

@@ -3,19 +3,10 @@ package org.fadebench.bench.report;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
-import java.awt.Shape;
 import java.awt.Stroke;
-import java.awt.font.FontRenderContext;
-import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
-import java.awt.geom.Path2D;
-import java.awt.geom.Rectangle2D;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.text.DecimalFormat;
-import java.text.DecimalFormatSymbols;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
@@ -34,33 +25,24 @@ import org.fadebench.coding.fec.ChannelCodes;
 import org.fadebench.coding.fec.Crc;
 import org.fadebench.coding.fec.FecScheme;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
-import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
-import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;
-import org.jfree.chart.axis.NumberTickUnit;
-import org.jfree.chart.axis.ValueAxis;
-import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
-import org.jfree.chart.plot.SeriesRenderingOrder;
-import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.DeviationRenderer;
 import org.jfree.chart.renderer.xy.XYErrorRenderer;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
-import org.jfree.chart.text.TextUtils;
-import org.jfree.chart.title.LegendTitle;
-import org.jfree.chart.title.TextTitle;
 import org.jfree.chart.ui.Layer;
-import org.jfree.chart.ui.RectangleAnchor;
-import org.jfree.chart.ui.RectangleEdge;
-import org.jfree.chart.ui.RectangleInsets;
-import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.jfree.data.xy.YIntervalSeries;
 import org.jfree.data.xy.YIntervalSeriesCollection;
-import org.jfree.svg.SVGGraphics2D;
+
+import static org.fadebench.bench.report.PlotParts.NOTE_TEXT;
+import static org.fadebench.bench.report.PlotParts.RUN_FONT;
+import static org.fadebench.bench.report.PlotParts.addSeries;
+import static org.fadebench.bench.report.PlotParts.capitalised;
+import static org.fadebench.bench.report.PlotParts.textLine;
 
 /**
  * Writes {@code fer.png} and {@code fer.svg}: two panels over a shared x axis (SNR or Eb/N0, see
@@ -115,24 +97,8 @@ public final class FerPlot {
     private static final Color BLUISH_GREEN = new Color(0x009E73);
     private static final Color REDDISH_PURPLE = new Color(0xCC79A7);
     private static final Color ORANGE = new Color(0xE69F00);
-    private static final Color TARGET_GREY = new Color(0x777777);
-    private static final Color GRID = new Color(0xD9D9D9);
-    private static final Color MINOR_GRID = new Color(0xF0F0F0);
-    private static final String FONT = Font.SANS_SERIF;
-    private static final Font TITLE_FONT = new Font(FONT, Font.BOLD, 21);
-    private static final Font RUN_FONT = new Font(FONT, Font.PLAIN, 14);
     /** Widest line of the title and the run lines, in pixels: the chart less its padding and a margin. */
-    private static final double TEXT_WIDTH = WIDTH - 80;
-    /** The y axis reaches this factor beyond 1 and below its lowest decade. */
-    private static final double MARGIN = 1.6;
-
-    static {
-        if (System.getProperty("java.awt.headless") == null) {
-            System.setProperty("java.awt.headless", "true");
-        }
-        // Rotated text (the y-axis title) as a string, not glyph outlines, so the SVG keeps it as text.
-        TextUtils.setUseDrawRotatedStringWorkaround(false);
-    }
+    static final double TEXT_WIDTH = WIDTH - 80;
 
     /** The quantity on the x axis. */
     public enum XQuantity {
@@ -189,22 +155,18 @@ public final class FerPlot {
 
     /**
      * Writes {@value #PNG_FILE} ({@value #WIDTH} x {@value #HEIGHT} pixels) and {@value #SVG_FILE}
-     * into {@code directory}, each atomically.
+     * into {@code directory}, each atomically, and returns the drawing as an SVG element to embed in
+     * HTML (see {@link HtmlReport}).
      *
      * @param seed       the run's master seed, named under the title
      * @param confidence the level of the points' intervals, for the subtitle (e.g. 0.95)
      * @param bounds     the outage bounds to draw, or null when they do not apply to the channel
      * @param targetFer  the FER drawn as a line across the FER panel
      */
-    public static void write(Path directory, LinkSettings link, long seed, List<PointResult> points, double confidence,
-                             BoundCurves bounds, double targetFer, Axes axes) throws IOException {
+    public static String write(Path directory, LinkSettings link, long seed, List<PointResult> points,
+                               double confidence, BoundCurves bounds, double targetFer, Axes axes) throws IOException {
         JFreeChart chart = chart(link, seed, points, confidence, bounds, targetFer, axes);
-        AtomicFiles.write(directory.resolve(PNG_FILE), out -> ChartUtils.writeChartAsPNG(out, chart, WIDTH, HEIGHT));
-        SVGGraphics2D svg = new SVGGraphics2D(WIDTH, HEIGHT);
-        svg.setDefsKeyPrefix("fer-"); // fixed ids, so the same results give the same file
-        chart.draw(svg, new Rectangle2D.Double(0, 0, WIDTH, HEIGHT));
-        byte[] document = svg.getSVGDocument().getBytes(StandardCharsets.UTF_8);
-        AtomicFiles.write(directory.resolve(SVG_FILE), out -> out.write(document));
+        return PlotParts.write(chart, WIDTH, HEIGHT, directory.resolve(PNG_FILE), directory.resolve(SVG_FILE), "fer-");
     }
 
     /** The chart, for callers that draw it elsewhere. */
@@ -219,132 +181,52 @@ public final class FerPlot {
         DoubleUnaryOperator x = axes.x() == XQuantity.EBN0 ? link::ebN0Db : snrDb -> snrDb;
         double ferFloor = axes.fixedFloor() ? axes.floor() : axisLowerBound(points, Measure.FER);
         double berFloor = axes.fixedFloor() ? axes.floor() : axisLowerBound(points, Measure.BER);
-        XYPlot fer = panel(FER_AXIS_TITLE, ferFloor);
+        XYPlot fer = PlotParts.panel(FER_AXIS_TITLE, ferFloor);
         addSimulated(fer, points, Measure.FER, x, ferFloor);
         if (bounds != null) {
             addBounds(fer, link, bounds, ferFloor, x);
         }
         Optional<NormalApproximation> normal = points.isEmpty() ? Optional.empty() : NormalApproximation.of(link);
         normal.ifPresent(a -> addNormalApproximation(fer, a, points, ferFloor, x));
-        fer.addRangeMarker(targetLine(targetFer), Layer.BACKGROUND);
-        XYPlot ber = panel(BER_AXIS_TITLE, berFloor);
+        fer.addRangeMarker(PlotParts.targetLine(targetFer), Layer.BACKGROUND);
+        XYPlot ber = PlotParts.panel(BER_AXIS_TITLE, berFloor);
         addSimulated(ber, points, Measure.BER, x, berFloor);
 
-        CombinedDomainXYPlot plot = new CombinedDomainXYPlot(xAxis(link, axes.x()));
+        CombinedDomainXYPlot plot = new CombinedDomainXYPlot(PlotParts.xAxis(xAxisTitle(link, axes.x())));
         plot.setGap(16.0);
         plot.setBackgroundPaint(Color.WHITE);
         plot.setOutlineVisible(false);
         plot.add(fer, 3);
         plot.add(ber, 2);
 
-        List<String> titleLines = wrap(title(link), TITLE_FONT);
-        JFreeChart chart = new JFreeChart(titleLines.get(0), TITLE_FONT, plot, false);
-        chart.setBackgroundPaint(Color.WHITE);
-        chart.setPadding(new RectangleInsets(8, 8, 12, 20));
-        for (String line : titleLines.subList(1, titleLines.size())) {
-            chart.addSubtitle(textLine(line, TITLE_FONT, Color.BLACK, 0));
-        }
+        JFreeChart chart = PlotParts.titled(title(link), plot, TEXT_WIDTH);
         List<String> runLines = wrap(runLine(link, seed), RUN_FONT);
         for (int i = 0; i < runLines.size(); i++) {
-            chart.addSubtitle(textLine(runLines.get(i), RUN_FONT, new Color(0x222222), i == 0 ? 4 : 0));
+            chart.addSubtitle(textLine(runLines.get(i), RUN_FONT, PlotParts.TEXT, i == 0 ? 4 : 0));
         }
         String sub = bounds != null ? subtitle(bounds.settings(), confidence)
                 : String.format(Locale.ROOT, "bars: %s %% confidence intervals   ·   %s", Numbers.db(100 * confidence),
                         link.channel().awgn() ? "no outage bounds over AWGN" : RunSummary.NO_BOUNDS);
-        chart.addSubtitle(textLine(sub, RUN_FONT, new Color(0x444444), 6));
-        chart.addSubtitle(textLine(bounds != null ? STYLE_WORDS : STYLE_WORDS_NO_BOUNDS, RUN_FONT, new Color(0x444444), 0));
+        chart.addSubtitle(textLine(sub, RUN_FONT, NOTE_TEXT, 6));
+        chart.addSubtitle(textLine(bounds != null ? STYLE_WORDS : STYLE_WORDS_NO_BOUNDS, RUN_FONT, NOTE_TEXT, 0));
         if (normal.isPresent()) {
-            chart.addSubtitle(textLine(NORMAL_APPROX_WORDS, RUN_FONT, new Color(0x444444), 0));
+            chart.addSubtitle(textLine(NORMAL_APPROX_WORDS, RUN_FONT, NOTE_TEXT, 0));
         }
         double above = 6;
         for (String note : RunSummary.of(link, points, bounds, targetFer, RunSummary.noBounds(link)).reachLines()) {
             for (String line : wrap(note, RUN_FONT)) {
-                chart.addSubtitle(textLine(line, RUN_FONT, new Color(0x444444), above));
+                chart.addSubtitle(textLine(line, RUN_FONT, NOTE_TEXT, above));
                 above = 0;
             }
         }
-        // items flow in rows as their widths allow, so a long label never runs into its neighbour
-        LegendTitle legend = new LegendTitle(plot);
-        legend.setPosition(RectangleEdge.BOTTOM);
-        legend.setItemFont(new Font(FONT, Font.PLAIN, 14));
-        legend.setFrame(BlockBorder.NONE);
-        legend.setMargin(new RectangleInsets(12, 0, 0, 0));
-        legend.setItemLabelPadding(new RectangleInsets(3, 4, 3, 14));
-        chart.addSubtitle(legend);
+        chart.addSubtitle(PlotParts.legend(plot));
         return chart;
-    }
-
-    /** A centred line of text under the title; {@code above}: space above it in pixels. */
-    private static TextTitle textLine(String text, Font font, Color colour, double above) {
-        TextTitle t = new TextTitle(text, font);
-        t.setPaint(colour);
-        t.setPadding(new RectangleInsets(above, 0, 2, 0));
-        return t;
-    }
-
-    /** One panel: white, faint decade grid, a logarithmic y axis from {@code floor} to just above 1. */
-    private static XYPlot panel(String yTitle, double floor) {
-        XYPlot plot = new XYPlot();
-        plot.setBackgroundPaint(Color.WHITE);
-        plot.setOutlinePaint(GRID);
-        plot.setDomainGridlinePaint(GRID);
-        plot.setRangeGridlinePaint(GRID);
-        plot.setRangeMinorGridlinesVisible(true);
-        plot.setRangeMinorGridlinePaint(MINOR_GRID);
-        plot.setDomainGridlineStroke(new BasicStroke(1f));
-        plot.setRangeGridlineStroke(new BasicStroke(1f));
-        plot.setRangeMinorGridlineStroke(new BasicStroke(1f));
-        plot.setAxisOffset(RectangleInsets.ZERO_INSETS);
-        plot.setSeriesRenderingOrder(SeriesRenderingOrder.FORWARD);
-        plot.setRangeAxis(rateAxis(yTitle, floor));
-        return plot;
-    }
-
-    /** The target FER: a thin solid grey line (no bound is solid, no simulated curve is grey), labelled. */
-    private static ValueMarker targetLine(double targetFer) {
-        ValueMarker m = new ValueMarker(targetFer, TARGET_GREY, new BasicStroke(1.4f));
-        m.setLabel("target FER " + targetFer);
-        m.setLabelFont(new Font(FONT, Font.PLAIN, 13));
-        m.setLabelPaint(TARGET_GREY);
-        m.setLabelBackgroundColor(new Color(255, 255, 255, 0));
-        m.setLabelAnchor(RectangleAnchor.BOTTOM_LEFT);
-        m.setLabelTextAnchor(TextAnchor.TOP_LEFT);
-        m.setLabelOffset(new RectangleInsets(4, 6, 4, 6));
-        return m;
     }
 
     static String xAxisTitle(LinkSettings link, XQuantity x) {
         return x == XQuantity.SNR ? SNR_AXIS_TITLE
                 : "Eb/N0 (dB) = SNR − 10·log10(R), R = " + Numbers.db(link.bitsPerChannelUse())
                         + " information bits per channel use";
-    }
-
-    private static NumberAxis xAxis(LinkSettings link, XQuantity quantity) {
-        NumberAxis x = new NumberAxis(xAxisTitle(link, quantity));
-        x.setAutoRangeIncludesZero(false);
-        x.setAutoRangeStickyZero(false);
-        x.setLowerMargin(0.03);
-        x.setUpperMargin(0.03);
-        styleAxis(x);
-        return x;
-    }
-
-    /** Logarithmic, from {@code floor} to just above 1, labelled 10⁰, 10⁻¹, … with a minor tick per unit. */
-    private static LogAxis rateAxis(String title, double floor) {
-        LogAxis y = new LogAxis(title);
-        y.setBase(10.0);
-        y.setBaseSymbol("10");
-        y.setSmallestValue(1e-300);
-        y.setRange(floor, MARGIN);
-        DecimalFormat exponent = new DecimalFormat("0", DecimalFormatSymbols.getInstance(Locale.ROOT));
-        DecimalFormatSymbols minus = exponent.getDecimalFormatSymbols();
-        minus.setMinusSign('\u2212');
-        exponent.setDecimalFormatSymbols(minus);
-        y.setTickUnit(new NumberTickUnit(1.0, exponent), false, true);
-        y.setMinorTickCount(9);
-        y.setMinorTickMarksVisible(true);
-        styleAxis(y);
-        return y;
     }
 
     /** What a panel of simulated values shows. */
@@ -374,25 +256,18 @@ public final class FerPlot {
         }
         Color colour = isFer ? BLUE : VERMILLION;
         YIntervalSeriesCollection simulated = new YIntervalSeriesCollection();
-        XYErrorRenderer renderer = new XYErrorRenderer();
-        renderer.setDefaultLinesVisible(true);
-        renderer.setLegendLine(new Line2D.Double(-12, 0, 12, 0));
-        renderer.setDrawXError(false);
-        renderer.setCapLength(7.0);
-        renderer.setErrorStroke(new BasicStroke(1.5f));
-        addSeries(simulated, renderer, rate, colour, new BasicStroke(2.4f), isFer ? circle(9) : square(8));
+        XYErrorRenderer renderer = PlotParts.intervalRenderer();
+        addSeries(simulated, renderer, rate, colour, new BasicStroke(2.4f),
+                isFer ? PlotParts.circle(9) : PlotParts.square(8));
         plot.setDataset(0, simulated);
         plot.setRenderer(0, renderer);
 
         XYSeriesCollection limits = new XYSeriesCollection();
-        XYLineAndShapeRenderer limitRenderer = new XYLineAndShapeRenderer(false, true);
-        limitRenderer.setUseFillPaint(true);
-        limitRenderer.setDefaultFillPaint(Color.WHITE);
-        limitRenderer.setUseOutlinePaint(false);
+        XYLineAndShapeRenderer limitRenderer = PlotParts.limitRenderer();
         if (limit.getItemCount() > 0) {
             limits.addSeries(limit);
             limitRenderer.setSeriesPaint(0, colour);
-            limitRenderer.setSeriesShape(0, downTriangle(12));
+            limitRenderer.setSeriesShape(0, PlotParts.downTriangle(12));
             limitRenderer.setSeriesOutlineStroke(0, new BasicStroke(1.8f));
         }
         plot.setDataset(1, limits);
@@ -450,8 +325,7 @@ public final class FerPlot {
         if (series.getItemCount() > 0) {
             dataset.addSeries(series);
             renderer.setSeriesPaint(0, ORANGE);
-            renderer.setSeriesStroke(0, new BasicStroke(2.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
-                    new float[] {12f, 4f, 2f, 4f, 2f, 4f}, 0f));
+            renderer.setSeriesStroke(0, PlotParts.dashed(2.2f, 12f, 4f, 2f, 4f, 2f, 4f));
         }
         plot.setDataset(3, dataset);
         plot.setRenderer(3, renderer);
@@ -480,34 +354,9 @@ public final class FerPlot {
         return "Run: " + link.describe() + ", seed " + seed;
     }
 
-    /**
-     * {@code text} in lines no wider than the chart, broken only after the ", " or "; " between list
-     * items, never inside a word (an item wider than the chart keeps a line of its own).
-     */
+    /** {@code text} wrapped to the chart's width between list items ({@link PlotParts#wrap}). */
     static List<String> wrap(String text, Font font) {
-        FontRenderContext frc = new FontRenderContext(null, true, true);
-        List<String> items = new ArrayList<>();
-        int from = 0;
-        for (int i = 0; i < text.length() - 1; i++) {
-            char c = text.charAt(i);
-            if ((c == ',' || c == ';') && text.charAt(i + 1) == ' ') {
-                items.add(text.substring(from, i + 2));
-                from = i + 2;
-            }
-        }
-        items.add(text.substring(from));
-        List<String> lines = new ArrayList<>();
-        StringBuilder line = new StringBuilder();
-        for (String item : items) {
-            String longer = line + item;
-            if (line.length() > 0 && font.getStringBounds(longer.strip(), frc).getWidth() > TEXT_WIDTH) {
-                lines.add(line.toString().strip());
-                line.setLength(0);
-            }
-            line.append(item);
-        }
-        lines.add(line.toString().strip());
-        return lines;
+        return PlotParts.wrap(text, font, TEXT_WIDTH);
     }
 
     private static String subtitle(BoundSettings s, double confidence) {
@@ -549,33 +398,13 @@ public final class FerPlot {
     }
 
     private static Stroke boundStroke(Bound b) {
-        float[] dash;
         switch (b) {
             case MIMO:
-                dash = new float[] {14f, 6f};
-                break;
+                return PlotParts.dashed(2.2f, 14f, 6f);
             case STBC:
-                dash = new float[] {10f, 4f, 2f, 4f};
-                break;
+                return PlotParts.dashed(2.2f, 10f, 4f, 2f, 4f);
             default:
-                dash = new float[] {4f, 4f};
-                break;
-        }
-        return new BasicStroke(2.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, dash, 0f);
-    }
-
-    private static void addSeries(YIntervalSeriesCollection dataset, XYLineAndShapeRenderer renderer,
-                                  YIntervalSeries series, Color colour, Stroke stroke, Shape shape) {
-        if (series.getItemCount() == 0) {
-            return;
-        }
-        int i = dataset.getSeriesCount();
-        dataset.addSeries(series);
-        renderer.setSeriesPaint(i, colour);
-        renderer.setSeriesFillPaint(i, colour);
-        renderer.setSeriesStroke(i, stroke);
-        if (shape != null) {
-            renderer.setSeriesShape(i, shape);
+                return PlotParts.dashed(2.2f, 4f, 4f);
         }
     }
 
@@ -594,38 +423,6 @@ public final class FerPlot {
                 lowest = Math.min(lowest, v);
             }
         }
-        double decade = lowest == Double.POSITIVE_INFINITY ? 1e-6
-                : Math.min(1e-2, Math.pow(10.0, Math.floor(Math.log10(lowest))));
-        return decade / MARGIN;
-    }
-
-    private static void styleAxis(ValueAxis axis) {
-        axis.setLabelFont(new Font(FONT, Font.PLAIN, 16));
-        axis.setTickLabelFont(new Font(FONT, Font.PLAIN, 14));
-        axis.setLabelPaint(new Color(0x222222));
-        axis.setTickLabelPaint(new Color(0x222222));
-        axis.setAxisLinePaint(new Color(0x888888));
-        axis.setTickMarkPaint(new Color(0x888888));
-    }
-
-    private static String capitalised(String s) {
-        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
-    }
-
-    private static Shape circle(double d) {
-        return new Ellipse2D.Double(-d / 2, -d / 2, d, d);
-    }
-
-    private static Shape square(double d) {
-        return new Rectangle2D.Double(-d / 2, -d / 2, d, d);
-    }
-
-    private static Shape downTriangle(double d) {
-        Path2D.Double p = new Path2D.Double();
-        p.moveTo(-d / 2, -d / 2);
-        p.lineTo(d / 2, -d / 2);
-        p.lineTo(0, d / 2);
-        p.closePath();
-        return p;
+        return PlotParts.floorBelow(lowest);
     }
 }

@@ -13,6 +13,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.fadebench.bench.report.HtmlChecks;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -42,7 +43,7 @@ class CliTest {
     }
 
     @Test
-    void runWritesCsvWithHeaderAndConvention() throws IOException {
+    void runWritesCsvWithHeaderAndConvention() throws Exception {
         Path dir = tmp.resolve("ok");
         Outcome o = run(withOut(dir, "run", "--code", "alamouti", "--rx", "2", "--mod", "16qam",
                 "--snr", "0..10/5", "--frame-bits", "512", "--min-errors", "20", "--max-frames", "2000",
@@ -57,9 +58,36 @@ class CliTest {
         // 16-QAM Alamouti: 4 bits per channel use, so Eb/N0 = SNR - 6.0206 dB
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("10,") && l.contains(",3.9794,")), lines.toString());
         try (var s = Files.list(dir)) {
-            assertEquals(List.of("fer.png", "fer.svg", "results.csv", "results.json", "scenario.yaml"),
+            assertEquals(List.of("fer.png", "fer.svg", "report.html", "results.csv", "results.json", "scenario.yaml"),
                     s.map(p -> p.getFileName().toString()).sorted().toList(), "no temporary files or checkpoint left");
         }
+        runReport(dir, 3, "fadebench run --code alamouti --rx 2 --mod 16qam --snr 0..10/5");
+    }
+
+    /**
+     * The run's report.html: a page that loads nothing (checked as {@link HtmlChecks} says), with
+     * one table row per point holding the numbers of results.csv, the FER plot inline, the run's
+     * scenario.yaml verbatim, its summary lines and the command line.
+     */
+    static void runReport(Path dir, int points, String commandStart) throws Exception {
+        org.jsoup.nodes.Document doc = HtmlChecks.selfContained(Files.readString(dir.resolve("report.html")));
+        List<String[]> csv = Files.readAllLines(dir.resolve("results.csv")).stream().filter(l -> !l.startsWith("#"))
+                .skip(1).map(l -> l.split(",", -1)).toList();
+        var rows = doc.selectFirst("table").select("tbody > tr");
+        assertEquals(points, rows.size(), "one row per point");
+        for (int i = 0; i < points; i++) {
+            List<String> cells = rows.get(i).select("td").eachText();
+            assertEquals(csv.get(i)[0], cells.get(0), "SNR");
+            assertEquals(csv.get(i)[1], cells.get(2), "frames");
+            assertEquals(csv.get(i)[2], cells.get(3), "frame errors");
+        }
+        assertEquals(1, doc.select("figure > svg").size());
+        assertTrue(doc.selectFirst("figure > svg").text().contains("FER, simulated"));
+        assertEquals(Files.readString(dir.resolve("scenario.yaml")), doc.selectFirst("section pre").wholeText());
+        assertTrue(doc.select("p.summary").eachText().stream().anyMatch(t -> t.startsWith("SNR at FER 0.01: ")),
+                doc.select("p.summary").eachText().toString());
+        String command = doc.select("dd").get(4).text();
+        assertTrue(command.startsWith(commandStart), command);
     }
 
     /** Same seed: byte-identical CSV for different thread counts. */

@@ -64,7 +64,7 @@ class HelpAndExamplesTest {
         try (Stream<Path> files = Files.list(dir)) {
             files.forEach(f -> names.add(f.getFileName().toString()));
         }
-        assertEquals(7, names.size(), names.toString());
+        assertEquals(8, names.size(), names.toString());
         for (String name : names) {
             assertTrue(help.contains(name), "top-level help lacks " + name + ": " + help);
         }

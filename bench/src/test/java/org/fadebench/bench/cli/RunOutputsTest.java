@@ -91,7 +91,7 @@ class RunOutputsTest {
 
         CliTest.Outcome o = CliTest.run(small("--out", d.toString(), "--rx", "2"));
         assertRefused(o, "--out " + d + " already holds the results of another run (results.csv, results.json, "
-                + "fer.png, fer.svg, scenario.yaml): give another --out, or --overwrite to replace them");
+                + "fer.png, fer.svg, report.html, scenario.yaml): give another --out, or --overwrite to replace them");
         assertEquals(first, Files.readString(d.resolve("results.csv")), "nothing overwritten");
 
         o = CliTest.run(small("--out", d.toString(), "--rx", "2", "--overwrite"));
@@ -228,7 +228,7 @@ class RunOutputsTest {
         try (Stream<Path> s = Files.list(d)) {
             s.forEach(outputs::add);
         }
-        assertEquals(7, outputs.size());
+        assertEquals(8, outputs.size());
         for (Path p : outputs) {
             Path plain = Files.createFile(p.resolveSibling("plain-" + p.getFileName()));
             assertEquals(PosixFilePermissions.toString(Files.getPosixFilePermissions(plain)),

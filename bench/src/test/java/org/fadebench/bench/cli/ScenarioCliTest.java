@@ -159,7 +159,7 @@ class ScenarioCliTest {
         assertTrue(o.err().contains("none.yaml: no such scenario file"), o.err());
     }
 
-    /** --archive bundles CSV, JSON and scenario; both compressions read back with Commons Compress. */
+    /** --archive bundles CSV, JSON, plot, scenario and report; both compressions read back with Commons Compress. */
     @Test
     void archives() throws Exception {
         for (String name : new String[] {"run.tar.xz", "run.tar.gz"}) {
@@ -178,7 +178,8 @@ class ScenarioCliTest {
                     entries.add(e.getName());
                 }
             }
-            assertEquals(List.of("results.csv", "results.json", "fer.png", "fer.svg", "scenario.yaml"), entries);
+            assertEquals(List.of("results.csv", "results.json", "fer.png", "fer.svg", "scenario.yaml", "report.html"),
+                    entries);
         }
         CliTest.Outcome bad = CliTest.run("run", "--archive", tmp.resolve("r.zip").toString(), "--out",
                 tmp.resolve("z").toString());

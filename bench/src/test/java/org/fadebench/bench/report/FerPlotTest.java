@@ -55,7 +55,7 @@ import org.w3c.dom.NodeList;
 
 class FerPlotTest {
 
-    private static final LinkSettings LINK = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2,
+    static final LinkSettings LINK = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 2, 2,
             Fading.RAYLEIGH, 128, 0);
     private static final double[] SNR_DB = {0, 5, 10, 15, 20};
     private static final long[][] FRAME_ERRORS_AND_FRAMES = {{900, 1000}, {300, 1000}, {40, 2000}, {3, 20_000},
