@@ -85,8 +85,9 @@ public final class QamConstellation {
      */
     public void map(byte[] bits, int bitOffset, double[] symbols, int symOffset, int count) {
         for (int n = 0, b = bitOffset, o = symOffset << 1; n < count; n++, b += bitsPerSymbol, o += 2) {
-            symbols[o] = amplitudeOfLabel[axisLabel(bits, b)];
-            symbols[o + 1] = twoAxes ? amplitudeOfLabel[axisLabel(bits, b + bitsPerAxis)] : 0.0;
+            int label = label(bits, b);
+            symbols[o] = amplitudeOfLabel[twoAxes ? label >>> bitsPerAxis : label];
+            symbols[o + 1] = twoAxes ? amplitudeOfLabel[label & (levels - 1)] : 0.0;
         }
     }
 
@@ -97,15 +98,16 @@ public final class QamConstellation {
      */
     public void map(byte[] bits, int bitOffset, int bitStride, double[] re, double[] im, int count) {
         for (int i = 0, b = bitOffset; i < count; i++, b += bitStride) {
-            re[i] = amplitudeOfLabel[axisLabel(bits, b)];
-            im[i] = twoAxes ? amplitudeOfLabel[axisLabel(bits, b + bitsPerAxis)] : 0.0;
+            int label = label(bits, b);
+            re[i] = amplitudeOfLabel[twoAxes ? label >>> bitsPerAxis : label];
+            im[i] = twoAxes ? amplitudeOfLabel[label & (levels - 1)] : 0.0;
         }
     }
 
-    /** The label of one axis: {@link #bitsPerAxis} bits from {@code bits[b]}, the first most significant. */
-    private int axisLabel(byte[] bits, int b) {
+    /** The label of a symbol (see {@link #mapLabels}): its {@link #bitsPerSymbol} bits from {@code bits[b]}, the first most significant. */
+    private int label(byte[] bits, int b) {
         int label = 0;
-        for (int j = 0; j < bitsPerAxis; j++) {
+        for (int j = 0; j < bitsPerSymbol; j++) {
             label = (label << 1) | bits[b + j];
         }
         return label;

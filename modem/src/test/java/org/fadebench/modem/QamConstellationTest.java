@@ -120,6 +120,64 @@ class QamConstellationTest {
         assertArrayEquals(bits, back);
     }
 
+    /**
+     * Mapping bits into planes and LLRs out of them (every third symbol in a plane, the bits of the
+     * others in between) give exactly the interleaved map's symbols and the interleaved demapper's
+     * LLRs, max-log and exact, and map agrees with mapLabels.
+     */
+    @ParameterizedTest
+    @EnumSource(Modulation.class)
+    void planarBitsAndLlrsEqualInterleaved(Modulation mod) {
+        QamConstellation c = mod.constellation();
+        int k = c.bitsPerSymbol();
+        int perBlock = 3;
+        int blocks = 200;
+        int n = perBlock * blocks;
+        Random rnd = new Random(6);
+        byte[] bits = new byte[k * n];
+        int[] labels = new int[n];
+        for (int i = 0; i < bits.length; i++) {
+            bits[i] = (byte) rnd.nextInt(2);
+            labels[i / k] = (labels[i / k] << 1) | bits[i];
+        }
+        double[] s = new double[2 * n];
+        c.map(bits, 0, s, 0, n);
+        double[] fromLabels = new double[2 * n];
+        c.mapLabels(labels, 0, fromLabels, 0, n);
+        assertArrayEquals(fromLabels, s);
+        double[] gain = new double[n];
+        double[] blockGain = new double[blocks];
+        for (int b = 0; b < blocks; b++) {
+            blockGain[b] = 0.2 + 3 * rnd.nextDouble();
+            for (int j = 0; j < perBlock; j++) {
+                gain[perBlock * b + j] = blockGain[b];
+            }
+        }
+        double[][] re = new double[perBlock][blocks];
+        double[][] im = new double[perBlock][blocks];
+        for (int j = 0; j < perBlock; j++) {
+            c.map(bits, j * k, perBlock * k, re[j], im[j], blocks);
+            for (int b = 0; b < blocks; b++) {
+                assertEquals(s[2 * (perBlock * b + j)], re[j][b], 0.0);
+                assertEquals(s[2 * (perBlock * b + j) + 1], im[j][b], 0.0);
+                re[j][b] += rnd.nextGaussian() * (b % 7 == 0 ? 3.0 : 0.3);
+                im[j][b] += rnd.nextGaussian() * 0.3;
+                s[2 * (perBlock * b + j)] = re[j][b];
+                s[2 * (perBlock * b + j) + 1] = im[j][b];
+            }
+        }
+        for (LlrMethod method : LlrMethod.values()) {
+            double[] interleaved = new double[k * n];
+            c.demap(method, s, gain, 0, 0.3, interleaved, 0, n);
+            double[] planar = new double[k * n];
+            for (int j = 0; j < perBlock; j++) {
+                c.demap(method, re[j], im[j], blockGain, 0.3, planar, j * k, perBlock * k, blocks);
+            }
+            // assertArrayEquals on double[] without a delta compares the bit patterns
+            assertArrayEquals(interleaved, planar, mod + " " + method);
+        }
+    }
+
     /** Planar mapping and slicing give exactly the interleaved ones' symbols and labels. */
     @ParameterizedTest
     @EnumSource(Modulation.class)
