@@ -7,13 +7,13 @@ import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.QamConstellation;
 
 /**
- * Coded frames (on the {@link Transmission} of the link: planar or interleaved): payload bits → CRC, channel code, interleaver →
- * QAM → … → LLRs → deinterleaver, channel decoder, CRC. Frames are sent one by one and decoded in
- * lanes, up to {@link LinkSettings#lanes()} frames at once, or continuously where the codec can (a
- * lane takes the next frame as soon as its own is decided, so an LDPC frame that needs every
- * iteration does not hold up the others); each frame's outcome is the same as if it were decoded
- * alone. A frame's raw symbol errors are the hard decisions on its coded bits' LLRs against the
- * bits sent.
+ * Coded frames, on the link's {@link Transmission} (planar or interleaved): payload bits → CRC,
+ * channel code, interleaver → QAM → … → LLRs → deinterleaver, channel decoder, CRC. Frames are
+ * sent one by one and decoded in lanes, up to {@link LinkSettings#lanes()} frames at once, or
+ * continuously where the codec can (a lane takes the next frame as soon as its own is decided, so
+ * an LDPC frame that needs every iteration does not hold up the others); each frame's outcome is
+ * the same as if it were decoded alone. A frame's raw symbol errors are the hard decisions on its
+ * coded bits' LLRs against the bits sent.
  */
 final class CodedPath implements FramePath {
 
