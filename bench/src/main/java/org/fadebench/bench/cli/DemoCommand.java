@@ -5,32 +5,45 @@ import java.io.InputStream;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
-import org.fadebench.bench.analysis.DiversityFit;
-import org.fadebench.bench.scenario.ScenarioLoader;
+import org.fadebench.bench.report.FerPlot;
+import org.fadebench.bench.report.HtmlReport;
+import org.fadebench.bench.settings.SettingValues;
+import org.fadebench.bench.study.DesignRow;
+import org.fadebench.bench.study.StudyFile;
+import org.fadebench.bench.study.StudyLoader;
+import org.fadebench.bench.study.StudyOutputs;
+import org.fadebench.bench.study.StudyTable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
 /**
- * {@code fadebench demo}: the built-in example, two scenario files shipped in the jar. A hilltop
- * gateway with two transmit antennas sends 256-bit QPSK telemetry frames with Alamouti's code to
- * field sensors over slow Rayleigh fading; sensors with one and with two receive antennas are
- * compared. Invented scenario, for demonstration only.
+ * {@code fadebench demo}: the built-in example, a small study shipped in the jar
+ * ({@code demo/study.yaml}). A hilltop gateway sends coded QPSK telemetry frames to field sensors
+ * over slow Rayleigh fading; three designs are ranked: a 1x2 combining (MRC) receiver, Alamouti 2x1
+ * and Alamouti 2x2. Invented scenario, for demonstration only. Every sentence it prints about the
+ * result is computed from the ranking.
  */
 @Command(name = "demo", mixinStandardHelpOptions = true,
-        description = "Run the built-in example: a hilltop gateway (2 antennas, Alamouti, QPSK) "
-                + "sending telemetry frames to field sensors with 1 or 2 receive antennas.")
+        description = "Run the built-in example study: a hilltop gateway sending coded QPSK telemetry frames to field "
+                + "sensors; 1x2 combining, Alamouti 2x1 and Alamouti 2x2 ranked against the target FER.")
 final class DemoCommand implements Callable<Integer> {
 
-    private static final String[] SCENARIOS = {"sensor-1rx", "sensor-2rx"};
+    /** The demo's designs that the closing words compare: the combining receiver and Alamouti 2x1. */
+    static final String MRC = "mrc-1x2";
+    static final String ALAMOUTI = "alamouti-2x1";
+
+    /** The SNR lost by splitting the power over two transmit antennas, 10 log10 2 dB (Alamouti 1998). */
+    static final double POWER_SPLIT_DB = 10 * Math.log10(2);
 
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "fadebench-demo",
-            description = "Folder for the outputs, one sub-folder per sensor (default: ${DEFAULT-VALUE}).")
+            description = "Folder of the study: one sub-folder per design (default: ${DEFAULT-VALUE}).")
     String out;
 
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
@@ -41,74 +54,69 @@ final class DemoCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        SweepJob.checkOutDir(out);
+        Path dir = SweepJob.checkOutDir(out);
         PrintWriter w = spec.commandLine().getOut();
-        w.println("Demo: a hilltop gateway with two transmit antennas (Alamouti) sends 256-bit QPSK telemetry");
-        w.println("frames to field sensors through slow (per-frame) Rayleigh fading.");
-        List<String> folders = new ArrayList<>();
-        List<Optional<DiversityFit>> fits = new ArrayList<>();
-        for (String name : SCENARIOS) {
-            w.println();
-            w.println("== " + name + " ==");
-            RunCommand run = new RunCommand();
-            CommandLine cl = new CommandLine(run);
-            cl.setOut(w);
-            cl.setErr(spec.commandLine().getErr());
-            // the demo replaces its own earlier output, so that it can be run again and again
-            List<String> args = new ArrayList<>(List.of("--out", out + "/" + name, "--overwrite"));
-            if (threads != null) {
-                args.add("--threads");
-                args.add(threads.toString());
-            }
-            cl.parseArgs(args.toArray(new String[0]));
-            run.preloaded = ScenarioLoader.parse("built-in " + name + ".yaml", resource(name + ".yaml"));
-            int code = run.call();
-            if (code != ExitCodes.OK) {
-                return code;
-            }
-            folders.add(out + "/" + name);
-            fits.add(run.summary.diversity());
+        StudyFile study = StudyLoader.parse("built-in demo study.yaml", resource("study.yaml"));
+        w.println("Demo: a hilltop gateway sends 256-bit QPSK telemetry frames (rate-1/2 convolutional code) to field");
+        w.println("sensors through slow (per-frame) Rayleigh fading. Three designs: " + designNames(study) + ".");
+        // the demo replaces its own earlier output (overwrite), so that it can be run again and again
+        StudyRunner runner = new StudyRunner(StudyCommand.plan(study, dir, threads, false, SettingValues.empty()), false,
+                true, w, spec.commandLine().getErr(), new StudyOutputs.Figure(FerPlot.XQuantity.SNR, true),
+                DemoCommand::closing, RunCommand.commandArgs(spec));
+        runner.checkBeforeRun(null);
+        int code = runner.run();
+        if (code != ExitCodes.OK) {
+            return code;
         }
         w.println();
-        w.println(closing(fits.get(0), fits.get(1)));
-        w.println("Outputs: " + String.join(", ", folders) + " (" + FadebenchCli.RUN_OUTPUTS + ").");
+        closing(runner.table()).forEach(w::println);
+        w.println("Outputs: " + dir + " (" + StudyOutputs.CSV + ", " + StudyOutputs.JSON + ", " + FerPlot.PNG_FILE + ", "
+                + FerPlot.SVG_FILE + ", " + HtmlReport.FILE + ") and one folder per design (" + FadebenchCli.RUN_OUTPUTS
+                + ").");
         return ExitCodes.OK;
     }
 
-    /**
-     * The demo's closing words, from the two runs' fitted diversity orders: each with its interval,
-     * and how much faster the FER falls with two receive antennas when the intervals tell the two
-     * apart.
-     */
-    static String closing(Optional<DiversityFit> oneRx, Optional<DiversityFit> twoRx) {
-        if (oneRx.isEmpty() || twoRx.isEmpty()) {
-            return "Too few points with errors to fit a diversity order for "
-                    + (oneRx.isEmpty() && twoRx.isEmpty() ? "either sensor" : oneRx.isEmpty() ? "sensor-1rx" : "sensor-2rx")
-                    + "; compare the FER columns above.";
-        }
-        DiversityFit one = oneRx.get();
-        DiversityFit two = twoRx.get();
-        String orders = "Fitted diversity order: " + order(one) + " with one receive antenna, " + order(two)
-                + " with two";
-        boolean apart = one.hasInterval() && two.hasInterval() && (two.low() > one.high() || one.low() > two.high());
-        if (!apart) {
-            return orders + "; at this run's length the fits do not tell the two apart.";
-        }
-        return orders + (two.order() > one.order()
-                ? String.format(Locale.ROOT, ": with two receive antennas the FER falls %.1f times as fast with SNR.",
-                        two.order() / one.order())
-                : ": with two receive antennas the FER falls more slowly with SNR than with one.");
+    private static String designNames(StudyFile study) {
+        return String.join(", ", study.designs().stream().map(StudyFile.Design::name).toList());
     }
 
-    private static String order(DiversityFit f) {
-        return f.hasInterval() ? String.format(Locale.ROOT, "%.1f (95 %% interval %.1f to %.1f)", f.order(), f.low(),
-                f.high()) : String.format(Locale.ROOT, "%.1f", f.order());
+    /**
+     * The demo's closing words, from the ranking alone: the best design with its SNR interval, how
+     * much more SNR Alamouti 2x1 needs than the 1x2 combining receiver (with the interval of the
+     * difference, and whether it holds the 3 dB of the power split), and which designs meet the
+     * target at the budget.
+     */
+    static List<String> closing(StudyTable table) {
+        List<String> lines = new ArrayList<>(table.sentences());
+        Optional<DesignRow> mrc = find(table, MRC);
+        Optional<DesignRow> alamouti = find(table, ALAMOUTI);
+        if (mrc.isPresent() && alamouti.isPresent() && mrc.get().reached() && alamouti.get().reached()) {
+            DesignRow m = mrc.get();
+            DesignRow a = alamouti.get();
+            double low = a.snrDbLow() - m.snrDbHigh();
+            double high = a.snrDbHigh() - m.snrDbLow();
+            String holds = Double.isNaN(low) || Double.isNaN(high) ? ""
+                    : low <= POWER_SPLIT_DB && POWER_SPLIT_DB <= high
+                    ? String.format(Locale.ROOT, "; this holds the %.2f dB of splitting the power over two transmit "
+                            + "antennas", POWER_SPLIT_DB)
+                    : String.format(Locale.ROOT, "; this does not hold the %.2f dB of splitting the power over two "
+                            + "transmit antennas", POWER_SPLIT_DB);
+            lines.add(1, String.format(Locale.ROOT, "%s needs %.2f dB %s SNR than %s (%s)%s.", a.design(),
+                    Math.abs(a.snrDbAtTarget() - m.snrDbAtTarget()),
+                    a.snrDbAtTarget() >= m.snrDbAtTarget() ? "more" : "less", m.design(),
+                    StudyTable.interval(low, high), holds));
+        }
+        return lines;
+    }
+
+    private static Optional<DesignRow> find(StudyTable table, String name) {
+        return table.rows().stream().filter(r -> r.design().equals(name)).findFirst();
     }
 
     private static String resource(String name) {
         try (InputStream in = DemoCommand.class.getResourceAsStream("/org/fadebench/bench/demo/" + name)) {
             if (in == null) {
-                throw new IllegalStateException("built-in scenario " + name + " missing from the jar");
+                throw new IllegalStateException("built-in study " + name + " missing from the jar");
             }
             return new String(in.readAllBytes(), StandardCharsets.UTF_8);
         } catch (IOException e) {

@@ -9,13 +9,14 @@ import org.fadebench.bench.sweep.BatchExecutor;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
-/** The {@code fadebench} command: {@code run}, {@code bounds}, {@code codes}, {@code demo}. */
+/** The {@code fadebench} command: {@code run}, {@code study}, {@code compare}, {@code bounds}, {@code codes}, {@code demo}. */
 @Command(name = "fadebench", mixinStandardHelpOptions = true, versionProvider = FadebenchCli.Version.class,
         description = {"Monte Carlo link-level bench for multi-antenna diversity links over block fading.",
             "Outputs: run writes " + FadebenchCli.RUN_OUTPUTS + " into its --out folder, with checkpoint.json while it"
-                + " runs, the --trace-out file and the --archive file when asked; bounds writes bounds.csv; demo"
-                + " writes a run's outputs per sensor."},
-        subcommands = {RunCommand.class, BoundsCommand.class, CodesCommand.class, DemoCommand.class, CommandLine.HelpCommand.class})
+                + " runs, the --trace-out file and the --archive file when asked; study writes a run's outputs per"
+                + " design into DIR/<design>/ and study.csv, study.json, fer.png, fer.svg and report.html into DIR;"
+                + " compare writes the same five with --out; bounds writes bounds.csv; demo runs a built-in study."},
+        subcommands = {RunCommand.class, StudyCommand.class, CompareCommand.class, BoundsCommand.class, CodesCommand.class, DemoCommand.class, CommandLine.HelpCommand.class})
 public final class FadebenchCli implements Runnable {
 
     /** The files every {@code run} writes, for the help texts. */
@@ -85,7 +86,7 @@ public final class FadebenchCli implements Runnable {
     @Override
     public void run() {
         throw new CommandLine.ParameterException(spec.commandLine(),
-                "choose a command: run, bounds, codes, demo (or --help)");
+                "choose a command: run, study, compare, bounds, codes, demo (or --help)");
     }
 
     /** The project version, as the build recorded it. */

@@ -77,6 +77,11 @@ final class RunCommand implements Callable<Integer> {
      * itself, so the line is the equivalent run.
      */
     private List<String> commandArgs() {
+        return commandArgs(spec);
+    }
+
+    /** The arguments after {@code fadebench} of the command {@code spec} parsed, its own name first. */
+    static List<String> commandArgs(CommandSpec spec) {
         List<String> args = new ArrayList<>(spec.commandLine().getParseResult().originalArgs());
         if (spec.parent() == null) {
             args.add(0, spec.name());

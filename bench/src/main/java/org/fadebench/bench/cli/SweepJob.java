@@ -178,19 +178,16 @@ final class SweepJob {
         Path dir = plan.outDir();
         List<PointResult> results = outcome.results();
         BoundCurves curves = null;
-        String noBounds = RunSummary.noBounds(plan.link());
-        if (boundsApply() && !results.isEmpty()) {
-            try {
-                curves = BoundCurves.compute(plan.bounds(), results.stream().mapToDouble(PointResult::snrDb).toArray(),
-                        signals::requested).reaching(plan.targetFer(), signals::requested);
-            } catch (CancellationException e) {
-                if (!interrupted) {
-                    return stoppedInBounds(outcome, fingerprint, signals);
-                }
-                noBounds = "outage bounds not computed (interrupted); --resume computes them";
+        String noBounds = null;
+        try {
+            curves = plan.boundCurves(results, signals::requested);
+        } catch (CancellationException e) {
+            if (!interrupted) {
+                return stoppedInBounds(outcome, fingerprint, signals);
             }
+            noBounds = "outage bounds not computed (interrupted); --resume computes them";
         }
-        summary = RunSummary.of(plan.link(), outcome.complete(), curves, plan.targetFer(), noBounds);
+        summary = plan.summary(outcome.complete(), curves, noBounds);
         if (!plan.quiet()) {
             summary.lines().forEach(out::println);
         }
@@ -276,11 +273,6 @@ final class SweepJob {
     /** The summary of the sweep {@link #run} finished, or null before. */
     RunSummary summary() {
         return summary;
-    }
-
-    /** The outage bounds need an orthogonal code and a channel constant over each block (see RunPlan.bounds). */
-    private boolean boundsApply() {
-        return plan.bounds() != null;
     }
 
     private List<PointState> readCheckpoint(String fingerprint, SweepEngine engine) {

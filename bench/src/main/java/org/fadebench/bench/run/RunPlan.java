@@ -14,9 +14,12 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.function.BooleanSupplier;
 import java.util.function.Supplier;
+import org.fadebench.bench.analysis.BoundCurves;
 import org.fadebench.bench.analysis.BoundSettings;
 import org.fadebench.bench.analysis.CsiAgeing;
+import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.bench.link.ChannelRecorder;
 import org.fadebench.bench.link.FrameCoding;
 import org.fadebench.bench.link.LinkChain;
@@ -28,6 +31,7 @@ import org.fadebench.bench.settings.RunSettings;
 import org.fadebench.bench.settings.Setting;
 import org.fadebench.bench.settings.SettingValues;
 import org.fadebench.bench.settings.SettingsText;
+import org.fadebench.bench.sweep.PointResult;
 import org.fadebench.bench.sweep.SnrGrid;
 import org.fadebench.bench.sweep.StopRules;
 import org.fadebench.channel.ChannelSpec;
@@ -138,6 +142,43 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     /** Who computes the batches (checked by {@link #from}). */
     public Engine engine() {
         return Engine.from(SettingValues.defaults(RunSettings.all()).overlaidBy(values));
+    }
+
+    /**
+     * The same run on {@code workers} threads, printing nothing but errors when {@code quiet}, its
+     * settings left as they were: a study gives its thread count and its quietness to every design
+     * this way, so that the scenario each design writes names neither (neither changes a number)
+     * and is the same on any machine and however the study is run.
+     */
+    public RunPlan onThreads(int workers, boolean quiet) {
+        if (workers <= 0 || workers > 1024) {
+            throw new InvalidSettingException(THREADS, "must be between 1 and 1024, got " + workers);
+        }
+        requireHeap(link, workers, traceOut == null ? 0 : traceOutBlocks);
+        return new RunPlan(values, source, link, snrDb, rules, seed, workers, confidence, outDir, archive, quiet, bounds,
+                targetFer, traceOut, traceOutBlocks, plotAxes, warnings);
+    }
+
+    /**
+     * The outage bounds at the SNRs of {@code points}, with their crossings of the target found
+     * beyond the sweep where needed ({@link BoundCurves#reaching}); null where no bounds apply or
+     * nothing was simulated. {@code stop} is polled during Monte Carlo counts, which then throw
+     * {@link java.util.concurrent.CancellationException}.
+     */
+    public BoundCurves boundCurves(List<PointResult> points, BooleanSupplier stop) {
+        if (bounds == null || points.isEmpty()) {
+            return null;
+        }
+        return BoundCurves.compute(bounds, points.stream().mapToDouble(PointResult::snrDb).toArray(), stop)
+                .reaching(targetFer, stop);
+    }
+
+    /**
+     * The summary of the finished points: diversity, SNR at the target, gaps to {@code curves}
+     * (null where none apply: {@code noBounds} says why, or, when null, {@link RunSummary#noBounds}).
+     */
+    public RunSummary summary(List<PointResult> complete, BoundCurves curves, String noBounds) {
+        return RunSummary.of(link, complete, curves, targetFer, noBounds != null ? noBounds : RunSummary.noBounds(link));
     }
 
     /** What the user should know before trusting the results: a decoder that is not ML, CSI that is meaningless. */

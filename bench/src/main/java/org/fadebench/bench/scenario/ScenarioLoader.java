@@ -42,20 +42,28 @@ public final class ScenarioLoader {
 
     /** Loads a file; {@link ScenarioException} for anything wrong with it. */
     public static Scenario load(Path file) {
+        return parse(file.toString(), readText(file, "scenario file"));
+    }
+
+    /**
+     * A YAML file's text, read as a scenario file is: a regular file of at most 1 MiB of UTF-8;
+     * {@code what} names it in messages (e.g. {@code scenario file}).
+     */
+    public static String readText(Path file, String what) {
         String name = file.toString();
         try {
             if (Files.isDirectory(file)) {
-                throw new ScenarioException(name + ": is a folder; give a scenario file (YAML)");
+                throw new ScenarioException(name + ": is a folder; give a " + what + " (YAML)");
             }
             if (!Files.isRegularFile(file)) {
                 throw new ScenarioException(name + (Files.exists(file)
-                        ? ": not a regular file (a pipe or a device?); give a scenario file (YAML)"
-                        : ": no such scenario file"));
+                        ? ": not a regular file (a pipe or a device?); give a " + what + " (YAML)"
+                        : ": no such " + what));
             }
             if (Files.size(file) > MAX_BYTES) {
-                throw new ScenarioException(name + ": larger than " + MAX_BYTES + " bytes; not a scenario file");
+                throw new ScenarioException(name + ": larger than " + MAX_BYTES + " bytes; not a " + what);
             }
-            return parse(name, Files.readString(file, StandardCharsets.UTF_8));
+            return Files.readString(file, StandardCharsets.UTF_8);
         } catch (java.nio.charset.MalformedInputException e) {
             throw new ScenarioException(name + ": not UTF-8 text");
         } catch (IOException e) {
@@ -65,6 +73,34 @@ public final class ScenarioLoader {
 
     /** Parses scenario text; {@code name} is used in messages. */
     public static Scenario parse(String name, String text) {
+        Node root = compose(name, text);
+        SettingValues values = SettingValues.empty();
+        if (root == null) {
+            return new Scenario(name, text, values);
+        }
+        MappingNode top = mapping(root, name, "the top level", "sections " + String.join(", ", RunSettings.sections()));
+        java.util.Set<String> seenSections = new java.util.HashSet<>();
+        for (NodeTuple t : top.getValue()) {
+            String section = keyText(t.getKeyNode(), name);
+            int line = line(t.getKeyNode());
+            if (!seenSections.add(section)) {
+                throw new ScenarioException(name + " line " + line + ": section '" + section + "' appears twice");
+            }
+            if (!RunSettings.sections().contains(section)) {
+                throw new ScenarioException(name + " line " + line + ": unknown section '" + section + "'"
+                        + suggest(section, RunSettings.sections()) + "; valid sections: "
+                        + String.join(", ", RunSettings.sections()));
+            }
+            values = section(name, section, t.getValueNode(), values, List.of());
+        }
+        return new Scenario(name, text, values);
+    }
+
+    /**
+     * Composes YAML text into plain nodes with the safe loader (duplicate keys, explicit tags and
+     * alias bombs refused); null for an empty document.
+     */
+    public static Node compose(String name, String text) {
         LoaderOptions options = new LoaderOptions();
         options.setAllowDuplicateKeys(false);
         options.setMaxAliasesForCollections(10);
@@ -80,48 +116,49 @@ public final class ScenarioLoader {
         } catch (YAMLException e) {
             throw new ScenarioException(name + ": not valid YAML: " + e.getMessage());
         }
-        SettingValues values = SettingValues.empty();
-        if (root == null) {
-            return new Scenario(name, text, values);
+        if (root != null) {
+            rejectTags(root, name);
         }
-        rejectTags(root, name);
-        MappingNode top = mapping(root, name, "the top level", "sections " + String.join(", ", RunSettings.sections()));
-        java.util.Set<String> seenSections = new java.util.HashSet<>();
-        for (NodeTuple t : top.getValue()) {
-            String section = keyText(t.getKeyNode(), name);
-            int line = line(t.getKeyNode());
-            if (!seenSections.add(section)) {
-                throw new ScenarioException(name + " line " + line + ": section '" + section + "' appears twice");
+        return root;
+    }
+
+    /**
+     * Reads one section's mapping ({@code section} is its name, e.g. {@code link}) onto
+     * {@code values}: every key must be a setting of that section, or one of {@code otherKeys},
+     * which are left to the caller (and named among the valid keys in messages).
+     */
+    public static SettingValues section(String name, String section, Node node, SettingValues values,
+                                        List<String> otherKeys) {
+        List<String> valid = new ArrayList<>(RunSettings.names(section));
+        valid.addAll(otherKeys);
+        MappingNode body = mapping(node, name, "section '" + section + "'", "keys " + String.join(", ", valid));
+        java.util.Set<String> seen = new java.util.HashSet<>();
+        for (NodeTuple kv : body.getValue()) {
+            String key = keyText(kv.getKeyNode(), name);
+            int keyLine = line(kv.getKeyNode());
+            if (!seen.add(key)) {
+                throw new ScenarioException(name + " line " + keyLine + ": key '" + section + "." + key
+                        + "' appears twice");
             }
-            if (!RunSettings.sections().contains(section)) {
-                throw new ScenarioException(name + " line " + line + ": unknown section '" + section + "'"
-                        + suggest(section, RunSettings.sections()) + "; valid sections: "
-                        + String.join(", ", RunSettings.sections()));
+            if (otherKeys.contains(key)) {
+                continue;
             }
-            MappingNode body = mapping(t.getValueNode(), name, "section '" + section + "'",
-                    "keys " + String.join(", ", RunSettings.names(section)));
-            java.util.Set<String> seen = new java.util.HashSet<>();
-            for (NodeTuple kv : body.getValue()) {
-                String key = keyText(kv.getKeyNode(), name);
-                int keyLine = line(kv.getKeyNode());
-                if (!seen.add(key)) {
-                    throw new ScenarioException(name + " line " + keyLine + ": key '" + section + "." + key
-                            + "' appears twice");
-                }
-                Optional<Setting> k = RunSettings.find(section, key);
-                if (k.isEmpty()) {
-                    throw new ScenarioException(name + " line " + keyLine + ": unknown key '" + section + "." + key + "'"
-                            + suggest(key, RunSettings.names(section)) + "; valid keys in " + section + ": "
-                            + String.join(", ", RunSettings.names(section)));
-                }
-                Setting known = k.get();
-                SettingValues.Origin origin = new SettingValues.Origin(name, line(kv.getValueNode()));
-                values = known.kind() == Setting.Kind.MATRIX
-                        ? values.withMatrix(known, matrix(known, kv.getValueNode(), name), origin)
-                        : values.with(known, value(known, kv.getValueNode(), name), origin);
+            Optional<Setting> k = RunSettings.find(section, key);
+            if (k.isEmpty()) {
+                throw new ScenarioException(name + " line " + keyLine + ": unknown key '" + section + "." + key + "'"
+                        + suggest(key, valid) + "; valid keys in " + section + ": " + String.join(", ", valid));
             }
+            values = set(name, k.get(), kv.getValueNode(), values);
         }
-        return new Scenario(name, text, values);
+        return values;
+    }
+
+    /** {@code values} with {@code setting} set from a value node, checked against its kind, with its line. */
+    public static SettingValues set(String name, Setting setting, Node value, SettingValues values) {
+        SettingValues.Origin origin = new SettingValues.Origin(name, line(value));
+        return setting.kind() == Setting.Kind.MATRIX
+                ? values.withMatrix(setting, matrix(setting, value, name), origin)
+                : values.with(setting, value(setting, value, name), origin);
     }
 
     /**
@@ -163,11 +200,13 @@ public final class ScenarioLoader {
     private static final java.util.Set<String> STANDARD_TAGS =
             java.util.Set.of("str", "int", "float", "bool", "null", "seq", "map");
 
-    private static String suggest(String word, List<String> valid) {
+    /** E.g. {@code  (did you mean 'rx'?)}, or nothing when no valid word is close. */
+    public static String suggest(String word, List<String> valid) {
         return RunSettings.closest(word, valid).map(s -> " (did you mean '" + s + "'?)").orElse("");
     }
 
-    private static MappingNode mapping(Node node, String name, String what, String expected) {
+    /** The node as a mapping, or a one-line error: {@code NAME line N: WHAT must be a mapping of EXPECTED}. */
+    public static MappingNode mapping(Node node, String name, String what, String expected) {
         if (node instanceof MappingNode m) {
             return m;
         }
@@ -175,14 +214,16 @@ public final class ScenarioLoader {
                 + expected);
     }
 
-    private static String keyText(Node node, String name) {
+    /** A mapping key's text; keys must be plain words. */
+    public static String keyText(Node node, String name) {
         if (node instanceof ScalarNode s) {
             return s.getValue();
         }
         throw new ScenarioException(name + " line " + line(node) + ": keys must be plain words");
     }
 
-    private static int line(Node node) {
+    /** The node's line, counted from 1. */
+    public static int line(Node node) {
         return node.getStartMark() == null ? 0 : node.getStartMark().getLine() + 1;
     }
 

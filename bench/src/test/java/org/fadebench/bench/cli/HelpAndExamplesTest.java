@@ -11,6 +11,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -18,7 +19,9 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
 import java.util.stream.StreamSupport;
-import org.fadebench.bench.analysis.DiversityFit;
+import org.fadebench.bench.analysis.Bound;
+import org.fadebench.bench.study.DesignRow;
+import org.fadebench.bench.study.StudyTable;
 import org.fadebench.bench.report.FerPlot;
 import org.fadebench.bench.settings.RunSettings;
 import org.fadebench.bench.settings.Setting;
@@ -186,19 +189,34 @@ class HelpAndExamplesTest {
         }
     }
 
-    /** The demo's closing words come from the two fits, not from a fixed claim. */
+    /** The demo's closing words come from the ranking, not from a fixed claim. */
     @Test
-    void demoClosingWordsFollowTheFits() {
-        DiversityFit two = new DiversityFit(2.0, 0.1, 1.8, 2.2, List.of(18.0, 21.0, 24.0));
-        DiversityFit four = new DiversityFit(3.5, 0.13, 3.2, 3.7, List.of(15.0, 18.0, 21.0));
-        DiversityFit close = new DiversityFit(2.3, 0.3, 1.7, 2.9, List.of(15.0, 18.0, 21.0));
-        assertEquals("Fitted diversity order: 2.0 (95 % interval 1.8 to 2.2) with one receive antenna, 3.5 (95 % "
-                + "interval 3.2 to 3.7) with two: with two receive antennas the FER falls 1.8 times as fast with SNR.",
-                DemoCommand.closing(Optional.of(two), Optional.of(four)));
-        assertTrue(DemoCommand.closing(Optional.of(two), Optional.of(close))
-                .endsWith("; at this run's length the fits do not tell the two apart."));
-        assertEquals("Too few points with errors to fit a diversity order for sensor-2rx; compare the FER columns "
-                + "above.", DemoCommand.closing(Optional.of(two), Optional.empty()));
+    void demoClosingWordsFollowTheRanking() {
+        DesignRow mrc = row("mrc-1x2", 9.6, 9.0, 10.3);
+        DesignRow alamouti = row("alamouti-2x1", 12.5, 11.9, 13.2);
+        DesignRow twoByTwo = row("alamouti-2x2", 5.4, 5.0, 5.8);
+        StudyTable table = StudyTable.ranked("demo", 8, List.of(mrc, alamouti, twoByTwo), List.of(), List.of(), List.of());
+        assertEquals(List.of("Best at FER 0.01: alamouti-2x2, at 5.40 dB SNR (interval from the FER intervals: 5.00 to "
+                + "5.80 dB).", "alamouti-2x1 needs 2.90 dB more SNR than mrc-1x2 (interval from the FER intervals: 1.60 "
+                + "to 4.20 dB); this holds the 3.01 dB of splitting the power over two transmit antennas.",
+                "At the budget of 8 dB, 1 of 3 designs meet the target: alamouti-2x2."), DemoCommand.closing(table));
+        DesignRow far = row("alamouti-2x1", 16.5, 16.0, 17.0);
+        StudyTable apart = StudyTable.ranked("demo", 20, List.of(mrc, far), List.of(), List.of(), List.of());
+        List<String> words = DemoCommand.closing(apart);
+        assertTrue(words.get(1).endsWith("this does not hold the 3.01 dB of splitting the power over two transmit "
+                + "antennas."), words.get(1));
+        assertEquals("At the budget of 20 dB, 2 of 2 designs meet the target: mrc-1x2, alamouti-2x1.", words.get(2));
+    }
+
+    private static DesignRow row(String name, double snrDb, double low, double high) {
+        Map<Bound, Double> gaps = new EnumMap<>(Bound.class);
+        Map<Bound, String> notes = new EnumMap<>(Bound.class);
+        for (Bound b : Bound.values()) {
+            gaps.put(b, Double.NaN);
+            notes.put(b, "none");
+        }
+        return new DesignRow(name, Path.of(name), "v", "convention", 1, "link", 0.01, 1, snrDb, low, high, null, 0, 16,
+                false, 2, gaps, notes, 1000, 1, 0.95, null);
     }
 
     /**

@@ -33,29 +33,37 @@ class InterruptResumeTest {
         return a;
     }
 
+    /**
+     * Runs {@code fadebench ARGS} in a new process (output to {@code log}) and sends it SIGTERM as
+     * soon as {@code file} appears; returns the stopped process. Asserts that it was still running
+     * then: the sweeps of the callers run for seconds and their checkpoints appear within a quarter
+     * of a second of the sweep's start, so the signal arrives while it runs.
+     */
+    static Process terminatedOnceWritten(List<String> args, Path file, Path log) throws Exception {
+        List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-cp", System.getProperty("java.class.path"), FadebenchCli.class.getName()));
+        cmd.addAll(args);
+        Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(log.toFile()).start();
+        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
+        while (!Files.exists(file) && p.isAlive() && System.nanoTime() < deadline) {
+            Thread.sleep(20);
+        }
+        boolean running = p.isAlive();
+        p.destroy(); // SIGTERM on Unix
+        assertTrue(p.waitFor(30, TimeUnit.SECONDS), "the process stops");
+        assertTrue(running, "the process was still running when " + file + " appeared: " + Files.readString(log));
+        return p;
+    }
+
     @Test
     void sigtermThenResumeGivesTheSameBytes() throws Exception {
         Path straight = tmp.resolve("straight");
         assertEquals(0, CliTest.run(args(straight).toArray(new String[0])).code());
 
         Path cut = tmp.resolve("cut");
-        List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-cp", System.getProperty("java.class.path"), FadebenchCli.class.getName()));
-        cmd.addAll(args(cut));
-        Process p = new ProcessBuilder(cmd).redirectErrorStream(true)
-                .redirectOutput(tmp.resolve("cut.log").toFile()).start();
         Path checkpoint = cut.resolve("checkpoint.json");
-        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(30);
-        while (!Files.exists(checkpoint) && p.isAlive() && System.nanoTime() < deadline) {
-            Thread.sleep(20);
-        }
-        boolean interrupted = p.isAlive();
-        p.destroy(); // SIGTERM on Unix
-        assertTrue(p.waitFor(30, TimeUnit.SECONDS), "the process stops");
+        Process p = terminatedOnceWritten(args(cut), checkpoint, tmp.resolve("cut.log"));
         String log = Files.readString(tmp.resolve("cut.log"));
-        // the sweep runs for seconds and the checkpoint appears within a quarter of a second of its
-        // start, so the signal arrives while it runs
-        assertTrue(interrupted, "the process was still running when the checkpoint appeared");
         assertEquals(143, p.exitValue(), "128 + SIGTERM: " + log);
         assertTrue(log.contains("--resume"), log);
         assertTrue(Files.exists(checkpoint), "checkpoint kept for --resume");

@@ -108,7 +108,7 @@ class RunOutputsTest {
     @Test
     void demoReplacesItsOwnOutput() throws IOException {
         Path demo = tmp.resolve("demo");
-        Path earlier = Files.createDirectories(demo.resolve("sensor-1rx"));
+        Path earlier = Files.createDirectories(demo.resolve("mrc-1x2"));
         Files.writeString(earlier.resolve("results.csv"), "an earlier demo's results\n");
         CliTest.Outcome o = CliTest.run("demo", "--out", demo.toString(), "--threads", "2");
         assertEquals(0, o.code(), o.err());

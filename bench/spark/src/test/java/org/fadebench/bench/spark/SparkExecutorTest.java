@@ -96,6 +96,69 @@ class SparkExecutorTest {
         }
     }
 
+    /** Two small designs of a study (uncoded BPSK, 64-bit frames), ranked at FER 0.1. */
+    private static final String STUDY = """
+            link:
+              modulation: bpsk
+              frame_bits: 64
+            sweep:
+              snr_db: "0..12/3"
+              min_errors: 100
+              max_frames: 50000
+              seed: 4
+            analysis:
+              target_fer: 0.1
+              outage_draws: 1000
+            designs:
+              - name: mrc-1x2
+                link: {rx: 2}
+              - name: alamouti-2x1
+                link: {code: alamouti, rx: 1}
+            """;
+
+    /** study.csv's lines without the column {@code seconds}, the one column that depends on the clock. */
+    private static List<String> withoutSeconds(Path csv) throws IOException {
+        List<String> lines = Files.readAllLines(csv);
+        int header = 0;
+        while (lines.get(header).startsWith("#")) {
+            header++;
+        }
+        int column = List.of(lines.get(header).split(",", -1)).indexOf("seconds");
+        assertTrue(column >= 0, "study.csv has its seconds column");
+        List<String> kept = new ArrayList<>();
+        for (String line : lines) {
+            List<String> cells = new ArrayList<>(List.of(line.split(",", -1)));
+            if (!line.startsWith("#") && cells.size() > column) {
+                cells.remove(column);
+            }
+            kept.add(String.join(",", cells));
+        }
+        return kept;
+    }
+
+    /**
+     * A study through Spark (study --engine spark) writes the local study's study.csv (but for the
+     * seconds each design took) and each design's results.csv byte for byte.
+     */
+    @Test
+    void studyThroughSparkGivesTheLocalStudy() throws IOException {
+        Path file = Files.writeString(tmp.resolve("study.yaml"), STUDY);
+        Path local = tmp.resolve("study-local");
+        Path spark = tmp.resolve("study-spark");
+        Outcome l = cli(List.of("study", file.toString(), "--out", local.toString(), "--quiet", "--threads", "2"));
+        assertEquals(0, l.code(), l.err());
+        Outcome s = cli(List.of("study", file.toString(), "--out", spark.toString(), "--quiet", "--engine", "spark",
+                "--spark-master", "local[2]"));
+        assertEquals(0, s.code(), s.err());
+        assertEquals(withoutSeconds(local.resolve("study.csv")), withoutSeconds(spark.resolve("study.csv")));
+        for (String design : new String[] {"mrc-1x2", "alamouti-2x1"}) {
+            assertArrayEquals(Files.readAllBytes(local.resolve(design).resolve("results.csv")),
+                    Files.readAllBytes(spark.resolve(design).resolve("results.csv")), design);
+        }
+        assertTrue(Files.readString(spark.resolve("mrc-1x2").resolve("scenario.yaml")).contains("engine: \"spark\""),
+                "the design's scenario names its engine");
+    }
+
     private static final LinkSettings LINK = new LinkSettings(Modulation.QPSK, SpaceTimeCodes.ALAMOUTI, 1, 2,
             Fading.RAYLEIGH, 128, 0);
     private static final double[] SNR = {0, 4, 8, 12};
