@@ -4,15 +4,19 @@ import java.io.IOException;
 import java.net.InetSocketAddress;
 import java.net.Socket;
 import java.net.URI;
+import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Deque;
 import java.util.Iterator;
 import java.util.List;
 import java.util.stream.IntStream;
 import org.apache.spark.SparkConf;
 import org.apache.spark.TaskContext;
+import org.apache.spark.api.java.JavaFutureAction;
 import org.apache.spark.api.java.JavaSparkContext;
 import org.apache.spark.api.java.function.FlatMapFunction;
 import org.apache.spark.broadcast.Broadcast;
+import org.apache.spark.util.LongAccumulator;
 import org.fadebench.bench.report.ToolVersion;
 import org.fadebench.bench.sweep.BatchExecutor;
 import org.fadebench.bench.sweep.BatchId;
@@ -30,15 +34,18 @@ import org.fadebench.bench.sweep.SweepPlan;
  * results, and batches computed beyond a point's stopping batch are discarded by the ledger.
  *
  * <p>A round has {@code tasksPerRound} tasks (by default {@link #TASKS_PER_CORE} per core of the
- * cluster, so that cores that finish early find work). A task computes as many batches as take
- * about {@link #TASK_SECONDS} (measured on the rounds before), which keeps Spark's cost per task
- * small; but a round at most doubles the batches a point has been given so far, so that a point
- * that needs few frames is not handed many more.
+ * cluster, so that cores that finish early find work), and Spark holds two rounds at once, so that
+ * no core waits for the slowest task of a round. A task computes as many batches as take about
+ * {@link #TASK_SECONDS} (timed in the tasks), which keeps Spark's cost per task small; but a round
+ * at most doubles the batches a point has been given so far, so that a point that needs few frames
+ * is not handed many more.
  */
 public final class SparkExecutor implements BatchExecutor {
 
     /** Tasks per round per core of the cluster, unless set. */
     static final int TASKS_PER_CORE = 3;
+    /** Rounds Spark holds at once. */
+    private static final int ROUNDS_IN_FLIGHT = 2;
     /** What a task aims to take, in seconds. */
     static final double TASK_SECONDS = 0.25;
     /** How long the driver waits for a standalone master to answer before giving up, in ms. */
@@ -155,21 +162,29 @@ public final class SparkExecutor implements BatchExecutor {
     @Override
     public void execute(SweepPlan plan, Feed feed) {
         Broadcast<SweepPlan> shared = spark.broadcast(plan);
-        BatchTask task = new BatchTask(shared, version, failFirstAttempt);
+        LongAccumulator taskNanos = spark.sc().longAccumulator("fadebench task nanoseconds");
+        BatchTask task = new BatchTask(shared, version, failFirstAttempt, taskNanos);
+        Deque<JavaFutureAction<List<BatchResult>>> inFlight = new ArrayDeque<>();
         int perTask = 1;
         try {
             while (true) {
-                List<BatchId> round = takeRound(feed, perTask);
-                if (round.isEmpty()) {
+                // two rounds in flight: cores that finish a round's last tasks early start the next round
+                while (inFlight.size() < ROUNDS_IN_FLIGHT) {
+                    List<BatchId> round = takeRound(feed, perTask);
+                    if (round.isEmpty()) {
+                        break;
+                    }
+                    inFlight.add(spark.parallelize(round, Math.min(tasksPerRound, round.size())).mapPartitions(task)
+                            .collectAsync());
+                }
+                if (inFlight.isEmpty()) {
                     return;
                 }
-                int tasks = Math.min(tasksPerRound, round.size());
-                long start = System.nanoTime();
-                List<BatchResult> results = spark.parallelize(round, tasks).mapPartitions(task).collect();
-                results.forEach(feed::done);
-                perTask = nextPerTask(perTask, round.size(), tasks, (System.nanoTime() - start) * 1e-9);
+                inFlight.remove().get().forEach(feed::done);
+                perTask = nextPerTask(perTask, taskNanos);
             }
         } catch (Exception e) {
+            inFlight.forEach(f -> f.cancel(true));
             throw new Failure("Spark could not compute the batches (" + rootMessage(e) + "); what was merged is kept "
                     + "in the checkpoint: run the same command with --resume to continue", e);
         } finally {
@@ -197,12 +212,11 @@ public final class SparkExecutor implements BatchExecutor {
     }
 
     /**
-     * Batches per task for a task of about {@link #TASK_SECONDS}, from the round just computed
-     * (whose tasks ran in {@code tasks / cores} waves): at most twice as many as before.
+     * Batches per task for a task of about {@link #TASK_SECONDS}, from the time the tasks so far
+     * took per batch (measured in the tasks): at most twice as many as before.
      */
-    private int nextPerTask(int perTask, int batches, int tasks, double seconds) {
-        double waves = Math.max(1.0, (double) tasks / spark.defaultParallelism());
-        double secondsPerBatch = seconds / waves / Math.ceil((double) batches / tasks);
+    private static int nextPerTask(int perTask, LongAccumulator taskNanos) {
+        double secondsPerBatch = taskNanos.avg() * 1e-9;
         long wanted = (long) (TASK_SECONDS / Math.max(secondsPerBatch, 1e-9));
         return (int) Math.max(1, Math.min(2L * perTask, wanted));
     }
@@ -233,11 +247,14 @@ public final class SparkExecutor implements BatchExecutor {
         private final Broadcast<SweepPlan> plan;
         private final String driverVersion;
         private final BatchId failFirstAttempt;
+        private final LongAccumulator nanosPerBatch;
 
-        BatchTask(Broadcast<SweepPlan> plan, String driverVersion, BatchId failFirstAttempt) {
+        BatchTask(Broadcast<SweepPlan> plan, String driverVersion, BatchId failFirstAttempt,
+                  LongAccumulator nanosPerBatch) {
             this.plan = plan;
             this.driverVersion = driverVersion;
             this.failFirstAttempt = failFirstAttempt;
+            this.nanosPerBatch = nanosPerBatch;
         }
 
         @Override
@@ -252,7 +269,9 @@ public final class SparkExecutor implements BatchExecutor {
                 if (id.equals(failFirstAttempt) && TaskContext.get().attemptNumber() == 0) {
                     throw new IllegalStateException("the first attempt of the task of batch " + id + " fails (a test)");
                 }
+                long start = System.nanoTime();
                 results.add(worker.compute(id));
+                nanosPerBatch.add(System.nanoTime() - start);
             }
             return results.iterator();
         }
