@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.net.InetSocketAddress;
 import java.net.Socket;
 import java.net.URI;
+import java.net.URISyntaxException;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Deque;
@@ -113,8 +114,13 @@ public final class SparkExecutor implements BatchExecutor {
             return;
         }
         for (String hostPort : url.substring("spark://".length()).split(",")) {
-            URI uri = URI.create("spark://" + hostPort);
-            if (uri.getHost() == null || uri.getPort() < 0) {
+            URI uri;
+            try {
+                uri = new URI("spark://" + hostPort);
+            } catch (URISyntaxException e) {
+                uri = null;
+            }
+            if (uri == null || uri.getHost() == null || uri.getPort() < 0) {
                 throw new IllegalArgumentException("--spark-master " + url + ": needs spark://HOST:PORT");
             }
             try (Socket s = new Socket()) {

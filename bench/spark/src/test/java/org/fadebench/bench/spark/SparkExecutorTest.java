@@ -271,6 +271,10 @@ class SparkExecutorTest {
                 nonsense.err());
         assertTrue(nonsense.err().contains("valid forms: local[N]"), nonsense.err());
         assertEquals(1, nonsense.err().lines().count(), nonsense.err());
+        Outcome malformed = cli(with(UNCODED, "--engine", "spark", "--spark-master", "spark://a b:7077", "--out",
+                out.toString()));
+        assertEquals(2, malformed.code(), malformed.err());
+        assertEquals("fadebench run: --spark-master spark://a b:7077: needs spark://HOST:PORT", malformed.err().trim());
         assertFalse(Files.exists(out), "nothing written");
     }
 }
