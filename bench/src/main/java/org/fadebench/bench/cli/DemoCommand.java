@@ -97,10 +97,10 @@ final class DemoCommand implements Callable<Integer> {
             double high = a.snrDbHigh() - m.snrDbLow();
             String holds = Double.isNaN(low) || Double.isNaN(high) ? ""
                     : low <= POWER_SPLIT_DB && POWER_SPLIT_DB <= high
-                    ? String.format(Locale.ROOT, "; this holds the %.2f dB of splitting the power over two transmit "
-                            + "antennas", POWER_SPLIT_DB)
-                    : String.format(Locale.ROOT, "; this does not hold the %.2f dB of splitting the power over two "
-                            + "transmit antennas", POWER_SPLIT_DB);
+                    ? String.format(Locale.ROOT, "; the interval holds the %.2f dB expected from splitting the "
+                            + "transmit power over two antennas", POWER_SPLIT_DB)
+                    : String.format(Locale.ROOT, "; the interval does not hold the %.2f dB expected from "
+                            + "splitting the transmit power over two antennas", POWER_SPLIT_DB);
             lines.add(1, String.format(Locale.ROOT, "%s needs %.2f dB %s SNR than %s (%s)%s.", a.design(),
                     Math.abs(a.snrDbAtTarget() - m.snrDbAtTarget()),
                     a.snrDbAtTarget() >= m.snrDbAtTarget() ? "more" : "less", m.design(),

@@ -126,11 +126,11 @@ final class StudyRunner {
         }
         List<StudyTable.Named> skipped = plan.skipped().stream()
                 .map(s -> new StudyTable.Named(s.name(), s.reason())).toList();
-        table = StudyTable.ranked(plan.file().source(), plan.file().budgetDb(), rows, screened, skipped, List.of());
+        table = StudyTable.ranked(plan.file().title(), plan.file().budgetDb(), rows, screened, skipped, List.of());
         try {
             List<Path> written = StudyOutputs.write(plan.dir(), table, figure, sentences.apply(table), args);
             out.println();
-            out.println("Ranking (" + plan.file().source() + "):");
+            out.println("Ranking (" + plan.file().title() + "):");
             table.lines().forEach(out::println);
             written.forEach(p -> out.println("wrote " + p));
         } catch (IOException ex) {

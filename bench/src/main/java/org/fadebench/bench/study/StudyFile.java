@@ -9,6 +9,7 @@ import org.fadebench.bench.settings.SettingValues;
  * and the study's own analysis keys. Nothing here is checked as a link yet; {@link StudyPlan} does that.
  *
  * @param source       the file name, for messages
+ * @param title        the study's {@code title:}, or the file name when it has none
  * @param text         the file's text
  * @param common       the scenario sections' values shared by every design (origins name the file and line)
  * @param designs      the designs in file order
@@ -17,7 +18,7 @@ import org.fadebench.bench.settings.SettingValues;
  * @param screenMargin {@code analysis.screen_margin}, the factor over the target FER (see {@link Screening})
  * @param grid         the values of {@code vary:}, each with its line, to name a value no design can use
  */
-public record StudyFile(String source, String text, SettingValues common, List<Design> designs, double budgetDb,
+public record StudyFile(String source, String title, String text, SettingValues common, List<Design> designs, double budgetDb,
                         boolean screen, double screenMargin, List<GridValue> grid) {
 
     /**

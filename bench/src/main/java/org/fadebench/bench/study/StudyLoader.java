@@ -46,7 +46,7 @@ public final class StudyLoader {
                     + "design is screened out (at least 1).");
 
     private static final List<Setting> STUDY_KEYS = List.of(BUDGET_DB, SCREEN, SCREEN_MARGIN);
-    private static final List<String> TOP = List.of("link", "sweep", "analysis", "output", "designs", "vary");
+    private static final List<String> TOP = List.of("title", "link", "sweep", "analysis", "output", "designs", "vary");
     private static final Pattern NAME = Pattern.compile("[A-Za-z0-9._+-]{1,64}");
     /** Output keys a study cannot share between its designs: one file each. */
     private static final List<Setting> NOT_IN_A_STUDY = List.of(RunSettings.ARCHIVE, RunSettings.TRACE_OUT);
@@ -70,6 +70,7 @@ public final class StudyLoader {
         SettingValues own = SettingValues.defaults(STUDY_KEYS);
         Node designsNode = null;
         Node varyNode = null;
+        String title = name;
         Set<String> seen = new HashSet<>();
         for (NodeTuple t : top.getValue()) {
             String key = keyText(t.getKeyNode(), name);
@@ -80,6 +81,7 @@ public final class StudyLoader {
             switch (key) {
                 case "designs" -> designsNode = t.getValueNode();
                 case "vary" -> varyNode = t.getValueNode();
+                case "title" -> title = title(name, line, t.getValueNode());
                 case "analysis" -> {
                     common = ScenarioLoader.section(name, key, t.getValueNode(), common,
                             STUDY_KEYS.stream().map(Setting::name).toList());
@@ -127,7 +129,17 @@ public final class StudyLoader {
             }
         }
         double budget = own.isSet(BUDGET_DB) ? own.number(BUDGET_DB) : Double.NaN;
-        return new StudyFile(name, text, common, List.copyOf(crossed), budget, own.flag(SCREEN), margin, grid);
+        return new StudyFile(name, title, text, common, List.copyOf(crossed), budget, own.flag(SCREEN), margin, grid);
+    }
+
+    /** The study's {@code title:}: one line of plain text, 1 to 120 characters. */
+    private static String title(String name, int line, Node node) {
+        String text = node instanceof ScalarNode s ? s.getValue().trim() : "";
+        if (text.isEmpty() || text.length() > 120 || text.chars().anyMatch(Character::isISOControl)) {
+            throw new ScenarioException(name + " line " + line + ", key title: the study's title is one line of 1 to "
+                    + "120 characters (it heads the table, the plot and the report)");
+        }
+        return text;
     }
 
     /** budget_db, screen and screen_margin from the analysis section (their kinds checked with their lines). */

@@ -214,8 +214,8 @@ public record StudyTable(String title, double budgetDb, List<DesignRow> rows, Li
         if (!Double.isNaN(budgetDb)) {
             List<String> meet = rows.stream().filter(r -> Boolean.TRUE.equals(meets(r, budgetDb)))
                     .map(DesignRow::design).toList();
-            lines.add(String.format(Locale.ROOT, "At the budget of %s dB, %d of %d designs meet the target%s.",
-                    Numbers.db(budgetDb), meet.size(), rows.size() + screened.size(),
+            lines.add(String.format(Locale.ROOT, "At the budget of %s dB, %d of %d designs %s the target%s.",
+                    Numbers.db(budgetDb), meet.size(), rows.size() + screened.size(), meet.size() == 1 ? "meets" : "meet",
                     meet.isEmpty() ? "" : ": " + String.join(", ", meet)));
         }
         return lines;

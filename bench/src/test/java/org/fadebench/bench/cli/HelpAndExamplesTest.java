@@ -198,13 +198,13 @@ class HelpAndExamplesTest {
         StudyTable table = StudyTable.ranked("demo", 8, List.of(mrc, alamouti, twoByTwo), List.of(), List.of(), List.of());
         assertEquals(List.of("Best at FER 0.01: alamouti-2x2, at 5.40 dB SNR (interval from the FER intervals: 5.00 to "
                 + "5.80 dB).", "alamouti-2x1 needs 2.90 dB more SNR than mrc-1x2 (interval from the FER intervals: 1.60 "
-                + "to 4.20 dB); this holds the 3.01 dB of splitting the power over two transmit antennas.",
-                "At the budget of 8 dB, 1 of 3 designs meet the target: alamouti-2x2."), DemoCommand.closing(table));
+                + "to 4.20 dB); the interval holds the 3.01 dB expected from splitting the transmit power over two antennas.",
+                "At the budget of 8 dB, 1 of 3 designs meets the target: alamouti-2x2."), DemoCommand.closing(table));
         DesignRow far = row("alamouti-2x1", 16.5, 16.0, 17.0);
         StudyTable apart = StudyTable.ranked("demo", 20, List.of(mrc, far), List.of(), List.of(), List.of());
         List<String> words = DemoCommand.closing(apart);
-        assertTrue(words.get(1).endsWith("this does not hold the 3.01 dB of splitting the power over two transmit "
-                + "antennas."), words.get(1));
+        assertTrue(words.get(1).endsWith("the interval does not hold the 3.01 dB expected from splitting the "
+                + "transmit power over two antennas."), words.get(1));
         assertEquals("At the budget of 20 dB, 2 of 2 designs meet the target: mrc-1x2, alamouti-2x1.", words.get(2));
     }
 

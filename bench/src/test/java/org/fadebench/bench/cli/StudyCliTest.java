@@ -36,6 +36,7 @@ class StudyCliTest {
      * target at diversity 2).
      */
     private static final String THREE = """
+            title: "Transmit or receive diversity, BPSK"
             link:
               modulation: bpsk
               frame_bits: 64
@@ -88,6 +89,8 @@ class StudyCliTest {
         CliTest.Outcome o = study(file("three.yaml", THREE), out, "--threads", "2");
         assertEquals(0, o.code(), o.err());
         Map<String, JsonNode> d = byDesign(out);
+        assertEquals("Transmit or receive diversity, BPSK", JSON.readTree(out.resolve("study.json").toFile())
+                .path("title").asText(), "the study's title: heads study.json");
         JsonNode mrc = d.get("mrc-1x2");
         JsonNode ala = d.get("alamouti-2x1");
         double diff = ala.path("snr_db_at_target").asDouble() - mrc.path("snr_db_at_target").asDouble();
@@ -266,6 +269,8 @@ class StudyCliTest {
             // a screen without a budget
             {"analysis:\n  screen: true\ndesigns:\n  - name: a\n", "line 2, key analysis.screen: needs "
                     + "analysis.budget_db"},
+            // a title that is not one line of text
+            {"title: [a, b]\ndesigns:\n  - name: a\n", "line 1, key title: the study's title is one line"},
             // an explicit YAML tag
             {"designs:\n  - name: !!str a\n", "line 2: YAML tags are not allowed"},
         };
