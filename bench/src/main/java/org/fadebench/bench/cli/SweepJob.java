@@ -238,9 +238,9 @@ final class SweepJob {
             }
             if (!plan.quiet()) {
                 out.println(String.format(Locale.ROOT,
-                        "simulated %d frames in %.2f s: %.2f M symbols/s, %.2f M information bits/s on %d thread%s",
+                        "simulated %d frames in %.2f s: %.2f M symbols/s, %.2f M information bits/s on %s",
                         outcome.framesSimulated(), seconds, run.symbolsPerSecond() * 1e-6,
-                        run.infoBitsPerSecond() * 1e-6, plan.threads(), plan.threads() == 1 ? "" : "s"));
+                        run.infoBitsPerSecond() * 1e-6, plan.engine().describe(plan.threads())));
                 for (Path p : written) {
                     out.println("wrote " + p);
                 }
