@@ -21,8 +21,8 @@ import org.fadebench.coding.fec.Lanes;
  * edge e in row order, {@code posterior[j][lane]} per column j), and the check update is a few
  * short loops over lanes with branch-free selects ({@link MinSumLoops}, shared with the block-row
  * kernel {@link QcDecoder}; C2 in Java 17 vectorises only short loop bodies, and no 16-bit min, so
- * the messages are ints). Per check row and edge: Q = P − R into the message row with the sign
- * parity and the least and second least |Q| per lane; one loop corrects the two minima (the
+ * the messages are ints). Per check row, four edges per loop: Q = P − R into the message row with
+ * the sign parity and the least and second least |Q| per lane; one loop corrects the two minima (the
  * parity's sign put on them); then per edge R = ±(the corrected least of the others) and P = Q + R.
  * The edge of the least is not kept: an edge whose |Q| equals the least takes the second least,
  * which on a tie is the same value. This kernel decodes any H; for a quasi-cyclic code
@@ -45,6 +45,7 @@ final class FixedPointDecoder extends RowDecoder {
     static final int MESSAGE_LIMIT = 4095;
 
     private final MinSumLoops.Correction correction;
+    private final MinSumLoops.Group edges;
     private final int[][] channel;
     private final int[][] posterior;
     private final int[][] check;
@@ -62,6 +63,7 @@ final class FixedPointDecoder extends RowDecoder {
     FixedPointDecoder(ParityCheckMatrix h, LdpcDecoding decoding, int lanes) {
         super(h, decoding, lanes);
         correction = MinSumLoops.Correction.of(decoding);
+        edges = new MinSumLoops.Group(lanes);
         channel = new int[columns][lanes];
         posterior = new int[columns][lanes];
         check = new int[edgeColumn.length][lanes];
@@ -81,12 +83,15 @@ final class FixedPointDecoder extends RowDecoder {
     static long bytes(ParityCheckMatrix h, int lanes) {
         long row = 4L * lanes;
         return sharedBytes(h, lanes) + 3 * tableBytes(h.columns(), row) + tableBytes(h.edges(), row)
-                + 8 * Lanes.rowBytes(row) + Lanes.rowBytes(lanes);
+                + 8 * Lanes.rowBytes(row) + Lanes.rowBytes(lanes) + MinSumLoops.Group.bytes(lanes);
     }
 
-    /** The quantised value of a channel LLR. */
+    /**
+     * The quantised value of a channel LLR: round(L·SCALE) held within ±CHANNEL_LIMIT (rounded
+     * first, then held as an int: the conversion saturates, so this equals holding the double).
+     */
     static int quantise(double llr) {
-        return (int) Math.max(-CHANNEL_LIMIT, Math.min(CHANNEL_LIMIT, Math.rint(llr * SCALE)));
+        return Math.max(-CHANNEL_LIMIT, Math.min(CHANNEL_LIMIT, (int) Math.rint(llr * SCALE)));
     }
 
     @Override
@@ -173,11 +178,15 @@ final class FixedPointDecoder extends RowDecoder {
     private void updateRow(int row, int n) {
         int from = rowStart[row];
         int to = rowStart[row + 1];
-        Arrays.fill(least, 0, n, MinSumLoops.ABOVE);
-        Arrays.fill(second, 0, n, MinSumLoops.ABOVE);
-        Arrays.fill(parity, 0, n, 0);
-        for (int e = from; e < to; e++) {
-            MinSumLoops.subtractAndMinima(posterior[edgeColumn[e]], check[e], parity, least, second, n);
+        for (int e = from; e < to; e += MinSumLoops.GROUP) {
+            for (int k = 0; k < MinSumLoops.GROUP; k++) {
+                if (e + k < to) {
+                    edges.edge(k, posterior[edgeColumn[e + k]], check[e + k]);
+                } else {
+                    edges.filler(k);
+                }
+            }
+            MinSumLoops.subtractAndMinima(edges, e == from, parity, least, second, n);
         }
         correction.apply(least, second, parity, leastOut, gap, n);
         for (int e = from; e < to; e++) {

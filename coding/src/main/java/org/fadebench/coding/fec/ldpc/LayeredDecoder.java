@@ -76,9 +76,13 @@ abstract class LayeredDecoder implements LdpcDecoder {
     final void checkFinite(int lane, double[] llr, int off) {
         for (int j = 0; j < columns; j++) {
             if (!Double.isFinite(llr[off + j])) {
-                throw new IllegalArgumentException("LLR of column " + j + " for lane " + lane + " is "
-                        + llr[off + j] + "; valid: finite");
+                throw notFinite(lane, j, llr[off + j]);
             }
         }
+    }
+
+    /** The error for a channel LLR that is not finite. */
+    static IllegalArgumentException notFinite(int lane, int column, double llr) {
+        return new IllegalArgumentException("LLR of column " + column + " for lane " + lane + " is " + llr + "; valid: finite");
     }
 }

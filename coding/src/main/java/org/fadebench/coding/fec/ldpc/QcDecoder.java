@@ -10,13 +10,18 @@ import org.fadebench.coding.fec.Lanes;
  *
  * <p>In a block row every column is touched at most once (each circulant is a permutation), so its
  * Z rows are independent and updating them together gives exactly the row-by-row layered result.
- * Layout: posteriors as [base column][z][lane] (one flat row), the messages of a block edge as
+ * Layout: the posteriors of a base column as one row [z][lane], the messages of a block edge as
  * [z][lane] (a row per block edge), and the per-check quantities as [z][lane]. Row z of block
- * (i, j) with shift s reads column (z + s) mod Z of block j: the block's posteriors are copied into
- * a scratch row turned by s (two {@code System.arraycopy}) and back after the update, so each step
- * of the check update ({@link MinSumLoops}) is one loop over Z·{@value #WIDTH} ints with every
- * array indexed from 0 (C2 in Java 17 does not vectorise a loop whose arrays are indexed from
- * different offsets), instead of one short loop per row and edge.
+ * (i, j) with shift s reads column (z + s) mod Z of block j, so each base column's row is kept
+ * turned: row z holds column z + t mod Z, t the column's turn. Before block (i, j) is updated,
+ * column j is brought to turn s unless it is there already: turned into a spare row (two
+ * {@code System.arraycopy}) that then takes its place. It is not turned back; between iterations
+ * every column rests at the turn of its last block in the schedule (its home turn, in which
+ * channel values and decisions are kept too). So each step of the check update
+ * ({@link MinSumLoops}) is one loop over Z·{@value #WIDTH} ints with every array indexed from 0
+ * (C2 in Java 17 does not vectorise a loop whose arrays are indexed from different offsets),
+ * instead of one short loop per row and edge, and a block edge costs one turned copy or none (a
+ * column whose blocks in a row share a shift, as the 0 shifts of the dual-diagonal part do).
  *
  * <p>Lanes: up to {@code lanes} frames are loaded; they are decoded in groups of {@value #WIDTH},
  * one group after another through one working set (posteriors and messages), so the lane count
@@ -41,12 +46,22 @@ final class QcDecoder extends LayeredDecoder {
     private final int[] blockStart;
     private final int[] blockColumn;
     private final int[] blockShift;
+    /**
+     * Per base column: the turn its posterior row has now; between iterations its home turn (the
+     * shift of its last block in the schedule), the turn channel values and decisions are kept at.
+     */
+    private final int[] turn;
+    /** Per column of H: its place in the group's rows (base column · Z·WIDTH + turned row · WIDTH). */
     private final int[] slot;
     private final MinSumLoops.Correction correction;
     private final int[][] channel;
-    private final int[][] decided;
-    private final int[] posterior;
-    private final int[] rotated;
+    /** Per group and base column: the posteriors of its lanes when they finished, at the home turn. */
+    private final int[][][] decided;
+    /** Per base column: its posteriors as [turned row][lane] (row z holds position z + turn mod Z). */
+    private final int[][] posterior;
+    /** A row the next turned posteriors are copied into; swapped with the row it was turned from. */
+    private int[] spare;
+    private final MinSumLoops.Group edges;
     private final int[][] check;
     private final int[] least;
     private final int[] second;
@@ -82,9 +97,16 @@ final class QcDecoder extends LayeredDecoder {
             }
             blockStart[i + 1] = b;
         }
+        // each column's home turn: the shift of its last block in the schedule
+        turn = new int[baseColumns];
+        for (int b = 0; b < blocks; b++) {
+            turn[blockColumn[b]] = blockShift[b];
+        }
         slot = new int[columns];
         for (int c = 0; c < columns; c++) {
-            slot[c] = qc.position(c) * WIDTH;
+            int j = qc.position(c) / lifting;
+            int z = qc.position(c) % lifting;
+            slot[c] = j * slice + Math.floorMod(z - turn[j], lifting) * WIDTH;
         }
         correction = MinSumLoops.Correction.of(decoding);
         int groups = groups(lanes);
@@ -96,10 +118,11 @@ final class QcDecoder extends LayeredDecoder {
                 Arrays.fill(group, slot[c], slot[c] + WIDTH, 0);
             }
         }
-        decided = new int[groups][frame];
-        posterior = new int[frame];
-        mask = new int[frame];
-        rotated = new int[slice];
+        decided = new int[groups][baseColumns][slice];
+        posterior = new int[baseColumns][slice];
+        mask = new int[slice];
+        spare = new int[slice];
+        edges = new MinSumLoops.Group(slice);
         check = new int[blocks][slice];
         least = new int[slice];
         second = new int[slice];
@@ -131,23 +154,36 @@ final class QcDecoder extends LayeredDecoder {
     static long bytes(QcStructure qc, int lanes) {
         QcBaseMatrix base = qc.base();
         long slice = 4L * base.lifting() * WIDTH;
-        long frame = base.baseColumns() * slice;
+        long columnRows = Lanes.rowBytes(4L * base.baseColumns()) + base.baseColumns() * Lanes.rowBytes(slice);
         int blocks = blocks(base);
         int groups = groups(lanes);
         return sharedBytes(lanes) + Lanes.rowBytes(4L * (base.baseRows() + 1)) + 2 * Lanes.rowBytes(4L * blocks)
-                + Lanes.rowBytes(4L * qc.columns()) + 2 * (Lanes.rowBytes(4L * groups) + groups * Lanes.rowBytes(frame))
-                + 2 * Lanes.rowBytes(frame) + Lanes.rowBytes(4L * blocks) + blocks * Lanes.rowBytes(slice)
-                + 8 * Lanes.rowBytes(slice) + 2 * Lanes.rowBytes(WIDTH) + Lanes.rowBytes(4L * WIDTH);
+                + 2 * Lanes.rowBytes(4L * base.baseColumns()) + Lanes.rowBytes(4L * qc.columns())
+                + Lanes.rowBytes(4L * groups) + groups * Lanes.rowBytes(base.baseColumns() * slice)
+                + Lanes.rowBytes(4L * groups) + groups * columnRows + columnRows
+                + Lanes.rowBytes(4L * blocks) + blocks * Lanes.rowBytes(slice) + 9 * Lanes.rowBytes(slice)
+                + MinSumLoops.Group.bytes(base.lifting() * WIDTH)
+                + 2 * Lanes.rowBytes(WIDTH) + Lanes.rowBytes(4L * WIDTH);
     }
 
+    /**
+     * {@inheritDoc} Each LLR is checked as it is put: after an error (an LLR not finite) the lane
+     * holds part of the frame and is not loaded; load it again.
+     */
     @Override
     public void load(int lane, double[] llr, int off) {
         Lanes.checkLane(lane, lanes);
-        checkFinite(lane, llr, off);
         int[] group = channel[lane / WIDTH];
         int w = lane % WIDTH;
+        if (lane < WIDTH) {
+            loaded[lane] = false;
+        }
         for (int c = 0; c < columns; c++) {
-            group[slot[c] + w] = FixedPointDecoder.quantise(llr[off + c]);
+            double value = llr[off + c];
+            if (!Double.isFinite(value)) {
+                throw notFinite(lane, c, value);
+            }
+            group[slot[c] + w] = FixedPointDecoder.quantise(value);
         }
         if (lane < WIDTH) {
             loaded[lane] = true;
@@ -156,7 +192,8 @@ final class QcDecoder extends LayeredDecoder {
 
     @Override
     int decision(int lane, int column) {
-        return decided[lane / WIDTH][slot[column] + lane % WIDTH] >>> 31;
+        int at = slot[column] + lane % WIDTH;
+        return decided[lane / WIDTH][at / slice][at % slice] >>> 31;
     }
 
     @Override
@@ -165,7 +202,9 @@ final class QcDecoder extends LayeredDecoder {
         Arrays.fill(loaded, false);
         for (int g = 0; g * WIDTH < frames; g++) {
             int n = Math.min(WIDTH, frames - g * WIDTH);
-            System.arraycopy(channel[g], 0, posterior, 0, posterior.length);
+            for (int j = 0; j < baseColumns; j++) {
+                System.arraycopy(channel[g], j * slice, posterior[j], 0, slice);
+            }
             for (int[] row : check) {
                 Arrays.fill(row, 0);
             }
@@ -211,8 +250,10 @@ final class QcDecoder extends LayeredDecoder {
     /** Lane w of group 0 from its channel values: posteriors, messages 0, running, no iteration done. */
     private void start(int w) {
         int[] values = channel[0];
-        for (int x = w; x < posterior.length; x += WIDTH) {
-            posterior[x] = values[x];
+        for (int j = 0; j < baseColumns; j++) {
+            for (int x = w; x < slice; x += WIDTH) {
+                posterior[j][x] = values[j * slice + x];
+            }
         }
         for (int[] row : check) {
             for (int x = w; x < slice; x += WIDTH) {
@@ -268,45 +309,58 @@ final class QcDecoder extends LayeredDecoder {
             }
         }
         if (count > 0) {
-            for (int at = WIDTH; at < mask.length; at += WIDTH) {
+            for (int at = WIDTH; at < slice; at += WIDTH) {
                 System.arraycopy(mask, 0, mask, at, WIDTH);
             }
-            MinSumLoops.keep(posterior, decided[group], mask, mask.length);
+            for (int j = 0; j < baseColumns; j++) {
+                MinSumLoops.keep(posterior[j], decided[group][j], mask, slice);
+            }
         }
         return count;
     }
 
     /**
-     * The posteriors block b's rows see, into {@link #rotated}: row z of the block reads column
-     * (z + s) mod Z of its base column, so the rows are the column's block turned by s (two copies).
+     * {@code from}, the posteriors of a base column at turn {@code at}, into {@code to} at turn
+     * {@code want}: row z of {@code to} is row z + want − at (mod Z) of {@code from} (two copies).
      */
-    private void rotateIn(int b) {
-        int p = blockColumn[b] * slice;
-        int head = (lifting - blockShift[b]) * WIDTH;
-        System.arraycopy(posterior, p + slice - head, rotated, 0, head);
-        System.arraycopy(posterior, p, rotated, head, slice - head);
+    private void copyTurned(int[] from, int at, int[] to, int want) {
+        int d = Math.floorMod(want - at, lifting) * WIDTH;
+        System.arraycopy(from, d, to, 0, slice - d);
+        System.arraycopy(from, 0, to, slice - d, d);
     }
 
-    /** {@link #rotated} back into block b's base column: the inverse of {@link #rotateIn}. */
-    private void rotateOut(int b) {
-        int p = blockColumn[b] * slice;
-        int head = (lifting - blockShift[b]) * WIDTH;
-        System.arraycopy(rotated, 0, posterior, p + slice - head, head);
-        System.arraycopy(rotated, head, posterior, p, slice - head);
+    /**
+     * The posteriors of block b's base column, turned so that row z of the block reads row z
+     * (column z + shift mod Z of the block's base column): the row itself if it is at that turn
+     * already, else a turned copy that replaces it.
+     */
+    private int[] turned(int b) {
+        int j = blockColumn[b];
+        if (turn[j] != blockShift[b]) {
+            copyTurned(posterior[j], turn[j], spare, blockShift[b]);
+            int[] old = posterior[j];
+            posterior[j] = spare;
+            spare = old;
+            turn[j] = blockShift[b];
+        }
+        return posterior[j];
     }
 
     private void updateBlockRow(int i) {
-        Arrays.fill(least, MinSumLoops.ABOVE);
-        Arrays.fill(second, MinSumLoops.ABOVE);
-        Arrays.fill(parity, 0);
-        for (int b = blockStart[i]; b < blockStart[i + 1]; b++) {
-            rotateIn(b);
-            MinSumLoops.subtractAndMinima(rotated, check[b], parity, least, second, slice);
+        int end = blockStart[i + 1];
+        for (int b = blockStart[i]; b < end; b += MinSumLoops.GROUP) {
+            for (int k = 0; k < MinSumLoops.GROUP; k++) {
+                if (b + k < end) {
+                    edges.edge(k, turned(b + k), check[b + k]);
+                } else {
+                    edges.filler(k);
+                }
+            }
+            MinSumLoops.subtractAndMinima(edges, b == blockStart[i], parity, least, second, slice);
         }
         correction.apply(least, second, parity, leastOut, gap, slice);
         for (int b = blockStart[i]; b < blockStart[i + 1]; b++) {
-            MinSumLoops.scatter(rotated, check[b], least, leastOut, gap, slice);
-            rotateOut(b);
+            MinSumLoops.scatter(posterior[blockColumn[b]], check[b], least, leastOut, gap, slice);
         }
     }
 
@@ -316,8 +370,7 @@ final class QcDecoder extends LayeredDecoder {
         for (int i = 0; i < blockRows; i++) {
             Arrays.fill(syndrome, 0);
             for (int b = blockStart[i]; b < blockStart[i + 1]; b++) {
-                rotateIn(b);
-                MinSumLoops.exclusiveOr(syndrome, rotated, slice);
+                MinSumLoops.exclusiveOr(syndrome, turned(b), slice);
             }
             MinSumLoops.or(failedRows, syndrome, slice);
         }
