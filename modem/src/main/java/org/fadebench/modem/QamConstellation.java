@@ -84,25 +84,33 @@ public final class QamConstellation {
      * @param symbols    interleaved complex output, written from complex index {@code symOffset}
      */
     public void map(byte[] bits, int bitOffset, double[] symbols, int symOffset, int count) {
-        int b = bitOffset;
-        int o = symOffset << 1;
-        final int m = bitsPerAxis;
-        for (int n = 0; n < count; n++) {
-            int labelI = 0;
-            for (int j = 0; j < m; j++) {
-                labelI = (labelI << 1) | bits[b++];
-            }
-            symbols[o++] = amplitudeOfLabel[labelI];
-            if (twoAxes) {
-                int labelQ = 0;
-                for (int j = 0; j < m; j++) {
-                    labelQ = (labelQ << 1) | bits[b++];
-                }
-                symbols[o++] = amplitudeOfLabel[labelQ];
-            } else {
-                symbols[o++] = 0.0;
-            }
+        for (int n = 0, b = bitOffset, o = symOffset << 1; n < count; n++, b += bitsPerSymbol, o += 2) {
+            int label = label(bits, b);
+            symbols[o] = amplitudeOfLabel[twoAxes ? label >>> bitsPerAxis : label];
+            symbols[o + 1] = twoAxes ? amplitudeOfLabel[label & (levels - 1)] : 0.0;
         }
+    }
+
+    /**
+     * {@link #map(byte[], int, double[], int, int)} into planes of real and imaginary parts, the
+     * symbols' bits {@code bitStride} apart: the bits at {@code bits[bitOffset + i·bitStride ..]}
+     * to {@code re[i]}, {@code im[i]} for i in {@code 0 .. count)}.
+     */
+    public void map(byte[] bits, int bitOffset, int bitStride, double[] re, double[] im, int count) {
+        for (int i = 0, b = bitOffset; i < count; i++, b += bitStride) {
+            int label = label(bits, b);
+            re[i] = amplitudeOfLabel[twoAxes ? label >>> bitsPerAxis : label];
+            im[i] = twoAxes ? amplitudeOfLabel[label & (levels - 1)] : 0.0;
+        }
+    }
+
+    /** The label of a symbol (see {@link #mapLabels}): its {@link #bitsPerSymbol} bits from {@code bits[b]}, the first most significant. */
+    private int label(byte[] bits, int b) {
+        int label = 0;
+        for (int j = 0; j < bitsPerSymbol; j++) {
+            label = (label << 1) | bits[b + j];
+        }
+        return label;
     }
 
     /**
@@ -302,14 +310,17 @@ public final class QamConstellation {
 
     private void demap(double[] estimates, double[] gain, int symOffset, double n0, double[] llr, int llrOffset,
                        int count, boolean exact) {
-        int l = llrOffset;
-        for (int n = 0; n < count; n++) {
+        for (int n = 0, l = llrOffset; n < count; n++, l += bitsPerSymbol) {
             int k = symOffset + n;
-            double w = gain[k] / n0;
-            l = axisLlr(estimates[2 * k], w, exact, llr, l);
-            if (twoAxes) {
-                l = axisLlr(estimates[2 * k + 1], w, exact, llr, l);
-            }
+            symbolLlr(estimates[2 * k], estimates[2 * k + 1], gain[k] / n0, exact, llr, l);
+        }
+    }
+
+    /** The LLRs of the estimate (re, im) at weight w = gain / n0 (BPSK: of re alone), from {@code llr[l]}. */
+    private void symbolLlr(double re, double im, double w, boolean exact, double[] llr, int l) {
+        int next = axisLlr(re, w, exact, llr, l);
+        if (twoAxes) {
+            axisLlr(im, w, exact, llr, next);
         }
     }
 
@@ -326,18 +337,49 @@ public final class QamConstellation {
     }
 
     /**
+     * {@link #demap(LlrMethod, double[], double[], int, double, double[], int, int)} from planes of
+     * real and imaginary parts, the symbols' LLRs {@code llrStride} apart: the estimate
+     * {@code re[i]}, {@code im[i]} with gain {@code gain[i]} to {@code llr[llrOffset + i·llrStride ..]}
+     * for i in {@code 0 .. count)}.
+     */
+    public void demap(LlrMethod method, double[] re, double[] im, double[] gain, double n0, double[] llr,
+                      int llrOffset, int llrStride, int count) {
+        boolean exact = method == LlrMethod.EXACT;
+        for (int i = 0, l = llrOffset; i < count; i++, l += llrStride) {
+            symbolLlr(re[i], im[i], gain[i] / n0, exact, llr, l);
+        }
+    }
+
+    /**
      * The LLRs of one axis: the max-log term (min1 - min0)·w over the L amplitudes and, when
      * {@code exact}, the log-sum-exp correction ln Σ_{b=0} e^{-(d²-min0)w} - ln Σ_{b=1} e^{-(d²-min1)w}.
+     * Max-log with 2 or 4 levels (BPSK, QPSK, 16-QAM) takes each d² once and the minima of the
+     * label pattern's fixed subsets without a branch: the same doubles as the search.
      */
     private int axisLlr(double y, double weight, boolean exact, double[] llr, int l) {
+        final double[] amp = amplitudeOfLevel;
+        if (!exact && levels == 2) {
+            // labels 0, 1
+            llr[l] = (squared(y - amp[1]) - squared(y - amp[0])) * weight;
+            return l + 1;
+        }
+        if (!exact && levels == 4) {
+            // labels 0, 1, 3, 2: the first bit is 0 on levels 0 and 1, the second on levels 0 and 3
+            double d0 = squared(y - amp[0]);
+            double d1 = squared(y - amp[1]);
+            double d2 = squared(y - amp[2]);
+            double d3 = squared(y - amp[3]);
+            llr[l] = (Math.min(d2, d3) - Math.min(d0, d1)) * weight;
+            llr[l + 1] = (Math.min(d1, d2) - Math.min(d0, d3)) * weight;
+            return l + 2;
+        }
         final int m = bitsPerAxis;
         for (int j = 0; j < m; j++) {
             int shift = m - 1 - j;
             double min0 = Double.POSITIVE_INFINITY;
             double min1 = Double.POSITIVE_INFINITY;
             for (int i = 0; i < levels; i++) {
-                double d = y - amplitudeOfLevel[i];
-                double d2 = d * d;
+                double d2 = squared(y - amp[i]);
                 if (((labelOfLevel[i] >>> shift) & 1) == 0) {
                     if (d2 < min0) {
                         min0 = d2;
@@ -351,8 +393,7 @@ public final class QamConstellation {
                 double sum0 = 0;
                 double sum1 = 0;
                 for (int i = 0; i < levels; i++) {
-                    double d = y - amplitudeOfLevel[i];
-                    double d2 = d * d;
+                    double d2 = squared(y - amp[i]);
                     if (((labelOfLevel[i] >>> shift) & 1) == 0) {
                         sum0 += Math.exp(-(d2 - min0) * weight);
                     } else {
@@ -364,6 +405,10 @@ public final class QamConstellation {
             llr[l++] = value;
         }
         return l;
+    }
+
+    private static double squared(double d) {
+        return d * d;
     }
 
     /**

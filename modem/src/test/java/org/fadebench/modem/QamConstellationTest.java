@@ -120,6 +120,64 @@ class QamConstellationTest {
         assertArrayEquals(bits, back);
     }
 
+    /**
+     * Mapping bits into planes and LLRs out of them (every third symbol in a plane, the bits of the
+     * others in between) give exactly the interleaved map's symbols and the interleaved demapper's
+     * LLRs, max-log and exact, and map agrees with mapLabels.
+     */
+    @ParameterizedTest
+    @EnumSource(Modulation.class)
+    void planarBitsAndLlrsEqualInterleaved(Modulation mod) {
+        QamConstellation c = mod.constellation();
+        int k = c.bitsPerSymbol();
+        int perBlock = 3;
+        int blocks = 200;
+        int n = perBlock * blocks;
+        Random rnd = new Random(6);
+        byte[] bits = new byte[k * n];
+        int[] labels = new int[n];
+        for (int i = 0; i < bits.length; i++) {
+            bits[i] = (byte) rnd.nextInt(2);
+            labels[i / k] = (labels[i / k] << 1) | bits[i];
+        }
+        double[] s = new double[2 * n];
+        c.map(bits, 0, s, 0, n);
+        double[] fromLabels = new double[2 * n];
+        c.mapLabels(labels, 0, fromLabels, 0, n);
+        assertArrayEquals(fromLabels, s);
+        double[] gain = new double[n];
+        double[] blockGain = new double[blocks];
+        for (int b = 0; b < blocks; b++) {
+            blockGain[b] = 0.2 + 3 * rnd.nextDouble();
+            for (int j = 0; j < perBlock; j++) {
+                gain[perBlock * b + j] = blockGain[b];
+            }
+        }
+        double[][] re = new double[perBlock][blocks];
+        double[][] im = new double[perBlock][blocks];
+        for (int j = 0; j < perBlock; j++) {
+            c.map(bits, j * k, perBlock * k, re[j], im[j], blocks);
+            for (int b = 0; b < blocks; b++) {
+                assertEquals(s[2 * (perBlock * b + j)], re[j][b], 0.0);
+                assertEquals(s[2 * (perBlock * b + j) + 1], im[j][b], 0.0);
+                re[j][b] += rnd.nextGaussian() * (b % 7 == 0 ? 3.0 : 0.3);
+                im[j][b] += rnd.nextGaussian() * 0.3;
+                s[2 * (perBlock * b + j)] = re[j][b];
+                s[2 * (perBlock * b + j) + 1] = im[j][b];
+            }
+        }
+        for (LlrMethod method : LlrMethod.values()) {
+            double[] interleaved = new double[k * n];
+            c.demap(method, s, gain, 0, 0.3, interleaved, 0, n);
+            double[] planar = new double[k * n];
+            for (int j = 0; j < perBlock; j++) {
+                c.demap(method, re[j], im[j], blockGain, 0.3, planar, j * k, perBlock * k, blocks);
+            }
+            // assertArrayEquals on double[] without a delta compares the bit patterns
+            assertArrayEquals(interleaved, planar, mod + " " + method);
+        }
+    }
+
     /** Planar mapping and slicing give exactly the interleaved ones' symbols and labels. */
     @ParameterizedTest
     @EnumSource(Modulation.class)
@@ -159,19 +217,12 @@ class QamConstellationTest {
     }
 
     /**
-     * Counting hard-decision errors against the symbols sent equals slicing every estimate and
-     * comparing labels (bits by popcount, symbols by inequality), in planar and interleaved form,
-     * for estimates that sit on both sides of every decision boundary within a few ulps, exactly on
-     * it, far outside the constellation, at ±infinity and NaN, and under Gaussian noise of several
-     * strengths. The check that skips slicing must never skip a wrong decision.
+     * Values on one axis: the decision boundaries (L-2-2j)·h and the amplitudes themselves, each
+     * nudged by 0 to ±4 ulps and by ±1e-9 relative, and 0, -0, ±1e300, ±infinity and NaN.
      */
-    @ParameterizedTest
-    @EnumSource(Modulation.class)
-    void countingHardErrorsEqualsSlicingEveryEstimate(Modulation mod) {
-        QamConstellation c = mod.constellation();
+    private static java.util.List<Double> nearBoundaries(QamConstellation c) {
         int levels = c.levelsPerAxis();
         double h = c.halfSpacing();
-        // per axis: boundaries (L-2-2j)·h and the points themselves, each nudged by 0 to ±4 ulps
         java.util.List<Double> axis = new java.util.ArrayList<>();
         for (int j = -1; j <= 2 * levels - 1; j++) {
             double v = (levels - 1 - j) * h;
@@ -191,6 +242,76 @@ class QamConstellationTest {
             Double.NEGATIVE_INFINITY, Double.NaN}) {
             axis.add(v);
         }
+        return axis;
+    }
+
+    /**
+     * The max-log LLRs are, bit for bit, those of the plain search over every level of the bit's
+     * axis, min over d² = (y - a)² with the bit 1 less min with the bit 0, times gain / n0 (the form
+     * the demapper keeps for 8 and 16 levels; common practice, no source):
+     * for estimates on and within ulps of every boundary and amplitude, far outside, infinite, NaN,
+     * and Gaussian around the points.
+     */
+    @ParameterizedTest
+    @EnumSource(Modulation.class)
+    void maxLogLlrIsTheSearchOverEveryLevelBitForBit(Modulation mod) {
+        QamConstellation c = mod.constellation();
+        int k = c.bitsPerSymbol();
+        int m = mod == Modulation.BPSK ? 1 : k / 2;
+        int levels = c.levelsPerAxis();
+        double[] amplitudeOfAxisLabel = new double[levels];
+        double[] point = new double[2];
+        for (int g = 0; g < levels; g++) {
+            c.point(mod == Modulation.BPSK ? g : g << m, point);
+            amplitudeOfAxisLabel[g] = point[0];
+        }
+        java.util.List<Double> axis = nearBoundaries(c);
+        Random rnd = new Random(17);
+        double[] y = new double[2];
+        double[] gain = new double[1];
+        double[] llr = new double[k];
+        for (int trial = 0; trial < 40000; trial++) {
+            for (int a = 0; a < 2; a++) {
+                y[a] = trial % 2 == 0 ? axis.get(rnd.nextInt(axis.size()))
+                        : amplitudeOfAxisLabel[rnd.nextInt(levels)] + 0.4 * rnd.nextGaussian();
+            }
+            gain[0] = 0.1 + 3 * rnd.nextDouble();
+            double n0 = 0.05 + rnd.nextDouble();
+            c.demapMaxLog(y, gain, 0, n0, llr, 0, 1);
+            for (int j = 0; j < k; j++) {
+                double v = y[j / m];
+                int shift = m - 1 - j % m;
+                double min0 = Double.POSITIVE_INFINITY;
+                double min1 = Double.POSITIVE_INFINITY;
+                for (int g = 0; g < levels; g++) {
+                    double d = v - amplitudeOfAxisLabel[g];
+                    double d2 = d * d;
+                    if (((g >>> shift) & 1) == 0) {
+                        min0 = d2 < min0 ? d2 : min0;
+                    } else {
+                        min1 = d2 < min1 ? d2 : min1;
+                    }
+                }
+                double expected = (min1 - min0) * (gain[0] / n0);
+                assertEquals(Double.doubleToLongBits(expected), Double.doubleToLongBits(llr[j]),
+                        mod + " y = " + v + " bit " + j + ": " + expected + " against " + llr[j]);
+            }
+        }
+    }
+
+    /**
+     * Counting hard-decision errors against the symbols sent equals slicing every estimate and
+     * comparing labels (bits by popcount, symbols by inequality), in planar and interleaved form,
+     * for estimates that sit on both sides of every decision boundary within a few ulps, exactly on
+     * it, far outside the constellation, at ±infinity and NaN, and under Gaussian noise of several
+     * strengths. The check that skips slicing must never skip a wrong decision.
+     */
+    @ParameterizedTest
+    @EnumSource(Modulation.class)
+    void countingHardErrorsEqualsSlicingEveryEstimate(Modulation mod) {
+        QamConstellation c = mod.constellation();
+        double h = c.halfSpacing();
+        java.util.List<Double> axis = nearBoundaries(c);
         Random rnd = new Random(11);
         int n = 20000;
         int[] labels = new int[n];

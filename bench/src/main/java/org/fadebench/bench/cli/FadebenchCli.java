@@ -5,6 +5,7 @@ import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.util.List;
 import org.fadebench.bench.report.ToolVersion;
+import org.fadebench.bench.sweep.BatchExecutor;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -43,6 +44,10 @@ public final class FadebenchCli implements Runnable {
             if (ex instanceof InvalidInputException) {
                 errWriter.println(prefix(line) + oneLine(ex.getMessage()));
                 return ExitCodes.INVALID_INPUT;
+            }
+            if (ex instanceof BatchExecutor.Failure) {
+                errWriter.println(prefix(line) + oneLine(ex.getMessage()));
+                return ExitCodes.IO_FAILURE;
             }
             if (ex instanceof UncheckedIOException) {
                 errWriter.println(prefix(line) + "I/O failure: "

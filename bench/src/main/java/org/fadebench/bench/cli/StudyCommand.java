@@ -1,11 +1,14 @@
 package org.fadebench.bench.cli;
 
 import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.fadebench.bench.report.FerPlot;
 import org.fadebench.bench.scenario.ScenarioException;
 import org.fadebench.bench.settings.InvalidSettingException;
 import org.fadebench.bench.settings.RunSettings;
+import org.fadebench.bench.settings.Setting;
 import org.fadebench.bench.settings.SettingValues;
 import org.fadebench.bench.study.StudyFile;
 import org.fadebench.bench.study.StudyLoader;
@@ -18,11 +21,12 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /**
- * {@code fadebench study FILE [--out DIR] [--resume] [--threads N] [--x-axis snr|ebn0]}: several
+ * {@code fadebench study FILE [--out DIR] [--resume] [--threads N] [--x-axis snr|ebn0] [--engine spark ...]}: several
  * designs from one study file, one after another on all threads, each into {@code DIR/<design>/}
  * as {@code run} writes it, then ranked in study.csv and study.json.
  */
 @Command(name = "study", mixinStandardHelpOptions = true, sortOptions = false,
+        modelTransformer = StudyCommand.Options.class,
         description = {"Run several designs from one study file (the scenario sections as common settings, plus "
                 + "designs: and/or vary:), each into DIR/<design>/ as run writes it; rank them against the target FER "
                 + "in study.csv and study.json.", "See README, Design studies."})
@@ -59,6 +63,17 @@ final class StudyCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    /** The settings of the table a study also takes on its command line: who computes every design's batches. */
+    static final List<Setting> SETTINGS = List.of(RunSettings.ENGINE, RunSettings.SPARK_MASTER, RunSettings.SPARK_TASKS);
+
+    /** Adds {@link #SETTINGS} as options. */
+    static final class Options implements CommandLine.IModelTransformer {
+        @Override
+        public CommandLine.Model.CommandSpec transform(CommandLine.Model.CommandSpec spec) {
+            return SettingOptions.addTo(spec, SETTINGS, Map.of());
+        }
+    }
+
     @Override
     public Integer call() {
         StudyFile study;
@@ -67,7 +82,7 @@ final class StudyCommand implements Callable<Integer> {
         } catch (ScenarioException e) {
             throw new InvalidInputException(e.getMessage());
         }
-        SettingValues given = SettingValues.empty();
+        SettingValues given = SettingOptions.given(spec.commandLine().getParseResult(), SETTINGS, Map.of());
         if (xAxis != null) {
             given = given.with(RunSettings.PLOT_X, xAxis, SettingValues.Origin.COMMAND_LINE);
         }

@@ -23,6 +23,7 @@ import org.fadebench.bench.report.ResultsCsv;
 import org.fadebench.bench.report.ResultsJson;
 import org.fadebench.bench.report.ResultsTable;
 import org.fadebench.bench.run.RunPlan;
+import org.fadebench.bench.sweep.BatchExecutor;
 import org.fadebench.bench.sweep.PointResult;
 import org.fadebench.bench.sweep.PointState;
 import org.fadebench.bench.sweep.SweepEngine;
@@ -66,8 +67,23 @@ final class SweepJob {
 
     /** Runs the sweep; returns the exit code. */
     int run() {
+        try (BatchExecutor executor = startExecutor()) {
+            return run(executor);
+        }
+    }
+
+    /** Starts the run's executor, before anything is written (a cluster that cannot be used is invalid input). */
+    private BatchExecutor startExecutor() {
+        try {
+            return plan.engine().start(plan.threads());
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException(e.getMessage());
+        }
+    }
+
+    private int run(BatchExecutor executor) {
         var link = plan.link();
-        SweepEngine engine = new SweepEngine(link, plan.rules(), plan.seed(), plan.threads(), plan.confidence());
+        SweepEngine engine = new SweepEngine(link, plan.rules(), plan.seed(), executor, plan.confidence());
         engine.progressMillis(250);
         engine.recordChannels(plan.traceOut() == null ? 0 : plan.traceOutBlocks());
         String fingerprint = Checkpoint.fingerprint(plan.numbersFingerprintText(engine.batchFrames()));
@@ -82,14 +98,14 @@ final class SweepJob {
             if (link.channel().pilots() > 0) {
                 out.println(ResultsCsv.pilotLine(link));
             }
-            out.println(String.format(Locale.ROOT, "stop: %s frame errors or %d frames per point%s; seed %d; %d thread%s",
+            out.println(String.format(Locale.ROOT, "stop: %s frame errors or %d frames per point%s; seed %d; %s",
                     plan.rules().fadeSampling() ? "fade-sampling to a FER half-width of "
                             + Numbers.db(plan.rules().relPrecision()) + " x FER after at least "
                             + Numbers.db(org.fadebench.bench.sweep.WeightedInterval.MIN_EFFECTIVE_ERRORS) + " effective"
                             : plan.rules().minErrors() == 0 ? "no minimum of" : Long.toString(plan.rules().minErrors()),
                     plan.rules().maxFrames(),
                     plan.rules().maxSeconds() > 0 ? " or " + Numbers.db(plan.rules().maxSeconds()) + " s" : "",
-                    plan.seed(), plan.threads(), plan.threads() == 1 ? "" : "s"));
+                    plan.seed(), plan.engine().describe(plan.threads())));
             if (resumed != null) {
                 long done = resumed.stream().filter(PointState::done).count();
                 out.println("resuming from " + plan.outDir().resolve(Checkpoint.FILE_NAME) + " (" + done + " of "
@@ -225,9 +241,9 @@ final class SweepJob {
             }
             if (!plan.quiet()) {
                 out.println(String.format(Locale.ROOT,
-                        "simulated %d frames in %.2f s: %.2f M symbols/s, %.2f M information bits/s on %d thread%s",
+                        "simulated %d frames in %.2f s: %.2f M symbols/s, %.2f M information bits/s on %s",
                         outcome.framesSimulated(), seconds, run.symbolsPerSecond() * 1e-6,
-                        run.infoBitsPerSecond() * 1e-6, plan.threads(), plan.threads() == 1 ? "" : "s"));
+                        run.infoBitsPerSecond() * 1e-6, plan.engine().describe(plan.threads())));
                 for (Path p : written) {
                     out.println("wrote " + p);
                 }

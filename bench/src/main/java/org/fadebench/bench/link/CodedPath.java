@@ -7,17 +7,17 @@ import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.QamConstellation;
 
 /**
- * Coded frames ({@link InterleavedTransmission}): payload bits → CRC, channel code, interleaver →
- * QAM → … → LLRs → deinterleaver, channel decoder, CRC. Frames are sent one by one and decoded in
- * lanes, up to {@link LinkSettings#lanes()} frames at once, or continuously where the codec can (a
- * lane takes the next frame as soon as its own is decided, so an LDPC frame that needs every
- * iteration does not hold up the others); each frame's outcome is the same as if it were decoded
- * alone. A frame's raw symbol errors are the hard decisions on its coded bits' LLRs against the
- * bits sent.
+ * Coded frames, on the link's {@link Transmission} (planar or interleaved): payload bits → CRC,
+ * channel code, interleaver → QAM → … → LLRs → deinterleaver, channel decoder, CRC. Frames are
+ * sent one by one and decoded in lanes, up to {@link LinkSettings#lanes()} frames at once, or
+ * continuously where the codec can (a lane takes the next frame as soon as its own is decided, so
+ * an LDPC frame that needs every iteration does not hold up the others); each frame's outcome is
+ * the same as if it were decoded alone. A frame's raw symbol errors are the hard decisions on its
+ * coded bits' LLRs against the bits sent.
  */
 final class CodedPath implements FramePath {
 
-    private final InterleavedTransmission transmission;
+    private final Transmission transmission;
     private final QamConstellation constellation;
     private final LlrMethod llrMethod;
     private final FecCodec codec;
@@ -41,7 +41,7 @@ final class CodedPath implements FramePath {
     /** Lanes the codec decodes continuously (empty if it decodes in groups only), for the lanes it finishes. */
     private final int[] finished;
 
-    CodedPath(LinkSettings settings, InterleavedTransmission transmission) {
+    CodedPath(LinkSettings settings, Transmission transmission) {
         FrameCoding coding = settings.coding();
         this.transmission = transmission;
         this.constellation = settings.modulation().constellation();
@@ -121,13 +121,13 @@ final class CodedPath implements FramePath {
         codec.encode(bits, 0, codedBits, 0);
         // padding up to whole code blocks: random bits, sent and ignored
         draws.fillBits(codedBits, codedLength, codedBits.length - codedLength);
-        constellation.map(codedBits, 0, transmission.symbols, 0, symbols);
+        transmission.map(constellation, codedBits);
         transmission.transmit(draws, n0, frame);
         if (transmission.weighted()) {
             laneWeight[lane] = transmission.frameWeight();
             laneFadeEnergy[lane] = transmission.frameFadeEnergy();
         }
-        constellation.demap(llrMethod, transmission.estimates, transmission.gain, 0, n0, llr, 0, symbols);
+        transmission.demap(constellation, llrMethod, n0, llr);
         codec.receive(lane, llr, 0);
         int symbolErrors = 0;
         for (int s = 0, b = 0; s < symbols; s++) {

@@ -6,6 +6,8 @@ import org.fadebench.coding.stbc.Combiner;
 import org.fadebench.coding.stbc.Equaliser;
 import org.fadebench.coding.stbc.SpaceTimeCode;
 import org.fadebench.coding.stbc.StbcEncoder;
+import org.fadebench.modem.LlrMethod;
+import org.fadebench.modem.QamConstellation;
 
 /**
  * {@link Transmission} on interleaved complex arrays, for every code, channel and equaliser: the
@@ -76,5 +78,15 @@ final class InterleavedTransmission extends Transmission {
     @Override
     void copyEstimates(double[] out) {
         System.arraycopy(estimates, 0, out, 0, estimates.length);
+    }
+
+    @Override
+    void map(QamConstellation constellation, byte[] bits) {
+        constellation.map(bits, 0, symbols, 0, gain.length);
+    }
+
+    @Override
+    void demap(QamConstellation constellation, LlrMethod method, double n0, double[] llr) {
+        constellation.demap(method, estimates, gain, 0, n0, llr, 0, gain.length);
     }
 }

@@ -16,10 +16,11 @@ import org.fadebench.coding.stbc.PlanarKernel;
  * The chain only chooses the {@link FramePath} for its link and the {@link Transmission} under it:
  * <ul>
  *   <li>{@link CodedPath} when the frame carries a CRC or a channel code;</li>
- *   <li>else {@link PlanarPath} when the space-time code has a {@link PlanarKernel} and the channel
- *       stays constant within a fading block;</li>
+ *   <li>else {@link PlanarPath} when the transmission is planar;</li>
  *   <li>else {@link GeneralPath}.</li>
  * </ul>
+ * The transmission is planar ({@link PlanarTransmission}) when the space-time code has a
+ * {@link PlanarKernel} and the channel stays constant within a fading block, else interleaved.
  * Random draws are taken in a fixed order (bits, padding, then per fading block H and noise), so
  * a frame depends only on the stream it is given. Each worker thread has its own chain.
  */
@@ -42,7 +43,7 @@ public final class LinkChain implements FramePath {
             PlanarKernel kernel = settings.code().newPlanarKernel(settings.receiveAntennas()).orElseThrow();
             PlanarTransmission planes = new PlanarTransmission(settings, channel, kernel);
             this.transmission = planes;
-            this.path = new PlanarPath(settings, planes);
+            this.path = settings.coding().coded() ? new CodedPath(settings, planes) : new PlanarPath(settings, planes);
         } else {
             InterleavedTransmission interleaved = new InterleavedTransmission(settings, channel);
             this.transmission = interleaved;
@@ -52,11 +53,11 @@ public final class LinkChain implements FramePath {
     }
 
     /**
-     * Whether a chain of {@code settings} takes the planar path: uncoded, a space-time code with a
+     * Whether a chain of {@code settings} sends on planes: a space-time code with a
      * {@link PlanarKernel}, a channel constant within each fading block.
      */
     private static boolean planarApplies(LinkSettings settings) {
-        return !settings.coding().coded() && settings.code().hasPlanarKernel() && !settings.channel().varies();
+        return settings.code().hasPlanarKernel() && !settings.channel().varies();
     }
 
     /**
@@ -66,11 +67,12 @@ public final class LinkChain implements FramePath {
      */
     public static long bufferBytes(LinkSettings settings) {
         long bytes = Transmission.channelBytes(settings);
-        if (planarApplies(settings)) {
-            return bytes + PlanarTransmission.bufferBytes(settings) + PlanarPath.bufferBytes(settings);
+        boolean planar = planarApplies(settings);
+        bytes += planar ? PlanarTransmission.bufferBytes(settings) : InterleavedTransmission.bufferBytes(settings);
+        if (settings.coding().coded()) {
+            return bytes + CodedPath.bufferBytes(settings);
         }
-        bytes += InterleavedTransmission.bufferBytes(settings);
-        return bytes + (settings.coding().coded() ? CodedPath.bufferBytes(settings) : GeneralPath.bufferBytes(settings));
+        return bytes + (planar ? PlanarPath.bufferBytes(settings) : GeneralPath.bufferBytes(settings));
     }
 
     public LinkSettings settings() {
@@ -96,9 +98,9 @@ public final class LinkChain implements FramePath {
         transmission.channel.fadeScale(scale);
     }
 
-    /** Whether this chain takes the planar path. */
+    /** Whether this chain sends on planes. */
     boolean planar() {
-        return path instanceof PlanarPath;
+        return transmission instanceof PlanarTransmission;
     }
 
     /** The last frame's symbol estimates, interleaved complex, into {@code out} (for tests). */

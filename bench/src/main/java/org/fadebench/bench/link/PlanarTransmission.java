@@ -1,15 +1,19 @@
 package org.fadebench.bench.link;
 
+import java.util.Arrays;
 import org.fadebench.channel.Draws;
 import org.fadebench.channel.LinkChannel;
 import org.fadebench.coding.stbc.PlanarKernel;
 import org.fadebench.coding.stbc.SpaceTimeCode;
+import org.fadebench.modem.LlrMethod;
+import org.fadebench.modem.QamConstellation;
 
 /**
  * {@link Transmission} on planes (see {@link PlanarKernel}): symbols, grid, received signal and
  * estimates are kept as one array per real or imaginary part of each symbol, slot and antenna of a
  * code block, indexed by code block, so that encoder, channel and combiner run as short
- * unit-stride loops. It needs a channel that stays constant within a fading block.
+ * unit-stride loops. It needs a channel that stays constant within a fading block. Symbol k of
+ * code block i is symbol K·i + k of the frame, in planes 2k and 2k + 1.
  */
 final class PlanarTransmission extends Transmission {
 
@@ -18,6 +22,9 @@ final class PlanarTransmission extends Transmission {
     final double[][] symbols;
     /** 2K planes: Re and Im of each symbol estimate. */
     final double[][] estimates;
+    /** The post-combining gain of each code block's symbols (the same for all K). */
+    private final double[] gain;
+    private final int bitsPerSymbol;
     private final double[][] grid;
     private final double[][] received;
 
@@ -29,14 +36,16 @@ final class PlanarTransmission extends Transmission {
         this.kernel = kernel;
         this.symbols = new double[2 * code.symbolsPerBlock()][blocks];
         this.estimates = new double[2 * code.symbolsPerBlock()][blocks];
+        this.gain = new double[blocks];
+        this.bitsPerSymbol = settings.modulation().bitsPerSymbol();
         this.grid = new double[2 * slots * settings.transmitAntennas()][blocks];
         this.received = new double[2 * slots * settings.receiveAntennas()][blocks];
     }
 
-    /** Bytes of the planes the constructor allocates. */
+    /** Bytes of the planes and gains the constructor allocates. */
     static long bufferBytes(LinkSettings settings) {
         SpaceTimeCode code = settings.code();
-        long planes = 4L * code.symbolsPerBlock()
+        long planes = 4L * code.symbolsPerBlock() + 1
                 + 2L * code.slotsPerBlock() * (settings.transmitAntennas() + settings.receiveAntennas());
         return 8 * planes * settings.blocksPerFrame();
     }
@@ -48,6 +57,7 @@ final class PlanarTransmission extends Transmission {
         channel.estimate(n0, draws, hHat);
         kernel.setChannel(hHat);
         kernel.combine(received, first, blocks, estimates);
+        Arrays.fill(gain, first, first + blocks, kernel.gain());
     }
 
     @Override
@@ -57,6 +67,23 @@ final class PlanarTransmission extends Transmission {
             for (int j = 0; j < parts; j++) {
                 out[parts * i + j] = estimates[j][i];
             }
+        }
+    }
+
+    @Override
+    void map(QamConstellation constellation, byte[] bits) {
+        int k = estimates.length / 2;
+        for (int j = 0; j < k; j++) {
+            constellation.map(bits, j * bitsPerSymbol, k * bitsPerSymbol, symbols[2 * j], symbols[2 * j + 1], gain.length);
+        }
+    }
+
+    @Override
+    void demap(QamConstellation constellation, LlrMethod method, double n0, double[] llr) {
+        int k = estimates.length / 2;
+        for (int j = 0; j < k; j++) {
+            constellation.demap(method, estimates[2 * j], estimates[2 * j + 1], gain, n0, llr, j * bitsPerSymbol,
+                    k * bitsPerSymbol, gain.length);
         }
     }
 }

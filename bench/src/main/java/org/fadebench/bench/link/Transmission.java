@@ -2,6 +2,8 @@ package org.fadebench.bench.link;
 
 import org.fadebench.channel.Draws;
 import org.fadebench.channel.LinkChannel;
+import org.fadebench.modem.LlrMethod;
+import org.fadebench.modem.QamConstellation;
 
 /**
  * The middle of a link, from a frame's symbols to their estimates: per fading block, space-time
@@ -98,4 +100,10 @@ abstract class Transmission {
 
     /** The last frame's symbol estimates, interleaved complex, into {@code out} (for tests). */
     abstract void copyEstimates(double[] out);
+
+    /** Maps a frame's bits, {@code bitsPerSymbol} per symbol in frame order, to the symbols to send. */
+    abstract void map(QamConstellation constellation, byte[] bits);
+
+    /** The LLRs of the last frame's symbol estimates at noise level {@code n0}, in the order of {@link #map}'s bits. */
+    abstract void demap(QamConstellation constellation, LlrMethod method, double n0, double[] llr);
 }

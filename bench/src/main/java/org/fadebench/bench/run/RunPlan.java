@@ -114,6 +114,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
             throw new InvalidSettingException(THREADS, "must be between 1 and 1024, got " + threads);
         }
         requireHeap(link, threads, traceOut == null ? 0 : traceOutBlocks);
+        Engine.from(v);
         double confidence = v.number(CONFIDENCE);
         if (!(confidence > 0 && confidence < 1)) {
             throw new InvalidSettingException(CONFIDENCE, "must lie strictly between 0 and 1 (e.g. 0.95), got "
@@ -142,6 +143,11 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
                 : Double.NaN));
         return new RunPlan(resolvePaths(v), source, link, snrDb, rules, v.whole(SEED), threads, confidence, outDir, archive,
                 v.flag(QUIET), bounds, targetFer, traceOut, traceOutBlocks, axes, warnings(link));
+    }
+
+    /** Who computes the batches (checked by {@link #from}). */
+    public Engine engine() {
+        return Engine.from(SettingValues.defaults(RunSettings.all()).overlaidBy(values));
     }
 
     /**

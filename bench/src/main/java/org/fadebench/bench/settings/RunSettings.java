@@ -110,6 +110,13 @@ public final class RunSettings {
     public static final Setting SEED = new Setting("sweep", "seed", "--seed", WHOLE, "N", "1", "Master seed.");
     public static final Setting THREADS = new Setting("sweep", "threads", "--threads", WHOLE, "N", null,
             "Worker threads (default: all cores).");
+    public static final Setting ENGINE = new Setting("sweep", "engine", "--engine", TEXT, "NAME", "local",
+            "Who computes the batches: local (threads of this machine) or spark (Apache Spark; see README, "
+                    + "Running on a cluster).");
+    public static final Setting SPARK_MASTER = new Setting("sweep", "spark_master", "--spark-master", TEXT, "URL",
+            null, "Spark master with --engine spark, e.g. local[2] or spark://HOST:7077 (default: spark-submit's).");
+    public static final Setting SPARK_TASKS = new Setting("sweep", "spark_tasks_per_round", "--spark-tasks-per-round",
+            WHOLE, "N", null, "Spark tasks per round of batches (default: 3 per core of the cluster).");
     // analysis
     public static final Setting TARGET_FER = new Setting("analysis", "target_fer", "--target-fer", NUMBER, "FER",
             "0.01", "FER at which the SNR and the gap to each outage bound are reported.");
@@ -146,6 +153,7 @@ public final class RunSettings {
             FEC_ITERATIONS, FEC_CORRECTION, FEC_FULL_ITERATIONS, CRC, INTERLEAVER,
             INTERLEAVER_ROWS, LLR, FRAME_BITS, COHERENCE,
             SNR_DB, MIN_ERRORS, MAX_FRAMES, MAX_SECONDS, FER_FLOOR, ESTIMATOR, REL_PRECISION, CONFIDENCE, SEED, THREADS,
+            ENGINE, SPARK_MASTER, SPARK_TASKS,
             TARGET_FER, RATE, MI, OUTAGE_DRAWS,
             FOLDER, ARCHIVE, QUIET, OVERWRITE, TRACE_OUT, TRACE_OUT_BLOCKS, PLOT_X, PLOT_FLOOR);
 

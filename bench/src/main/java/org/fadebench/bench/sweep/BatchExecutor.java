@@ -12,7 +12,7 @@ package org.fadebench.bench.sweep;
  * executor for a cluster takes a few wanted batches at a time, ships the plan (a serialisable
  * value) and the batch ids to its workers, and hands the serialisable results back.
  */
-public interface BatchExecutor {
+public interface BatchExecutor extends AutoCloseable {
 
     /**
      * Computes batches until the feed wants no more, then returns. Must hand back every batch it
@@ -21,6 +21,21 @@ public interface BatchExecutor {
      * @throws RuntimeException when a batch cannot be computed; the sweep then fails with it
      */
     void execute(SweepPlan plan, Feed feed);
+
+    /** Lets go of what the executor holds (a cluster application); the default holds nothing. */
+    @Override
+    default void close() {
+    }
+
+    /**
+     * The executor could not compute batches for a reason outside fadebench (a cluster that failed
+     * or went away); the message is one line for the user. The sweep fails with it as it is.
+     */
+    class Failure extends RuntimeException {
+        public Failure(String message, Throwable cause) {
+            super(message, cause);
+        }
+    }
 
     /** The sweep's side: wanted batches out, results in. Both methods are thread-safe. */
     interface Feed {

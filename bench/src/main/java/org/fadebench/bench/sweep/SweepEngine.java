@@ -259,6 +259,9 @@ public final class SweepEngine {
         }
 
         synchronized SweepOutcome outcome(long startNanos) {
+            if (failure instanceof BatchExecutor.Failure f) {
+                throw f;
+            }
             if (failure != null) {
                 throw new IllegalStateException("simulation failed: " + failure, failure);
             }

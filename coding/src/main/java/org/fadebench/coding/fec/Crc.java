@@ -1,5 +1,8 @@
 package org.fadebench.coding.fec;
 
+import java.lang.invoke.MethodHandles;
+import java.lang.invoke.VarHandle;
+import java.nio.ByteOrder;
 import org.fadebench.modem.NamedChoice;
 
 /**
@@ -77,7 +80,7 @@ public enum Crc implements NamedChoice {
 
     /**
      * The CRC of {@code len} bits given one per byte, in frame order. Whole groups of eight bits
-     * are packed and go through the byte table; the rest is shifted in bit by bit.
+     * are packed (see {@link #pack}) and go through the byte table; the rest is shifted in bit by bit.
      */
     public long ofBits(byte[] bits, int off, int len) {
         if (width == 0) {
@@ -87,11 +90,7 @@ public enum Crc implements NamedChoice {
         int i = off;
         int end = off + len;
         for (int byteEnd = off + (len & ~7); i < byteEnd; i += 8) {
-            int b = 0;
-            for (int j = 0; j < 8; j++) {
-                b |= (bits[i + j] & 1) << (reflected ? j : 7 - j);
-            }
-            r = feedByte(r, b);
+            r = feedByte(r, pack(bits, i));
         }
         for (; i < end; i++) {
             r = step(r, bits[i] & 1);
@@ -129,6 +128,25 @@ public enum Crc implements NamedChoice {
             }
         }
         return true;
+    }
+
+    /** Eight bytes of an array as a little-endian long: byte t at bits 8t .. 8t + 7. */
+    private static final VarHandle EIGHT_BYTES = MethodHandles.byteArrayViewVarHandle(long[].class,
+            ByteOrder.LITTLE_ENDIAN);
+
+    /**
+     * The eight bits at {@code bits[i .. i+8)} (the low bit of each byte) as the byte the register
+     * takes: the first bit lowest if reflected, else highest. With the bytes' low bits at 8t, the
+     * product with Σ_t 2^(56 − 7t) puts bit t at 56 + t and every other partial product at a
+     * different place outside bits 56 .. 63 (8t − 7u = 8t' − 7u' needs t − t' a multiple of 7 and
+     * u − u' of 8), so nothing carries into them (common practice, no source).
+     */
+    private int pack(byte[] bits, int i) {
+        long eight = (long) EIGHT_BYTES.get(bits, i);
+        if (!reflected) {
+            eight = Long.reverseBytes(eight);
+        }
+        return (int) (((eight & 0x0101010101010101L) * 0x0102040810204080L) >>> 56);
     }
 
     /** The i-th transmitted check bit: register top bit first, or lowest bit first if reflected. */

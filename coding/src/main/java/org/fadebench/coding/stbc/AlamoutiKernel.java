@@ -81,6 +81,11 @@ public final class AlamoutiKernel implements Combiner, PlanarKernel {
     }
 
     @Override
+    public double gain() {
+        return gain;
+    }
+
+    @Override
     public void combine(double[] y, int yRow, int blocks, double[] est, double[] gainOut, int symOffset) {
         final int nr = this.nr;
         final double[] h = this.h;

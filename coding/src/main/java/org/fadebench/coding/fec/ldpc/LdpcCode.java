@@ -168,7 +168,8 @@ public final class LdpcCode implements ChannelCode {
         CodeLayout l = layout(infoBits);
         int n = l.matrix().columns();
         return LdpcDecoders.bytes(l, decoding, lanes) + source.encoderBytes(infoBits) + Lanes.rowBytes(n)
-                + Lanes.rowBytes(8L * n) + Lanes.rowBytes(4L * l.infoBits()) + Lanes.rowBytes(4L * l.sentBits());
+                + Lanes.rowBytes(8L * n) + Lanes.rowBytes(4L * l.infoBits())
+                + 3 * Lanes.rowBytes(4L * LdpcLaneCoder.sentRuns(l));
     }
 
     @Override
@@ -218,11 +219,17 @@ public final class LdpcCode implements ChannelCode {
             return family.layout(infoBits);
         }
 
-        /** Its dual-diagonal encoder: the information and syndrome blocks (n bytes), the positions (4k bytes), the block lists. */
+        /**
+         * Its dual-diagonal encoder: the information blocks (below n bytes), the packed blocks (the
+         * information blocks and parity block 0 twice, syndrome and parity blocks: below
+         * BASE_COLUMNS + 2 runs of 2Z bits and a word), the positions (4k bytes), the block lists.
+         */
         @Override
         public long encoderBytes(int infoBits) {
-            int n = family.lifting(infoBits) * LdpcFamily.BASE_COLUMNS;
-            return Lanes.rowBytes(n) + Lanes.rowBytes(4L * infoBits) + 3 * Lanes.rowBytes(4L * LdpcFamily.BASE_COLUMNS
+            int z = family.lifting(infoBits);
+            int n = z * LdpcFamily.BASE_COLUMNS;
+            return Lanes.rowBytes(n) + Lanes.rowBytes(8L * (LdpcFamily.BASE_COLUMNS + 2) * ((2 * z + 63) / 64 + 1))
+                    + Lanes.rowBytes(4L * infoBits) + 3 * Lanes.rowBytes(4L * LdpcFamily.BASE_COLUMNS
                     * LdpcFamily.BASE_COLUMNS) + 64;
         }
     }

@@ -1,0 +1,285 @@
+package org.fadebench.bench.spark;
+
+import java.io.IOException;
+import java.net.InetSocketAddress;
+import java.net.Socket;
+import java.net.URI;
+import java.net.URISyntaxException;
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Deque;
+import java.util.Iterator;
+import java.util.List;
+import java.util.stream.IntStream;
+import org.apache.spark.SparkConf;
+import org.apache.spark.TaskContext;
+import org.apache.spark.api.java.JavaFutureAction;
+import org.apache.spark.api.java.JavaSparkContext;
+import org.apache.spark.api.java.function.FlatMapFunction;
+import org.apache.spark.broadcast.Broadcast;
+import org.apache.spark.util.LongAccumulator;
+import org.fadebench.bench.report.ToolVersion;
+import org.fadebench.bench.sweep.BatchExecutor;
+import org.fadebench.bench.sweep.BatchId;
+import org.fadebench.bench.sweep.BatchResult;
+import org.fadebench.bench.sweep.BatchWorker;
+import org.fadebench.bench.sweep.SweepPlan;
+
+/**
+ * Computes a sweep's batches on Apache Spark, in rounds: each round takes wanted batches from the
+ * feed, cuts them into tasks of consecutive batches, lets Spark compute the tasks on its workers
+ * ({@link BatchTask}: a {@link BatchWorker} per task, built from the plan broadcast once per sweep)
+ * and hands every result back to the feed, whose ledger merges them in batch order. The numbers are
+ * therefore the local thread pool's, whatever the cluster: a task is a pure function of the plan
+ * and its batch ids, so a task Spark recomputes (a lost executor, a failed attempt) gives the same
+ * results, and batches computed beyond a point's stopping batch are discarded by the ledger.
+ *
+ * <p>A round has {@code tasksPerRound} tasks (by default {@link #TASKS_PER_CORE} per core of the
+ * cluster, so that cores that finish early find work), and Spark holds two rounds at once, so that
+ * no core waits for the slowest task of a round. A task computes as many batches as take about
+ * {@link #TASK_SECONDS} (timed in the tasks), which keeps Spark's cost per task small; but a round
+ * at most doubles the batches a point has been given so far, so that a point that needs few frames
+ * is not handed many more.
+ */
+public final class SparkExecutor implements BatchExecutor {
+
+    /** Tasks per round per core of the cluster, unless set. */
+    static final int TASKS_PER_CORE = 3;
+    /** Rounds Spark holds at once. */
+    private static final int ROUNDS_IN_FLIGHT = 2;
+    /** What a task aims to take, in seconds. */
+    static final double TASK_SECONDS = 0.25;
+    /** How long the driver waits for a standalone master to answer before giving up, in ms. */
+    private static final int CONNECT_MILLIS = 5000;
+
+    private final JavaSparkContext spark;
+    private final int tasksPerRound;
+    private final String version;
+    private BatchId failFirstAttempt;
+
+    private SparkExecutor(JavaSparkContext spark, int tasksPerRound, String version) {
+        this.spark = spark;
+        this.tasksPerRound = tasksPerRound > 0 ? tasksPerRound : TASKS_PER_CORE * spark.defaultParallelism();
+        this.version = version;
+    }
+
+    /**
+     * Starts a Spark application on {@code master} (null: the master spark-submit set) and checks
+     * that its workers run this fadebench.
+     *
+     * @param tasksPerRound tasks per round, or 0 for {@link #TASKS_PER_CORE} per core
+     * @throws IllegalArgumentException when there is no master, it cannot be reached or used, or
+     *                                  the workers run another fadebench version
+     */
+    public static SparkExecutor start(String master, int tasksPerRound) {
+        return start(master, tasksPerRound, ToolVersion.version());
+    }
+
+    /** As {@link #start(String, int)}, for a driver of fadebench {@code version} (tests give another). */
+    static SparkExecutor start(String master, int tasksPerRound, String version) {
+        SparkConf conf = new SparkConf().setAppName("fadebench");
+        if (master != null) {
+            conf.setMaster(master);
+        } else if (!conf.contains("spark.master")) {
+            throw new IllegalArgumentException("--spark-master: --engine spark needs a master URL such as local[2] or "
+                    + "spark://HOST:7077, unless spark-submit starts fadebench");
+        }
+        String url = conf.get("spark.master");
+        if (url.startsWith("local")) {
+            // one machine: no web page, and no network address beyond the loopback
+            conf.set("spark.ui.enabled", "false").set("spark.driver.host", "127.0.0.1")
+                    .set("spark.driver.bindAddress", "127.0.0.1");
+        }
+        requireReachable(url);
+        JavaSparkContext spark;
+        try {
+            spark = new JavaSparkContext(conf);
+        } catch (Exception e) {
+            throw new IllegalArgumentException("--spark-master " + url + ": Spark cannot start with it (" + rootMessage(e)
+                    + "); valid forms: local[N], local[N,ATTEMPTS], spark://HOST:PORT, yarn, k8s://URL");
+        }
+        try {
+            SparkExecutor executor = new SparkExecutor(spark, tasksPerRound, version);
+            executor.requireSameVersion();
+            return executor;
+        } catch (RuntimeException e) {
+            spark.stop();
+            throw e;
+        }
+    }
+
+    /** A standalone master ({@code spark://HOST:PORT}) must answer; other kinds are Spark's to check. */
+    private static void requireReachable(String url) {
+        if (!url.startsWith("spark://")) {
+            return;
+        }
+        for (String hostPort : url.substring("spark://".length()).split(",")) {
+            URI uri;
+            try {
+                uri = new URI("spark://" + hostPort);
+            } catch (URISyntaxException e) {
+                uri = null;
+            }
+            if (uri == null || uri.getHost() == null || uri.getPort() < 0) {
+                throw new IllegalArgumentException("--spark-master " + url + ": needs spark://HOST:PORT");
+            }
+            try (Socket s = new Socket()) {
+                s.connect(new InetSocketAddress(uri.getHost(), uri.getPort()), CONNECT_MILLIS);
+            } catch (IOException e) {
+                throw new IllegalArgumentException("--spark-master " + url + ": cannot reach " + hostPort + " ("
+                        + e.getMessage() + "); check that the master runs and the URL is the one its page shows");
+            }
+        }
+    }
+
+    /** One task per core asks its worker which fadebench it runs (a task checks again before it computes). */
+    private void requireSameVersion() {
+        int n = spark.defaultParallelism();
+        List<String> seen;
+        try {
+            seen = spark.parallelize(IntStream.range(0, n).boxed().toList(), n).map(i -> ToolVersion.version())
+                    .distinct().collect();
+        } catch (Exception e) {
+            throw new IllegalArgumentException("--spark-master " + spark.master() + ": the workers do not answer ("
+                    + rootMessage(e) + ")");
+        }
+        for (String v : seen) {
+            if (!v.equals(version)) {
+                throw new IllegalArgumentException(mismatch(v, version));
+            }
+        }
+    }
+
+    private static String mismatch(String worker, String driver) {
+        return "--engine spark: a Spark worker runs fadebench " + worker + " but this driver runs " + driver
+                + "; give the workers this jar (spark-submit ships it) and no other fadebench jar";
+    }
+
+    /** For tests: the first attempt of the task that holds batch {@code id} fails (Spark then retries it). */
+    void failFirstAttemptAt(BatchId id) {
+        this.failFirstAttempt = id;
+    }
+
+    /** Tasks per round. */
+    int tasksPerRound() {
+        return tasksPerRound;
+    }
+
+    @Override
+    public void execute(SweepPlan plan, Feed feed) {
+        Broadcast<SweepPlan> shared = spark.broadcast(plan);
+        LongAccumulator taskNanos = spark.sc().longAccumulator("fadebench task nanoseconds");
+        BatchTask task = new BatchTask(shared, version, failFirstAttempt, taskNanos);
+        Deque<JavaFutureAction<List<BatchResult>>> inFlight = new ArrayDeque<>();
+        int perTask = 1;
+        try {
+            while (true) {
+                // two rounds in flight: cores that finish a round's last tasks early start the next round
+                while (inFlight.size() < ROUNDS_IN_FLIGHT) {
+                    List<BatchId> round = takeRound(feed, perTask);
+                    if (round.isEmpty()) {
+                        break;
+                    }
+                    inFlight.add(spark.parallelize(round, Math.min(tasksPerRound, round.size())).mapPartitions(task)
+                            .collectAsync());
+                }
+                if (inFlight.isEmpty()) {
+                    return;
+                }
+                inFlight.remove().get().forEach(feed::done);
+                perTask = nextPerTask(perTask, taskNanos);
+            }
+        } catch (Exception e) {
+            inFlight.forEach(f -> f.cancel(true));
+            throw new Failure("Spark could not compute the batches (" + rootMessage(e) + "); what was merged is kept "
+                    + "in the checkpoint: run the same command with --resume to continue", e);
+        } finally {
+            shared.destroy();
+        }
+    }
+
+    /**
+     * The next round's batches: {@code perTask} per task, but at most as many as the first batch's
+     * point was given before (and at least one per task).
+     */
+    private List<BatchId> takeRound(Feed feed, int perTask) {
+        List<BatchId> round = new ArrayList<>();
+        BatchId first = feed.next();
+        if (first == null) {
+            return round;
+        }
+        round.add(first);
+        long most = Math.min((long) tasksPerRound * perTask, Math.max(tasksPerRound, first.batch()));
+        BatchId id;
+        while (round.size() < most && (id = feed.next()) != null) {
+            round.add(id);
+        }
+        return round;
+    }
+
+    /**
+     * Batches per task for a task of about {@link #TASK_SECONDS}, from the time the tasks so far
+     * took per batch (measured in the tasks): at most twice as many as before.
+     */
+    private static int nextPerTask(int perTask, LongAccumulator taskNanos) {
+        double secondsPerBatch = taskNanos.avg() * 1e-9;
+        long wanted = (long) (TASK_SECONDS / Math.max(secondsPerBatch, 1e-9));
+        return (int) Math.max(1, Math.min(2L * perTask, wanted));
+    }
+
+    /** Stops the Spark application. */
+    @Override
+    public void close() {
+        spark.stop();
+    }
+
+    /** The first line of the innermost cause's message (Spark's own messages run over many lines). */
+    static String rootMessage(Throwable e) {
+        Throwable t = e;
+        while (t.getCause() != null && t.getCause() != t) {
+            t = t.getCause();
+        }
+        String m = t.getMessage() == null ? t.getClass().getSimpleName() : t.getMessage();
+        return m.lines().findFirst().orElse("").trim();
+    }
+
+    /**
+     * One task: the batches of one partition, computed by one {@link BatchWorker} from the
+     * broadcast plan; a pure function of the plan and the batch ids.
+     */
+    static final class BatchTask implements FlatMapFunction<Iterator<BatchId>, BatchResult> {
+        private static final long serialVersionUID = 1L;
+
+        private final Broadcast<SweepPlan> plan;
+        private final String driverVersion;
+        private final BatchId failFirstAttempt;
+        private final LongAccumulator nanosPerBatch;
+
+        BatchTask(Broadcast<SweepPlan> plan, String driverVersion, BatchId failFirstAttempt,
+                  LongAccumulator nanosPerBatch) {
+            this.plan = plan;
+            this.driverVersion = driverVersion;
+            this.failFirstAttempt = failFirstAttempt;
+            this.nanosPerBatch = nanosPerBatch;
+        }
+
+        @Override
+        public Iterator<BatchResult> call(Iterator<BatchId> ids) {
+            if (!ToolVersion.version().equals(driverVersion)) {
+                throw new IllegalStateException(mismatch(ToolVersion.version(), driverVersion));
+            }
+            BatchWorker worker = new BatchWorker(plan.value());
+            List<BatchResult> results = new ArrayList<>();
+            while (ids.hasNext()) {
+                BatchId id = ids.next();
+                if (id.equals(failFirstAttempt) && TaskContext.get().attemptNumber() == 0) {
+                    throw new IllegalStateException("the first attempt of the task of batch " + id + " fails (a test)");
+                }
+                long start = System.nanoTime();
+                results.add(worker.compute(id));
+                nanosPerBatch.add(System.nanoTime() - start);
+            }
+            return results.iterator();
+        }
+    }
+}
