@@ -56,6 +56,15 @@ public interface ChannelModel extends Serializable {
         return Double.NaN;
     }
 
+    /**
+     * For importance sampling of deep fades: the Gamma shape m of the power of each independent
+     * entry, whose law {@link FadingModel#drawScaled} scales (1 for Rayleigh, independent or
+     * correlated; m for Nakagami-m), or NaN for a model that cannot draw scaled fades.
+     */
+    default double fadeShape() {
+        return Double.NaN;
+    }
+
     /** Whether this is i.i.d. Rayleigh block fading, the channel for which the outage bounds have closed forms. */
     default boolean iidRayleigh() {
         return false;

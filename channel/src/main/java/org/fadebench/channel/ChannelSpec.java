@@ -235,7 +235,7 @@ public final class ChannelSpec implements Serializable {
         }
         CsiEstimator csi = pilots > 0 ? CsiEstimator.leastSquares(nr, mt, pilots)
                 : csiError != null ? CsiEstimator.withError(nr, mt, csiError) : CsiEstimator.perfect(nr, mt);
-        return new LinkChannel(nr, mt, maxSlotsPerBlock, model.newBlockChannel(nr, mt), csi);
+        return new LinkChannel(nr, mt, maxSlotsPerBlock, model.newBlockChannel(nr, mt), csi, model);
     }
 
     /** True when the receiver decodes with a channel error of fixed variance ({@code --csi-error}). */

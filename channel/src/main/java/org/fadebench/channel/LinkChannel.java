@@ -26,11 +26,20 @@ public final class LinkChannel {
     private final BlockChannel fading;
     private final boolean varies;
     private final CsiEstimator csi;
+    /** The model, for scaled fades (importance sampling); its fading model is made on first use. */
+    private final ChannelModel model;
+    private FadingModel scaledFading;
+    /** The scale of the fades drawn, or NaN for the model's own draws. */
+    private double fadeScale = Double.NaN;
+    private double fadeShape;
+    private double blockLogWeight;
+    private double blockFadeEnergy;
     /** One matrix, or with Doppler one per slot (slot s at 2·s·Nr·Mt). */
     private final double[] h;
     private int slots;
 
-    LinkChannel(int nr, int mt, int maxSlots, BlockChannel fading, CsiEstimator csi) {
+    LinkChannel(int nr, int mt, int maxSlots, BlockChannel fading, CsiEstimator csi, ChannelModel model) {
+        this.model = model;
         this.nr = nr;
         this.mt = mt;
         this.maxSlots = maxSlots;
@@ -49,7 +58,67 @@ public final class LinkChannel {
             throw new IllegalArgumentException("slots must be 1 to " + maxSlots + ", got " + slots);
         }
         this.slots = slots;
-        fading.startBlock(draws, blockIndex, slots, h);
+        if (fadeScale == fadeScale) {
+            drawScaled(draws);
+        } else {
+            fading.startBlock(draws, blockIndex, slots, h);
+        }
+    }
+
+    /**
+     * Importance sampling of deep fades: from now on each block's channel is drawn with every
+     * independent entry's power scaled by {@code scale} (see {@link FadingModel#drawScaled}), and
+     * {@link #blockLogWeight()} gives the block's log likelihood ratio; NaN returns to the model's
+     * own draws.
+     *
+     * @throws IllegalStateException for a model that cannot draw scaled fades ({@link ChannelModel#fadeShape()} NaN)
+     */
+    public void fadeScale(double scale) {
+        if (scale != scale) {
+            fadeScale = Double.NaN;
+            return;
+        }
+        if (!(scale > 0 && scale < Double.POSITIVE_INFINITY)) {
+            throw new IllegalArgumentException("fade scale must be positive, got " + scale);
+        }
+        double shape = model.fadeShape();
+        if (shape != shape || varies) {
+            throw new IllegalStateException(model.describe() + " cannot draw scaled fades");
+        }
+        if (scaledFading == null) {
+            scaledFading = model.newModel(nr, mt);
+        }
+        fadeScale = scale;
+        fadeShape = shape;
+    }
+
+    /**
+     * The block's channel from the scaled law q (entries' powers Gamma(m, s/m) instead of
+     * Gamma(m, 1/m)) and its log likelihood ratio ln p(H)/q(H). The ratio of the independent
+     * entries' densities is the ratio of H's (a fixed linear correlation maps both alike): per
+     * entry of power g, p/q = s^m exp(−m (1 − 1/s) g) (the Gamma density, M. K. Simon and
+     * M.-S. Alouini, Digital Communication over Fading Channels, 2nd ed., 2005, Sec. 2.2.1.4), so
+     * with g = s·g₀ over the Nr·Mt entries, ln p/q = m (Nr·Mt ln s − (s − 1) Σ g₀).
+     */
+    private void drawScaled(Draws draws) {
+        double energy = scaledFading.drawScaled(draws, nr, mt, fadeScale, h);
+        blockLogWeight = fadeShape * (nr * mt * Math.log(fadeScale) - (fadeScale - 1.0) * energy);
+        blockFadeEnergy = fadeScale * energy;
+    }
+
+    /** Whether blocks are drawn from a scaled law (see {@link #fadeScale(double)}). */
+    public boolean scaled() {
+        return fadeScale == fadeScale;
+    }
+
+    /** ln p(H)/q(H) of the current block when {@linkplain #scaled() scaled}. */
+    public double blockLogWeight() {
+        return blockLogWeight;
+    }
+
+    /** Σ of the current block's independent entries' powers (as drawn, scaled) when {@linkplain #scaled() scaled}. */
+    public double blockFadeEnergy() {
+        return blockFadeEnergy;
     }
 
     /**

@@ -26,6 +26,11 @@ public record NakagamiChannel(double m) implements ChannelModel {
     }
 
     @Override
+    public double fadeShape() {
+        return m;
+    }
+
+    @Override
     public String describe() {
         return name() + " m=" + m;
     }

@@ -44,6 +44,12 @@ public final class NakagamiFading implements FadingModel {
         }
     }
 
+    @Override
+    public double drawScaled(Draws draws, int nr, int mt, double scale, double[] h) {
+        draw(draws, nr, mt, h);
+        return Scaling.scale(h, 2 * nr * mt, scale);
+    }
+
     /** One Gamma(m, 1) draw. */
     private double gamma(Draws draws) {
         UniformRandomProvider u = draws.uniform();

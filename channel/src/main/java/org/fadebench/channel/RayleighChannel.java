@@ -29,6 +29,11 @@ public record RayleighChannel(SpatialCorrelation correlation) implements Scatter
     }
 
     @Override
+    public double fadeShape() {
+        return 1.0;
+    }
+
+    @Override
     public boolean iidRayleigh() {
         return correlation.none();
     }

@@ -27,15 +27,29 @@ public final class RayleighFading implements FadingModel {
 
     @Override
     public void draw(Draws draws, int nr, int mt, double[] h) {
+        drawIndependent(draws, nr, mt, h);
+        if (correlation != null) {
+            correlation.correlate(h, 0);
+        }
+    }
+
+    @Override
+    public double drawScaled(Draws draws, int nr, int mt, double scale, double[] h) {
+        drawIndependent(draws, nr, mt, h);
+        double energy = Scaling.scale(h, 2 * nr * mt, scale);
+        if (correlation != null) {
+            correlation.correlate(h, 0);
+        }
+        return energy;
+    }
+
+    private void drawIndependent(Draws draws, int nr, int mt, double[] h) {
         if (correlation != null) {
             correlation.checkShape(nr, mt);
         }
         int n = 2 * nr * mt;
         for (int i = 0; i < n; i++) {
             h[i] = SQRT_HALF * draws.gaussian();
-        }
-        if (correlation != null) {
-            correlation.correlate(h, 0);
         }
     }
 

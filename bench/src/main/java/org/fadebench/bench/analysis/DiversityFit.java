@@ -59,8 +59,8 @@ public record DiversityFit(double order, double standardError, double low, doubl
     /** The frame error rates of a sweep; see {@link #ofCounts}. */
     public static Optional<DiversityFit> ofPoints(List<PointResult> points, int minErrors, int tailPoints) {
         return ofCounts(points.stream().mapToDouble(PointResult::snrDb).toArray(),
-                points.stream().mapToLong(p -> p.counts().frameErrors()).toArray(),
-                points.stream().mapToLong(p -> p.counts().frames()).toArray(), minErrors, tailPoints);
+                points.stream().mapToLong(PointResult::equivalentErrors).toArray(),
+                points.stream().mapToLong(PointResult::equivalentFrames).toArray(), minErrors, tailPoints);
     }
 
     /**

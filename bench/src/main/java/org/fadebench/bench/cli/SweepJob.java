@@ -99,7 +99,10 @@ final class SweepJob {
                 out.println(ResultsCsv.pilotLine(link));
             }
             out.println(String.format(Locale.ROOT, "stop: %s frame errors or %d frames per point%s; seed %d; %s",
-                    plan.rules().minErrors() == 0 ? "no minimum of" : Long.toString(plan.rules().minErrors()),
+                    plan.rules().fadeSampling() ? "fade-sampling to a FER half-width of "
+                            + Numbers.db(plan.rules().relPrecision()) + " x FER after at least "
+                            + Numbers.db(org.fadebench.bench.sweep.WeightedInterval.MIN_EFFECTIVE_ERRORS) + " effective"
+                            : plan.rules().minErrors() == 0 ? "no minimum of" : Long.toString(plan.rules().minErrors()),
                     plan.rules().maxFrames(),
                     plan.rules().maxSeconds() > 0 ? " or " + Numbers.db(plan.rules().maxSeconds()) + " s" : "",
                     plan.seed(), plan.engine().describe(plan.threads())));

@@ -32,6 +32,9 @@ final class CodedPath implements FramePath {
     private final byte[][] payload;
     /** Per lane: raw symbol errors. */
     private final int[] rawSymbolErrors;
+    /** Per lane, when fades are scaled: the frame's weight and fade energy. */
+    private final double[] laneWeight;
+    private final double[] laneFadeEnergy;
     private final byte[] payloadOut;
     private final byte[] codedBits;
     private final double[] llr;
@@ -52,6 +55,8 @@ final class CodedPath implements FramePath {
         this.codedLength = codec.codedBits();
         this.payload = new byte[lanes][frameBits];
         this.rawSymbolErrors = new int[lanes];
+        this.laneWeight = new double[lanes];
+        this.laneFadeEnergy = new double[lanes];
         this.payloadOut = new byte[frameBits];
         this.codedBits = new byte[symbols * bitsPerSymbol];
         this.llr = new double[symbols * bitsPerSymbol];
@@ -62,7 +67,7 @@ final class CodedPath implements FramePath {
     static long bufferBytes(LinkSettings settings) {
         int lanes = settings.lanes();
         long sentBits = (long) settings.symbolsPerFrame() * settings.modulation().bitsPerSymbol();
-        return (lanes + 1L) * settings.frameBits() + 9 * sentBits
+        return (lanes + 1L) * settings.frameBits() + 16L * lanes + 9 * sentBits
                 + FecCodec.bufferBytes(settings.coding().scheme(), settings.frameBits(), lanes);
     }
 
@@ -118,6 +123,10 @@ final class CodedPath implements FramePath {
         draws.fillBits(codedBits, codedLength, codedBits.length - codedLength);
         transmission.map(constellation, codedBits);
         transmission.transmit(draws, n0, frame);
+        if (transmission.weighted()) {
+            laneWeight[lane] = transmission.frameWeight();
+            laneFadeEnergy[lane] = transmission.frameFadeEnergy();
+        }
         transmission.demap(constellation, llrMethod, n0, llr);
         codec.receive(lane, llr, 0);
         int symbolErrors = 0;
@@ -141,5 +150,8 @@ final class CodedPath implements FramePath {
         }
         counters.addFrame(frameBits, bitErrors, symbols, rawSymbolErrors[lane], withCrc && !crcOk,
                 withCrc && crcOk && bitErrors > 0, codec.iterations(lane));
+        if (transmission.weighted()) {
+            counters.addWeight(laneWeight[lane], laneFadeEnergy[lane], bitErrors, rawSymbolErrors[lane]);
+        }
     }
 }

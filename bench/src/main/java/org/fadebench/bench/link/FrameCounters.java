@@ -16,6 +16,17 @@ public final class FrameCounters implements Serializable {
      */
     public static final String FEC_ITERATIONS = "fec_iterations_sum";
 
+    /**
+     * The name of the fade scale in {@link #byName()}; it and the weighted sums are present only for
+     * frames weighted by importance sampling, so that plain runs' files read as before.
+     */
+    public static final String FADE_SCALE = "fade_scale";
+
+    /** The names of the fade scale and the weighted sums in {@link #byName()}, in order. */
+    public static final java.util.List<String> WEIGHT_NAMES = java.util.List.of(FADE_SCALE, "weight_sum",
+            "weight_squares", "error_weight", "error_weight_squares", "bit_error_weight", "bit_error_weight_squares",
+            "symbol_error_weight");
+
     private long frames;
     private long frameErrors;
     private long bits;
@@ -26,6 +37,64 @@ public final class FrameCounters implements Serializable {
     private long crcFailures;
     private long undetectedErrors;
     private long fecIterations;
+    /**
+     * Importance sampling of deep fades (present when {@link #weighted()}): the scale of the fades
+     * drawn, Σ w and Σ w² over frames, the same over frames in error, Σ w·(bit errors) and its
+     * squares, Σ w·(symbol errors). Sums in frame order, merged in batch order: deterministic.
+     */
+    private boolean weighted;
+    private double fadeScale = Double.NaN;
+    private double weightSum;
+    private double weightSquares;
+    private double errorWeight;
+    private double errorWeightSquares;
+    private double bitErrorWeight;
+    private double bitErrorWeightSquares;
+    private double symbolErrorWeight;
+    /** Per-frame weights, error flags and fade energies of a pilot run, or null. */
+    private transient FrameLog log;
+
+    /** The frames one pilot run of importance sampling records: weight, error, fade energy. */
+    public static final class FrameLog {
+        private final double[] weight;
+        private final boolean[] error;
+        private final double[] energy;
+        private int size;
+
+        FrameLog(int capacity) {
+            weight = new double[capacity];
+            error = new boolean[capacity];
+            energy = new double[capacity];
+        }
+
+        public int size() {
+            return size;
+        }
+
+        public double weight(int i) {
+            return weight[i];
+        }
+
+        public boolean error(int i) {
+            return error[i];
+        }
+
+        public double energy(int i) {
+            return energy[i];
+        }
+    }
+
+    /** Counters that also log up to {@code capacity} weighted frames (see {@link #log()}). */
+    public static FrameCounters logging(int capacity) {
+        FrameCounters c = new FrameCounters();
+        c.log = new FrameLog(capacity);
+        return c;
+    }
+
+    /** The frames logged, or null. */
+    public FrameLog log() {
+        return log;
+    }
 
     /**
      * Records one coded frame.
@@ -55,7 +124,48 @@ public final class FrameCounters implements Serializable {
         }
     }
 
+    /**
+     * Weighs the frame just added (importance sampling): its likelihood ratio {@code weight}, its fade
+     * energy (for the cross-entropy update of the scale), its bit and symbol errors.
+     */
+    public void addWeight(double weight, double fadeEnergy, int frameBitErrors, int frameSymbolErrors) {
+        weighted = true;
+        weightSum += weight;
+        weightSquares += weight * weight;
+        if (frameBitErrors > 0) {
+            errorWeight += weight;
+            errorWeightSquares += weight * weight;
+            double wb = weight * frameBitErrors;
+            bitErrorWeight += wb;
+            bitErrorWeightSquares += wb * wb;
+        }
+        symbolErrorWeight += weight * frameSymbolErrors;
+        if (log != null && log.size < log.weight.length) {
+            log.weight[log.size] = weight;
+            log.error[log.size] = frameBitErrors > 0;
+            log.energy[log.size++] = fadeEnergy;
+        }
+    }
+
+    /** Notes the scale of the fades these frames were drawn with. */
+    public void fadeScale(double scale) {
+        fadeScale = scale;
+    }
+
     public void add(FrameCounters o) {
+        if (o.weighted) {
+            weighted = true;
+            if (fadeScale != fadeScale) {
+                fadeScale = o.fadeScale;
+            }
+            weightSum += o.weightSum;
+            weightSquares += o.weightSquares;
+            errorWeight += o.errorWeight;
+            errorWeightSquares += o.errorWeightSquares;
+            bitErrorWeight += o.bitErrorWeight;
+            bitErrorWeightSquares += o.bitErrorWeightSquares;
+            symbolErrorWeight += o.symbolErrorWeight;
+        }
         frames += o.frames;
         frameErrors += o.frameErrors;
         bits += o.bits;
@@ -103,6 +213,13 @@ public final class FrameCounters implements Serializable {
         if (fecIterations != 0) {
             m.put(FEC_ITERATIONS, fecIterations);
         }
+        if (weighted) {
+            double[] sums = {fadeScale, weightSum, weightSquares, errorWeight, errorWeightSquares, bitErrorWeight,
+                    bitErrorWeightSquares, symbolErrorWeight};
+            for (int i = 0; i < sums.length; i++) {
+                m.put(WEIGHT_NAMES.get(i), sums[i]);
+            }
+        }
         return m;
     }
 
@@ -115,6 +232,22 @@ public final class FrameCounters implements Serializable {
                 byName.get("undetected_errors").longValue());
         Number iterations = byName.get(FEC_ITERATIONS);
         c.fecIterations = iterations == null ? 0 : iterations.longValue();
+        Number scale = byName.get(FADE_SCALE);
+        if (scale != null) {
+            double[] sums = new double[WEIGHT_NAMES.size()];
+            for (int i = 0; i < sums.length; i++) {
+                sums[i] = byName.get(WEIGHT_NAMES.get(i)).doubleValue();
+            }
+            c.weighted = true;
+            c.fadeScale = sums[0];
+            c.weightSum = sums[1];
+            c.weightSquares = sums[2];
+            c.errorWeight = sums[3];
+            c.errorWeightSquares = sums[4];
+            c.bitErrorWeight = sums[5];
+            c.bitErrorWeightSquares = sums[6];
+            c.symbolErrorWeight = sums[7];
+        }
         return c;
     }
 
@@ -174,15 +307,58 @@ public final class FrameCounters implements Serializable {
         return fecIterations == 0 ? Double.NaN : (double) fecIterations / frames;
     }
 
+    /** The FER: errors over frames, or for weighted frames the mean of weight × error. */
     public double fer() {
-        return frames == 0 ? Double.NaN : (double) frameErrors / frames;
+        return frames == 0 ? Double.NaN : (weighted ? errorWeight : frameErrors) / frames;
     }
 
+    /** The BER: bit errors over bits, or for weighted frames Σ weight × bit errors over bits. */
     public double ber() {
-        return bits == 0 ? Double.NaN : (double) bitErrors / bits;
+        return bits == 0 ? Double.NaN : (weighted ? bitErrorWeight : bitErrors) / bits;
     }
 
+    /** The SER, weighted like {@link #ber()}. */
     public double ser() {
-        return symbols == 0 ? Double.NaN : (double) symbolErrors / symbols;
+        return symbols == 0 ? Double.NaN : (weighted ? symbolErrorWeight : symbolErrors) / symbols;
+    }
+
+    /** Whether the frames carry importance-sampling weights (then the rates are weighted means). */
+    public boolean weighted() {
+        return weighted;
+    }
+
+    /** The scale of the fades the weighted frames were drawn with (NaN for plain frames). */
+    public double fadeScale() {
+        return fadeScale;
+    }
+
+    /** Σ w over weighted frames. */
+    public double weightSum() {
+        return weightSum;
+    }
+
+    /** Σ w² over weighted frames. */
+    public double weightSquares() {
+        return weightSquares;
+    }
+
+    /** Σ w over weighted frames in error. */
+    public double errorWeight() {
+        return errorWeight;
+    }
+
+    /** Σ w² over weighted frames in error. */
+    public double errorWeightSquares() {
+        return errorWeightSquares;
+    }
+
+    /** Σ w·e over weighted frames, e the frame's bit errors. */
+    public double bitErrorWeight() {
+        return bitErrorWeight;
+    }
+
+    /** Σ (w·e)² over weighted frames. */
+    public double bitErrorWeightSquares() {
+        return bitErrorWeightSquares;
     }
 }

@@ -44,6 +44,7 @@ final class GeneralPath implements FramePath {
             constellation.countHardErrors(sent, 0, transmission.symbols, transmission.estimates, 0, symbols,
                     labelErrors);
             counters.addFrame(frameBits, labelErrors[0], symbols, labelErrors[1]);
+            transmission.weigh(counters, labelErrors[0], labelErrors[1]);
         }
     }
 }

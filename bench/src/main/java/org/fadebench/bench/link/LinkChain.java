@@ -89,6 +89,15 @@ public final class LinkChain implements FramePath {
         path.runFrames(draws, n0, first, count, counters);
     }
 
+    /**
+     * Importance sampling of deep fades: draws the following frames' fades with every independent
+     * entry's power scaled by {@code scale}, each frame weighted by its likelihood ratio in the
+     * counters (see {@link org.fadebench.channel.LinkChannel#fadeScale}); NaN returns to plain draws.
+     */
+    public void fadeScale(double scale) {
+        transmission.channel.fadeScale(scale);
+    }
+
     /** Whether this chain sends on planes. */
     boolean planar() {
         return transmission instanceof PlanarTransmission;

@@ -53,6 +53,7 @@ final class PlanarPath implements FramePath {
                         blocks, labelErrors);
             }
             counters.addFrame(frameBits, labelErrors[0], symbols, labelErrors[1]);
+            transmission.weigh(counters, labelErrors[0], labelErrors[1]);
         }
     }
 }

@@ -23,6 +23,9 @@ abstract class Transmission {
     private final int fadesPerFrame;
     /** Where the true channel of each fading block is copied, or null (the default). */
     private ChannelRecorder recorder;
+    /** The frame's log likelihood ratio and fade energy, summed over its fading blocks, when fades are scaled. */
+    private double frameLogWeight;
+    private double frameFadeEnergy;
 
     Transmission(LinkSettings settings, LinkChannel channel) {
         this.channel = channel;
@@ -48,14 +51,40 @@ abstract class Transmission {
     /** Sends the symbols of frame {@code frame} at noise level {@code n0}: symbols → estimates. */
     final void transmit(Draws draws, double n0, long frame) {
         prepare(n0);
+        frameLogWeight = 0.0;
+        frameFadeEnergy = 0.0;
         long fade = frame * fadesPerFrame;
         for (int first = 0; first < blocksPerFrame; first += blocksPerFade, fade++) {
             int blocks = Math.min(blocksPerFade, blocksPerFrame - first);
             channel.startBlock(draws, fade, blocks * slotsPerBlock);
+            frameLogWeight += channel.blockLogWeight();
+            frameFadeEnergy += channel.blockFadeEnergy();
             sendBlocks(draws, n0, first, blocks);
             if (recorder != null) {
                 recorder.record(channel, fade);
             }
+        }
+    }
+
+    /** Whether fades are drawn scaled, so that each frame carries a weight (see {@link LinkChannel#fadeScale}). */
+    final boolean weighted() {
+        return channel.scaled();
+    }
+
+    /** The last frame's weight p/q: the product of its fading blocks' likelihood ratios. */
+    final double frameWeight() {
+        return Math.exp(frameLogWeight);
+    }
+
+    /** The last frame's fade energy: its blocks' {@link LinkChannel#blockFadeEnergy()} summed. */
+    final double frameFadeEnergy() {
+        return frameFadeEnergy;
+    }
+
+    /** Adds the last frame's weight to {@code counters} when fades are scaled (after its {@code addFrame}). */
+    final void weigh(FrameCounters counters, int bitErrors, int symbolErrors) {
+        if (channel.scaled()) {
+            counters.addWeight(frameWeight(), frameFadeEnergy, bitErrors, symbolErrors);
         }
     }
 

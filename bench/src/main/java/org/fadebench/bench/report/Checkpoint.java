@@ -104,6 +104,11 @@ public final class Checkpoint {
             if (p.has(FrameCounters.FEC_ITERATIONS)) { // written only for a decoder that iterates
                 counts.put(FrameCounters.FEC_ITERATIONS, whole(p, FrameCounters.FEC_ITERATIONS, where));
             }
+            if (p.has(FrameCounters.FADE_SCALE)) { // written only for frames weighted by importance sampling
+                for (String name : FrameCounters.WEIGHT_NAMES) {
+                    counts.put(name, real(p, name, where));
+                }
+            }
             FrameCounters c = FrameCounters.of(counts);
             if (!p.path("done").isBoolean()) {
                 throw new IllegalArgumentException(where + "damaged checkpoint (done)");

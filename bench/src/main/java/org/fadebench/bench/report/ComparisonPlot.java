@@ -87,7 +87,7 @@ public final class ComparisonPlot {
 
         /** The point of a sweep. */
         public static Point of(PointResult r) {
-            return new Point(r.snrDb(), r.counts().frames(), r.counts().frameErrors(), r.ferLow(), r.ferHigh());
+            return new Point(r.snrDb(), r.equivalentFrames(), r.equivalentErrors(), r.ferLow(), r.ferHigh());
         }
 
         /** The FER, NaN without frames. */

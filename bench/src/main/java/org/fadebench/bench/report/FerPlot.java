@@ -1,6 +1,7 @@
 package org.fadebench.bench.report;
 
 import java.awt.BasicStroke;
+import java.awt.Shape;
 import java.awt.Color;
 import java.awt.Font;
 import java.awt.Stroke;
@@ -242,13 +243,17 @@ public final class FerPlot {
         YIntervalSeries rate = new YIntervalSeries(isFer ? "FER, simulated" : "BER, simulated");
         XYSeries limit = new XYSeries(isFer ? "FER upper limit (no frame error seen)"
                 : "BER upper limit (no bit error seen)", false);
+        String name = isFer ? "FER" : "BER";
+        YIntervalSeries weighted = new YIntervalSeries(name + ", fade sampling");
+        YIntervalSeries untrusted = new YIntervalSeries(name + ", fade sampling: too few effective errors");
         for (PointResult p : points) {
             double at = x.applyAsDouble(p.snrDb());
             if (p.counts().frameErrors() > 0) {
+                YIntervalSeries series = !p.counts().weighted() ? rate : p.trusted() ? weighted : untrusted;
                 if (isFer) {
-                    rate.add(at, p.counts().fer(), Math.max(p.ferLow(), floor), p.ferHigh());
+                    series.add(at, p.counts().fer(), Math.max(p.ferLow(), floor), p.ferHigh());
                 } else {
-                    rate.add(at, p.counts().ber(), Math.max(p.berLow(), floor), p.berHigh());
+                    series.add(at, p.counts().ber(), Math.max(p.berLow(), floor), p.berHigh());
                 }
             } else if (p.counts().frames() > 0) {
                 limit.add(at, isFer ? p.ferHigh() : p.berHigh());
@@ -259,6 +264,14 @@ public final class FerPlot {
         XYErrorRenderer renderer = PlotParts.intervalRenderer();
         addSeries(simulated, renderer, rate, colour, new BasicStroke(2.4f),
                 isFer ? PlotParts.circle(9) : PlotParts.square(8));
+        // points estimated by importance sampling: a diamond; a hollow one where the interval is not trusted
+        Shape diamond = PlotParts.polygon(11, 0, -0.5, 0.5, 0, 0, 0.5, -0.5, 0);
+        addSeries(simulated, renderer, weighted, colour, new BasicStroke(2.4f), diamond);
+        int before = simulated.getSeriesCount();
+        addSeries(simulated, renderer, untrusted, colour, new BasicStroke(2.4f), diamond);
+        if (simulated.getSeriesCount() > before) {
+            renderer.setSeriesShapesFilled(before, false);
+        }
         plot.setDataset(0, simulated);
         plot.setRenderer(0, renderer);
 

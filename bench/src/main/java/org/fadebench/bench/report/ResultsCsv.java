@@ -14,6 +14,7 @@ import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
+import org.fadebench.bench.sweep.WeightedInterval;
 
 /**
  * Writes {@code results.csv}: comment lines starting with {@code #} (link, seed, SNR convention,
@@ -31,6 +32,15 @@ public final class ResultsCsv {
 
     /** The column an AWGN link adds at the end (see {@link NormalApproximation}); other links have none. */
     public static final String NORMAL_APPROX_COLUMN = "fer_normal_approx";
+
+    /**
+     * The columns a run with {@code --estimator fade-sampling} adds at the end; plain runs have none,
+     * so that their files stay as they were.
+     */
+    public static final String FADE_SAMPLING_COLUMNS = "estimator,effective_frames,fer_rel_halfwidth,fade_scale,fer_note";
+
+    /** The note of a weighted point whose interval is not to be trusted. */
+    public static final String UNTRUSTED = "too few effective errors";
 
     /** The SNR convention, stated in every output. */
     public static final String SNR_CONVENTION = "snr_db = total transmitted energy per channel use / N0, "
@@ -101,10 +111,20 @@ public final class ResultsCsv {
                     .append(" coded bits per frame; symbols and ser count raw decisions on the coded bits; ")
                     .append("crc_failures: frames whose CRC did not check; undetected_errors: wrong frames whose CRC checked\n");
         }
+        boolean weighted = results.stream().anyMatch(r -> r.counts().weighted());
+        if (weighted) {
+            w.append("# estimator fade-sampling: fades drawn with each entry's power scaled by fade_scale, each frame ")
+                    .append("weighted by its likelihood ratio; fer, ber, ser are weighted means, frame_errors and the other ")
+                    .append("counts are counts of the drawn frames; fer_ci_* and ber_ci_*: ").append(level)
+                    .append(" normal intervals from the weighted sample variance; effective_frames: plain frames giving ")
+                    .append("the same variance; fer_note: '").append(UNTRUSTED).append("' below ")
+                    .append(Numbers.db(WeightedInterval.MIN_EFFECTIVE_ERRORS)).append(" effective error frames\n");
+        }
         if (interrupted) {
             w.append("# interrupted: partial results; run the same command with --resume to finish\n");
         }
-        w.append(HEADER).append(awgn ? "," + NORMAL_APPROX_COLUMN : "").append('\n');
+        w.append(HEADER).append(awgn ? "," + NORMAL_APPROX_COLUMN : "").append(weighted ? "," + FADE_SAMPLING_COLUMNS : "")
+                .append('\n');
         for (int i = 0; i < results.size(); i++) {
             PointResult r = results.get(i);
             FrameCounters c = r.counts();
@@ -136,9 +156,24 @@ public final class ResultsCsv {
             if (awgn) {
                 w.append(',').append(normal.map(a -> Numbers.rate(a.fer(r.snrDb()))).orElse(""));
             }
+            if (weighted) {
+                w.append(',').append(String.join(",", fadeSamplingCells(r)));
+            }
             w.append('\n');
         }
         return w.toString();
+    }
+
+    /** The {@link #FADE_SAMPLING_COLUMNS} of a point, empty where it has no value. */
+    static String[] fadeSamplingCells(PointResult r) {
+        FrameCounters c = r.counts();
+        if (!c.weighted()) {
+            return new String[] {"plain", "", "", "", ""};
+        }
+        double effective = WeightedInterval.effectiveFrames(c);
+        double half = r.ferRelativeHalfWidth();
+        return new String[] {"fade-sampling", Double.isNaN(effective) ? "" : Long.toString(Math.round(effective)),
+                Double.isNaN(half) ? "" : Numbers.rate(half), Numbers.rate(c.fadeScale()), r.trusted() ? "" : UNTRUSTED};
     }
 
     /** A bound's value, empty where its count cannot resolve it. */

@@ -11,6 +11,7 @@ import org.fadebench.bench.analysis.RunSummary;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.bench.sweep.PointResult;
+import org.fadebench.bench.sweep.WeightedInterval;
 
 /**
  * Writes {@code results.json}: the settings, seed and versions, every point with its intervals and
@@ -77,6 +78,15 @@ public final class ResultsJson {
             p.put("ber_ci_high", r.berHigh());
             p.put("ser", finite(c.ser()));
             p.put("fec_iterations_mean", finite(c.fecIterationsMean()));
+            if (c.weighted()) {
+                String[] cells = ResultsCsv.fadeSamplingCells(r);
+                String[] names = ResultsCsv.FADE_SAMPLING_COLUMNS.split(",");
+                p.put(names[0], cells[0]);
+                p.put(names[1], finite(WeightedInterval.effectiveFrames(c)));
+                p.put(names[2], finite(r.ferRelativeHalfWidth()));
+                p.put("effective_errors", WeightedInterval.effectiveErrors(c));
+                p.put("trusted", r.trusted());
+            }
             p.put("seconds", r.seconds());
         }
         root.set("summary", JSON.valueToTree(run.summary().toJson()));

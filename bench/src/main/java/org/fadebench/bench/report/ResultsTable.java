@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.util.Locale;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.sweep.PointResult;
+import org.fadebench.bench.sweep.WeightedInterval;
 
 /** The terminal table, one row printed as each point finishes. */
 public final class ResultsTable {
@@ -26,7 +27,10 @@ public final class ResultsTable {
                 Numbers.db(r.snrDb()), Numbers.db(r.ebN0Db()), c.frames(), c.frameErrors(),
                 Numbers.shortRate(c.fer()),
                 "[" + Numbers.shortRate(r.ferLow()) + ", " + Numbers.shortRate(r.ferHigh()) + "]",
-                Numbers.shortRate(c.ber()), Numbers.shortRate(c.ser())));
+                Numbers.shortRate(c.ber()), Numbers.shortRate(c.ser()))
+                + (c.weighted() ? String.format(Locale.ROOT, "  fade-sampling: scale %s, %s effective frames, half-width %s%s",
+                        Numbers.shortRate(c.fadeScale()), Numbers.shortRate(WeightedInterval.effectiveFrames(c)),
+                        Numbers.shortRate(r.ferRelativeHalfWidth()), r.trusted() ? "" : ", " + ResultsCsv.UNTRUSTED) : ""));
         out.flush();
     }
 }

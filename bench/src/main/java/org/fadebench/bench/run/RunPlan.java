@@ -33,6 +33,7 @@ import org.fadebench.bench.settings.SettingValues;
 import org.fadebench.bench.settings.SettingsText;
 import org.fadebench.bench.sweep.PointResult;
 import org.fadebench.bench.sweep.SnrGrid;
+import org.fadebench.bench.sweep.Estimator;
 import org.fadebench.bench.sweep.StopRules;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.ChannelTrace;
@@ -101,8 +102,13 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
                         + traceOutBlocks);
             }
         }
+        Estimator estimator = parse(ESTIMATOR, () -> Estimator.of(v.text(ESTIMATOR)));
         StopRules rules = parse(null, () -> new StopRules(v.whole(MIN_ERRORS), v.whole(MAX_FRAMES),
-                v.number(MAX_SECONDS), v.number(FER_FLOOR)));
+                v.number(MAX_SECONDS), v.number(FER_FLOOR), estimator, v.number(REL_PRECISION)));
+        if (rules.fadeSampling() && Double.isNaN(link.channel().model().fadeShape())) {
+            throw new InvalidSettingException(ESTIMATOR, "fade-sampling needs rayleigh (independent or correlated) or "
+                    + "nakagami block fading, without --trace or --doppler; got " + link.channel().describe());
+        }
         int threads = v.isSet(THREADS) ? v.integer(THREADS) : Runtime.getRuntime().availableProcessors();
         if (threads <= 0 || threads > 1024) {
             throw new InvalidSettingException(THREADS, "must be between 1 and 1024, got " + threads);
@@ -327,7 +333,8 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
                 SpaceTimeCodeFile.format(link.code()), link.equaliser().cliName(), link.modulation().cliName(),
                 link.fading(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),
                 Long.toString(rules.minErrors()), Long.toString(rules.maxFrames()), Double.toString(rules.maxSeconds()),
-                Double.toString(rules.ferFloor()), Long.toString(seed), Integer.toString(batchFrames));
+                Double.toString(rules.ferFloor()), Long.toString(seed), Integer.toString(batchFrames))
+                + (rules.fadeSampling() ? "|" + rules.estimator().cliName() + "|" + rules.relPrecision() : "");
     }
 
     /**

@@ -99,6 +99,12 @@ public final class RunSettings {
             "Most seconds per point, 0 for no limit; results then depend on the machine.");
     public static final Setting FER_FLOOR = new Setting("sweep", "fer_floor", "--fer-floor", NUMBER, "FER", "1e-6",
             "Stop the sweep after the first point with FER below this.");
+    public static final Setting ESTIMATOR = new Setting("sweep", "estimator", "--estimator", TEXT, "NAME", "plain",
+            "FER estimator: plain (Monte Carlo), fade-sampling (importance sampling of deep fades: Rayleigh, "
+                    + "correlated or not, and Nakagami block fading).");
+    public static final Setting REL_PRECISION = new Setting("sweep", "rel_precision", "--rel-precision", NUMBER, "X",
+            "0.2", "With fade-sampling: a point stops when its FER interval's half-width is below X times the FER "
+                    + "(0 < X < 1), or at --max-frames.");
     public static final Setting CONFIDENCE = new Setting("sweep", "confidence", "--confidence", NUMBER, "LEVEL",
             "0.95", "Confidence level of the FER and BER intervals.");
     public static final Setting SEED = new Setting("sweep", "seed", "--seed", WHOLE, "N", "1", "Master seed.");
@@ -146,8 +152,8 @@ public final class RunSettings {
             TX_CORR_MATRIX, RX_CORR_MATRIX, DOPPLER, CSI_ERROR, PILOTS, TRACE, FEC, FEC_FILE, FEC_DECODER,
             FEC_ITERATIONS, FEC_CORRECTION, FEC_FULL_ITERATIONS, CRC, INTERLEAVER,
             INTERLEAVER_ROWS, LLR, FRAME_BITS, COHERENCE,
-            SNR_DB, MIN_ERRORS, MAX_FRAMES, MAX_SECONDS, FER_FLOOR, CONFIDENCE, SEED, THREADS, ENGINE, SPARK_MASTER,
-            SPARK_TASKS,
+            SNR_DB, MIN_ERRORS, MAX_FRAMES, MAX_SECONDS, FER_FLOOR, ESTIMATOR, REL_PRECISION, CONFIDENCE, SEED, THREADS,
+            ENGINE, SPARK_MASTER, SPARK_TASKS,
             TARGET_FER, RATE, MI, OUTAGE_DRAWS,
             FOLDER, ARCHIVE, QUIET, OVERWRITE, TRACE_OUT, TRACE_OUT_BLOCKS, PLOT_X, PLOT_FLOOR);
 

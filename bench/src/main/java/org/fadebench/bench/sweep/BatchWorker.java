@@ -1,5 +1,6 @@
 package org.fadebench.bench.sweep;
 
+import java.util.Arrays;
 import org.fadebench.bench.link.ChannelRecorder;
 import org.fadebench.bench.link.FrameCounters;
 import org.fadebench.bench.link.LinkChain;
@@ -8,7 +9,9 @@ import org.fadebench.channel.Draws;
 /**
  * Computes batches of one plan on the calling thread: batch b of point p is frames
  * {@code plan.firstFrame(b) ..} simulated from the stream {@code Draws.of(seed, p, b)}. Owns a
- * {@link LinkChain} and its buffers, so each thread needs its own worker.
+ * {@link LinkChain} and its buffers, so each thread needs its own worker. With importance sampling
+ * ({@link Estimator#FADE_SAMPLING}) a point's fades are drawn with the scale {@link FadeScaleSearch}
+ * finds for it, searched once per worker and point (the same on every worker).
  */
 public final class BatchWorker {
 
@@ -16,10 +19,14 @@ public final class BatchWorker {
 
     private final SweepPlan plan;
     private final LinkChain chain;
+    /** With importance sampling: each point's fade scale, NaN until this worker first needs it. */
+    private final double[] fadeScales;
 
     public BatchWorker(SweepPlan plan) {
         this.plan = plan;
         this.chain = new LinkChain(plan.link());
+        this.fadeScales = new double[plan.points()];
+        Arrays.fill(fadeScales, Double.NaN);
     }
 
     public BatchResult compute(BatchId id) {
@@ -29,6 +36,14 @@ public final class BatchWorker {
                 plan.link().transmitAntennas(), first * plan.link().fadingBlocksPerFrame(), recorded);
         chain.recordChannels(recorder);
         FrameCounters counts = new FrameCounters();
+        if (plan.rules().fadeSampling()) {
+            int p = id.point();
+            if (Double.isNaN(fadeScales[p])) {
+                fadeScales[p] = FadeScaleSearch.scale(plan, chain, p);
+            }
+            chain.fadeScale(fadeScales[p]);
+            counts.fadeScale(fadeScales[p]);
+        }
         chain.runFrames(Draws.of(plan.seed(), id.point(), id.batch()), plan.n0(id.point()), first,
                 plan.framesIn(id.batch()), counts);
         return new BatchResult(id, counts, recorder == null ? NONE : recorder.matrices());

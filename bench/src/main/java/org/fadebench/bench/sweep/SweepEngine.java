@@ -92,7 +92,7 @@ public final class SweepEngine {
             } else if (c.bitErrorsSquared() != Math.rint(c.bitErrorsSquared()) || c.bitErrorsSquared() < c.bitErrors()
                     || c.bitErrorsSquared() > (double) c.bitErrors() * link.frameBits() * (1 + 1e-12)) {
                 problem = "a sum of squared bit errors that does not fit the bit errors";
-            } else if (s.done() != rules.pointDone(c.frames(), c.frameErrors())
+            } else if (s.done() != rules.pointDone(c, confidence)
                     && !(s.done() && rules.maxSeconds() > 0)) {
                 problem = s.done() ? "marked done before its stop rule holds" : "not marked done though its stop rule holds";
             }

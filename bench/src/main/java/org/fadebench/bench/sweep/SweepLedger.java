@@ -127,7 +127,7 @@ public final class SweepLedger {
             r.merged++;
             merges++;
             boolean outOfTime = plan.rules().maxSeconds() > 0 && nanos - r.startNanos >= plan.rules().maxSeconds() * 1e9;
-            if (plan.rules().pointDone(r.total.frames(), r.total.frameErrors()) || outOfTime) {
+            if (plan.rules().pointDone(r.total, confidence) || outOfTime) {
                 r.done = true;
                 r.endNanos = nanos;
                 r.pending.clear();
@@ -223,7 +223,7 @@ public final class SweepLedger {
             PointResult res = result(reported, true, nanos);
             reportedResults.add(res);
             toReport.add(res);
-            String reason = plan.rules().sweepStopReason(res.counts().frames(), res.counts().frameErrors());
+            String reason = plan.rules().sweepStopReason(res.counts());
             if (reason != null && reported < points.length - 1) {
                 cutAfter = reported;
                 stopReason = "stopped after " + res.snrDb() + " dB: " + reason + "; higher SNRs skipped";
@@ -235,8 +235,10 @@ public final class SweepLedger {
     private PointResult result(int p, boolean complete, long nanos) {
         Point r = points[p];
         FrameCounters c = r.total.copy();
-        double[] fer = BinomialInterval.clopperPearson(c.frameErrors(), c.frames(), confidence);
-        double[] ber = BinomialInterval.clusteredBer(c.frames(), plan.link().frameBits(), c.bitErrors(),
+        double[] fer = c.weighted() ? WeightedInterval.fer(c, confidence)
+                : BinomialInterval.clopperPearson(c.frameErrors(), c.frames(), confidence);
+        double[] ber = c.weighted() ? WeightedInterval.ber(c, plan.link().frameBits(), confidence)
+                : BinomialInterval.clusteredBer(c.frames(), plan.link().frameBits(), c.bitErrors(),
                 c.bitErrorsSquared(), confidence);
         double seconds = r.started ? ((r.done ? r.endNanos : nanos) - r.startNanos) * 1e-9 : 0;
         double snrDb = plan.snrDb(p);

@@ -45,6 +45,27 @@ class CheckpointTest {
     }
 
     /**
+     * A point estimated by importance sampling keeps its fade scale and weighted sums (written only
+     * there) and reads them back exactly, so that a resumed run merges on from the same sums.
+     */
+    @Test
+    void weightedSumsReadBack() throws Exception {
+        FrameCounters weighted = new FrameCounters();
+        weighted.fadeScale(0.0123);
+        weighted.addFrame(128, 3, 64, 2);
+        weighted.addWeight(1.7e-5, 0.04, 3, 2);
+        weighted.addFrame(128, 0, 64, 0);
+        weighted.addWeight(0.31, 0.9, 0, 0);
+        List<PointState> states = List.of(new PointState(1, weighted, true), STATES.get(1));
+        Checkpoint.write(dir, "fp", states);
+        List<PointState> back = Checkpoint.read(dir, "fp", 2);
+        assertEquals(weighted.byName(), back.get(0).counts().byName());
+        assertTrue(back.get(0).counts().weighted());
+        assertEquals(1.7e-5 / 2, back.get(0).counts().fer(), 0.0);
+        assertEquals(STATES.get(1).counts().byName(), back.get(1).counts().byName());
+    }
+
+    /**
      * A point of an iterating decoder also keeps its iterations' sum, written only there, so that
      * the pinned file above (no decoder that iterates) and older checkpoints read as before.
      */
