@@ -1,5 +1,7 @@
 package org.fadebench.channel;
 
+import java.util.Arrays;
+
 /**
  * The flat MIMO channel over a run of slots with one channel matrix: for each slot τ and receive
  * antenna r, {@code y[τ][r] = Σ_t H[r][t] · x[τ][t] + n}, with n ~ CN(0, n0). In matrix form
@@ -81,6 +83,50 @@ public final class MimoChannel {
                 double[] yi = y[2 * (tau * nr + r) + 1];
                 for (int i = from; i < end; i++) {
                     yi[i] = Math.fma(h1r, x1i[i], Math.fma(h1i, x1r[i], Math.fma(h2r, x2i[i], Math.fma(h2i, x2r[i], yi[i]))));
+                }
+            }
+        }
+    }
+
+    /**
+     * {@link #apply} on planar arrays as {@link #applyTwoTransmittersPlanar} lays them out, for any
+     * number of transmit antennas but two (which that method serves): the same noise draws and, per
+     * element, the sums of the interleaved {@code addGeneral} (with one antenna its sum 0 + p is the
+     * single-antenna product p). The sum over antennas runs in {@code sum}, a work plane of at least
+     * {@code rows} entries.
+     */
+    public static void applyPlanar(double[] h, int nr, int mt, double[][] x, int from, int rows, double n0,
+                                   Draws draws, double[][] y, double[] sum) {
+        int slots = x.length / (2 * mt);
+        if (mt == 2 || x.length != 2 * mt * slots || y.length != 2 * slots * nr || sum.length < rows) {
+            throw new IllegalArgumentException("planes: x needs 2·T·Mt, y 2·T·Nr (Mt ≠ 2), got " + x.length
+                    + " and " + y.length);
+        }
+        draws.fillGaussian(y, from, rows, Math.sqrt(0.5 * n0));
+        int end = from + rows;
+        for (int tau = 0; tau < slots; tau++) {
+            for (int r = 0; r < nr; r++) {
+                for (int part = 0; part < 2; part++) {
+                    Arrays.fill(sum, 0, rows, 0.0);
+                    for (int t = 0; t < mt; t++) {
+                        double hr = h[2 * (r * mt + t)];
+                        double hi = h[2 * (r * mt + t) + 1];
+                        double[] xr = x[2 * (tau * mt + t)];
+                        double[] xi = x[2 * (tau * mt + t) + 1];
+                        if (part == 0) {
+                            for (int i = from; i < end; i++) {
+                                sum[i - from] += hr * xr[i] - hi * xi[i];
+                            }
+                        } else {
+                            for (int i = from; i < end; i++) {
+                                sum[i - from] += hr * xi[i] + hi * xr[i];
+                            }
+                        }
+                    }
+                    double[] yp = y[2 * (tau * nr + r) + part];
+                    for (int i = from; i < end; i++) {
+                        yp[i] += sum[i - from];
+                    }
                 }
             }
         }
