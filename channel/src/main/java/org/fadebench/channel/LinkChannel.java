@@ -148,8 +148,8 @@ public final class LinkChannel {
         if (mt == 2) {
             MimoChannel.applyTwoTransmittersPlanar(h, nr, x, from, rows, n0, draws, y);
         } else {
-            if (planarSum == null || planarSum.length < rows) {
-                planarSum = new double[rows];
+            if (planarSum == null || planarSum.length < from + rows) {
+                planarSum = new double[from + rows];
             }
             MimoChannel.applyPlanar(h, nr, mt, x, from, rows, n0, draws, y, planarSum);
         }

@@ -128,6 +128,10 @@ public final class DesignKernel implements PlanarKernel {
         return gain[symbol];
     }
 
+    /**
+     * z = Fᵀ y over the rows of each column in order, four rows a pass ((z + p1) + p2 … as the
+     * general combiner adds them, from 0), then the division by the diagonal of FᵀF.
+     */
     @Override
     public void combine(double[][] received, int from, int blocks, double[][] estimates) {
         int end = from + blocks;
@@ -135,17 +139,23 @@ public final class DesignKernel implements PlanarKernel {
             double[] z = estimates[c];
             int[] r = rows[c];
             double[] w = weights[c];
-            if (r.length == 0) {
-                Arrays.fill(z, from, end, 0.0);
-                continue;
+            Arrays.fill(z, from, end, 0.0);
+            int j = 0;
+            for (; j + 4 <= r.length; j += 4) {
+                double[] y0 = received[r[j]];
+                double[] y1 = received[r[j + 1]];
+                double[] y2 = received[r[j + 2]];
+                double[] y3 = received[r[j + 3]];
+                double w0 = w[j];
+                double w1 = w[j + 1];
+                double w2 = w[j + 2];
+                double w3 = w[j + 3];
+                for (int i = from; i < end; i++) {
+                    z[i] = z[i] + w0 * y0[i] + w1 * y1[i] + w2 * y2[i] + w3 * y3[i];
+                }
             }
-            double[] y = received[r[0]];
-            double w0 = w[0];
-            for (int i = from; i < end; i++) {
-                z[i] = w0 * y[i];
-            }
-            for (int j = 1; j < r.length; j++) {
-                y = received[r[j]];
+            for (; j < r.length; j++) {
+                double[] y = received[r[j]];
                 double wj = w[j];
                 for (int i = from; i < end; i++) {
                     z[i] += wj * y[i];
