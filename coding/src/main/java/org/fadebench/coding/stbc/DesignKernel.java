@@ -28,8 +28,6 @@ public final class DesignKernel implements PlanarKernel {
     private final EffectiveChannel channel;
     /** Per symbol part c (column of F): the rows of F that may be non-zero, ascending. */
     private final int[][] rows;
-    /** Per symbol part c: how many of its rows are F's (the rest pad to whole passes, at weight 0). */
-    private final int[] terms;
     /** Per symbol part c: F's entries in those rows under the current channel. */
     private final double[][] weights;
     private final double[] invDiag;
@@ -43,7 +41,6 @@ public final class DesignKernel implements PlanarKernel {
         int t = code.slotsPerBlock();
         int mt = code.transmitAntennas();
         this.rows = new int[2 * k][];
-        this.terms = new int[2 * k];
         this.weights = new double[2 * k][];
         for (int c = 0; c < 2 * k; c++) {
             double[] d = c % 2 == 0 ? code.realDispersion(c / 2) : code.imagDispersion(c / 2);
@@ -58,10 +55,8 @@ public final class DesignKernel implements PlanarKernel {
                     used[n++] = 2 * slot * nr + j;
                 }
             }
-            // padded to whole passes of four rows with row 0 at weight 0 (an exact zero term)
-            rows[c] = Arrays.copyOf(used, (n + 3) / 4 * 4);
-            weights[c] = new double[rows[c].length];
-            terms[c] = n;
+            rows[c] = Arrays.copyOf(used, n);
+            weights[c] = new double[n];
         }
         this.invDiag = new double[2 * k];
         this.gain = new double[k];
@@ -122,7 +117,7 @@ public final class DesignKernel implements PlanarKernel {
         channel.matchedFilterDiagonal(invDiag, gain);
         DMatrixRMaj f = channel.f;
         for (int c = 0; c < rows.length; c++) {
-            for (int j = 0; j < terms[c]; j++) {
+            for (int j = 0; j < rows[c].length; j++) {
                 weights[c][j] = f.unsafe_get(rows[c][j], c);
             }
         }
@@ -134,9 +129,8 @@ public final class DesignKernel implements PlanarKernel {
     }
 
     /**
-     * z = Fᵀ y over the rows of each column in order, four rows a pass ((0 + p1) + p2 … as the
-     * general combiner adds them), times the inverse diagonal of FᵀF in the last pass (earlier
-     * passes multiply by 1, which is exact).
+     * z = Fᵀ y over the rows of each column in order, four rows a pass ((z + p1) + p2 … as the
+     * general combiner adds them, from 0), then the division by the diagonal of FᵀF.
      */
     @Override
     public void combine(double[][] received, int from, int blocks, double[][] estimates) {
@@ -145,28 +139,31 @@ public final class DesignKernel implements PlanarKernel {
             double[] z = estimates[c];
             int[] r = rows[c];
             double[] w = weights[c];
-            if (r.length == 0) {
-                Arrays.fill(z, from, end, 0.0);
-                continue;
+            Arrays.fill(z, from, end, 0.0);
+            int j = 0;
+            for (; j + 4 <= r.length; j += 4) {
+                double[] y0 = received[r[j]];
+                double[] y1 = received[r[j + 1]];
+                double[] y2 = received[r[j + 2]];
+                double[] y3 = received[r[j + 3]];
+                double w0 = w[j];
+                double w1 = w[j + 1];
+                double w2 = w[j + 2];
+                double w3 = w[j + 3];
+                for (int i = from; i < end; i++) {
+                    z[i] = z[i] + w0 * y0[i] + w1 * y1[i] + w2 * y2[i] + w3 * y3[i];
+                }
             }
-            for (int j = 0; j < r.length; j += 4) {
-                double scale = j + 4 == r.length ? invDiag[c] : 1.0;
-                addFour(z, j == 0, scale, received[r[j]], w[j], received[r[j + 1]], w[j + 1], received[r[j + 2]],
-                        w[j + 2], received[r[j + 3]], w[j + 3], from, end);
+            for (; j < r.length; j++) {
+                double[] y = received[r[j]];
+                double wj = w[j];
+                for (int i = from; i < end; i++) {
+                    z[i] += wj * y[i];
+                }
             }
-        }
-    }
-
-    /** z = ((start + w0·y0 + w1·y1 + w2·y2 + w3·y3) · scale, start 0 on the first pass, else z. */
-    private static void addFour(double[] z, boolean first, double scale, double[] y0, double w0, double[] y1,
-                                double w1, double[] y2, double w2, double[] y3, double w3, int from, int end) {
-        if (first) {
+            double scale = invDiag[c];
             for (int i = from; i < end; i++) {
-                z[i] = (0.0 + w0 * y0[i] + w1 * y1[i] + w2 * y2[i] + w3 * y3[i]) * scale;
-            }
-        } else {
-            for (int i = from; i < end; i++) {
-                z[i] = (z[i] + w0 * y0[i] + w1 * y1[i] + w2 * y2[i] + w3 * y3[i]) * scale;
+                z[i] *= scale;
             }
         }
     }
