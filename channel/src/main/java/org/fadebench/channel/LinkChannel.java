@@ -26,7 +26,7 @@ public final class LinkChannel {
     private final BlockChannel fading;
     private final boolean varies;
     private final CsiEstimator csi;
-    /** The model, for scaled fades (importance sampling); its fading model is made on first use. */
+    /** The model, for scaled fades (importance sampling); its fading model is made on first use (and grown once if a later block is longer). */
     private final ChannelModel model;
     private FadingModel scaledFading;
     /** The scale of the fades drawn, or NaN for the model's own draws. */
@@ -134,18 +134,29 @@ public final class LinkChannel {
     }
 
     /**
-     * {@link #transmit} on planar arrays, for two transmit antennas and a channel that does not
-     * vary within the block: the block's slots, as rows of T slots from row {@code from} of the
-     * planes {@code x} (4·T planes), into the same rows of {@code y}, with the same draws and results
-     * (see {@link MimoChannel#applyTwoTransmittersPlanar}).
+     * {@link #transmit} on planar arrays, for a channel that does not vary within the block: the
+     * block's slots, as rows of T slots from row {@code from} of the planes {@code x} (2·T·Mt
+     * planes), into the same rows of {@code y}, with the same draws and results (see
+     * {@link MimoChannel#applyTwoTransmittersPlanar} and {@link MimoChannel#applyPlanar}).
      */
     public void transmit(double[][] x, int from, double n0, Draws draws, double[][] y) {
-        int slotsPerRow = x.length / 4;
-        if (varies || mt != 2 || slots % slotsPerRow != 0) {
-            throw new IllegalStateException("planar transmit needs two transmit antennas, block fading and whole rows");
+        int slotsPerRow = x.length / (2 * mt);
+        if (varies || slots % slotsPerRow != 0) {
+            throw new IllegalStateException("planar transmit needs block fading and whole rows");
         }
-        MimoChannel.applyTwoTransmittersPlanar(h, nr, x, from, slots / slotsPerRow, n0, draws, y);
+        int rows = slots / slotsPerRow;
+        if (mt == 2) {
+            MimoChannel.applyTwoTransmittersPlanar(h, nr, x, from, rows, n0, draws, y);
+        } else {
+            if (planarSum == null || planarSum.length < from + rows) {
+                planarSum = new double[from + rows];
+            }
+            MimoChannel.applyPlanar(h, nr, mt, x, from, rows, n0, draws, y, planarSum);
+        }
     }
+
+    /** The work plane of {@link #transmit(double[][], int, double, Draws, double[][])} for Mt ≠ 2, made on first use (and grown once if a later block is longer). */
+    private double[] planarSum;
 
     /** Writes the receiver's estimate Ĥ (Nr x Mt) of the block's channel into {@code hHat}. */
     public void estimate(double n0, Draws draws, double[] hHat) {

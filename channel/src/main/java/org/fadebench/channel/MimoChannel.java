@@ -1,5 +1,7 @@
 package org.fadebench.channel;
 
+import java.util.Arrays;
+
 /**
  * The flat MIMO channel over a run of slots with one channel matrix: for each slot τ and receive
  * antenna r, {@code y[τ][r] = Σ_t H[r][t] · x[τ][t] + n}, with n ~ CN(0, n0). In matrix form
@@ -81,6 +83,97 @@ public final class MimoChannel {
                 double[] yi = y[2 * (tau * nr + r) + 1];
                 for (int i = from; i < end; i++) {
                     yi[i] = Math.fma(h1r, x1i[i], Math.fma(h1i, x1r[i], Math.fma(h2r, x2i[i], Math.fma(h2i, x2r[i], yi[i]))));
+                }
+            }
+        }
+    }
+
+    /**
+     * {@link #apply} on planar arrays as {@link #applyTwoTransmittersPlanar} lays them out, for any
+     * number of transmit antennas but two (which that method serves): the same noise draws and, per
+     * element, the sums of the interleaved {@code addGeneral} (with one antenna its sum 0 + p is the
+     * single-antenna product p), four antennas a pass. Above four antennas the sum runs in
+     * {@code sum}, a work plane of at least {@code from + rows} entries.
+     */
+    public static void applyPlanar(double[] h, int nr, int mt, double[][] x, int from, int rows, double n0,
+                                   Draws draws, double[][] y, double[] sum) {
+        int slots = x.length / (2 * mt);
+        if (mt == 2 || x.length != 2 * mt * slots || y.length != 2 * slots * nr || sum.length < from + rows) {
+            throw new IllegalArgumentException("planes: x needs 2·T·Mt, y 2·T·Nr (Mt ≠ 2), got " + x.length
+                    + " and " + y.length);
+        }
+        draws.fillGaussian(y, from, rows, Math.sqrt(0.5 * n0));
+        for (int tau = 0; tau < slots; tau++) {
+            for (int r = 0; r < nr; r++) {
+                for (int part = 0; part < 2; part++) {
+                    double[] yp = y[2 * (tau * nr + r) + part];
+                    if (mt <= 4) {
+                        addFour(yp, true, h, 2 * r * mt, x, 2 * tau * mt, mt, part, from, rows);
+                        continue;
+                    }
+                    Arrays.fill(sum, from, from + rows, 0.0);
+                    for (int t = 0; t < mt; t += 4) {
+                        addFour(sum, false, h, 2 * (r * mt + t), x, 2 * (tau * mt + t), Math.min(4, mt - t), part,
+                                from, rows);
+                    }
+                    for (int i = from; i < from + rows; i++) {
+                        yp[i] += sum[i];
+                    }
+                }
+            }
+        }
+    }
+
+    /**
+     * The products p_t (real part for part 0, imaginary for 1) of {@code count} (1 to 4) antennas:
+     * h from {@code h[ho]}, x in planes {@code xp, xp+1, …}, rows {@code from ..}. Whole: the sum
+     * of addGeneral, y += 0 + p_0 + … + p_count−1; else acc += p_0 + … in that order. Missing
+     * antennas count as h = 0, whose products are exact zeros and change no sum.
+     */
+    private static void addFour(double[] acc, boolean whole, double[] h, int ho, double[][] x, int xp, int count,
+                                int part, int from, int rows) {
+        double h0r = h[ho];
+        double h0i = h[ho + 1];
+        double h1r = count > 1 ? h[ho + 2] : 0.0;
+        double h1i = count > 1 ? h[ho + 3] : 0.0;
+        double h2r = count > 2 ? h[ho + 4] : 0.0;
+        double h2i = count > 2 ? h[ho + 5] : 0.0;
+        double h3r = count > 3 ? h[ho + 6] : 0.0;
+        double h3i = count > 3 ? h[ho + 7] : 0.0;
+        // real part: hr·xr − hi·xi, a = xr, b = xi; imaginary: hr·xi + hi·xr, a = xi, b = xr
+        int own = part;
+        int other = 1 - part;
+        double[] a0 = x[xp + own];
+        double[] b0 = x[xp + other];
+        double[] a1 = count > 1 ? x[xp + 2 + own] : a0;
+        double[] b1 = count > 1 ? x[xp + 2 + other] : b0;
+        double[] a2 = count > 2 ? x[xp + 4 + own] : a0;
+        double[] b2 = count > 2 ? x[xp + 4 + other] : b0;
+        double[] a3 = count > 3 ? x[xp + 6 + own] : a0;
+        double[] b3 = count > 3 ? x[xp + 6 + other] : b0;
+        int end = from + rows;
+        if (part == 0) {
+            if (whole) {
+                for (int i = from; i < end; i++) {
+                    acc[i] += 0.0 + (h0r * a0[i] - h0i * b0[i]) + (h1r * a1[i] - h1i * b1[i])
+                            + (h2r * a2[i] - h2i * b2[i]) + (h3r * a3[i] - h3i * b3[i]);
+                }
+            } else {
+                for (int i = from; i < end; i++) {
+                    acc[i] = acc[i] + (h0r * a0[i] - h0i * b0[i]) + (h1r * a1[i] - h1i * b1[i])
+                            + (h2r * a2[i] - h2i * b2[i]) + (h3r * a3[i] - h3i * b3[i]);
+                }
+            }
+        } else {
+            if (whole) {
+                for (int i = from; i < end; i++) {
+                    acc[i] += 0.0 + (h0r * a0[i] + h0i * b0[i]) + (h1r * a1[i] + h1i * b1[i])
+                            + (h2r * a2[i] + h2i * b2[i]) + (h3r * a3[i] + h3i * b3[i]);
+                }
+            } else {
+                for (int i = from; i < end; i++) {
+                    acc[i] = acc[i] + (h0r * a0[i] + h0i * b0[i]) + (h1r * a1[i] + h1i * b1[i])
+                            + (h2r * a2[i] + h2i * b2[i]) + (h3r * a3[i] + h3i * b3[i]);
                 }
             }
         }

@@ -22,8 +22,8 @@ final class PlanarTransmission extends Transmission {
     final double[][] symbols;
     /** 2K planes: Re and Im of each symbol estimate. */
     final double[][] estimates;
-    /** The post-combining gain of each code block's symbols (the same for all K). */
-    private final double[] gain;
+    /** K planes: the post-combining gain of each symbol of a code block. */
+    private final double[][] gain;
     private final int bitsPerSymbol;
     private final double[][] grid;
     private final double[][] received;
@@ -36,7 +36,7 @@ final class PlanarTransmission extends Transmission {
         this.kernel = kernel;
         this.symbols = new double[2 * code.symbolsPerBlock()][blocks];
         this.estimates = new double[2 * code.symbolsPerBlock()][blocks];
-        this.gain = new double[blocks];
+        this.gain = new double[code.symbolsPerBlock()][blocks];
         this.bitsPerSymbol = settings.modulation().bitsPerSymbol();
         this.grid = new double[2 * slots * settings.transmitAntennas()][blocks];
         this.received = new double[2 * slots * settings.receiveAntennas()][blocks];
@@ -45,7 +45,7 @@ final class PlanarTransmission extends Transmission {
     /** Bytes of the planes and gains the constructor allocates. */
     static long bufferBytes(LinkSettings settings) {
         SpaceTimeCode code = settings.code();
-        long planes = 4L * code.symbolsPerBlock() + 1
+        long planes = 5L * code.symbolsPerBlock()
                 + 2L * code.slotsPerBlock() * (settings.transmitAntennas() + settings.receiveAntennas());
         return 8 * planes * settings.blocksPerFrame();
     }
@@ -57,7 +57,9 @@ final class PlanarTransmission extends Transmission {
         channel.estimate(n0, draws, hHat);
         kernel.setChannel(hHat);
         kernel.combine(received, first, blocks, estimates);
-        Arrays.fill(gain, first, first + blocks, kernel.gain());
+        for (int k = 0; k < gain.length; k++) {
+            Arrays.fill(gain[k], first, first + blocks, kernel.gain(k));
+        }
     }
 
     @Override
@@ -74,7 +76,7 @@ final class PlanarTransmission extends Transmission {
     void map(QamConstellation constellation, byte[] bits) {
         int k = estimates.length / 2;
         for (int j = 0; j < k; j++) {
-            constellation.map(bits, j * bitsPerSymbol, k * bitsPerSymbol, symbols[2 * j], symbols[2 * j + 1], gain.length);
+            constellation.map(bits, j * bitsPerSymbol, k * bitsPerSymbol, symbols[2 * j], symbols[2 * j + 1], gain[j].length);
         }
     }
 
@@ -82,8 +84,8 @@ final class PlanarTransmission extends Transmission {
     void demap(QamConstellation constellation, LlrMethod method, double n0, double[] llr) {
         int k = estimates.length / 2;
         for (int j = 0; j < k; j++) {
-            constellation.demap(method, estimates[2 * j], estimates[2 * j + 1], gain, n0, llr, j * bitsPerSymbol,
-                    k * bitsPerSymbol, gain.length);
+            constellation.demap(method, estimates[2 * j], estimates[2 * j + 1], gain[j], n0, llr, j * bitsPerSymbol,
+                    k * bitsPerSymbol, gain[j].length);
         }
     }
 }

@@ -19,6 +19,8 @@ import org.fadebench.coding.fec.ldpc.LdpcCode;
 import org.fadebench.coding.fec.ldpc.LdpcDecoding;
 import org.fadebench.coding.fec.ldpc.LdpcFamily;
 import org.fadebench.coding.stbc.Equaliser;
+import org.fadebench.coding.stbc.SpaceTimeCode;
+import org.fadebench.coding.stbc.SpaceTimeCodeFile;
 import org.fadebench.coding.stbc.SpaceTimeCodes;
 import org.fadebench.modem.LlrMethod;
 import org.fadebench.modem.Modulation;
@@ -121,6 +123,12 @@ class PlanarPathTest {
     @ParameterizedTest
     @MethodSource("codedPlanarLinks")
     void codedFramesOnPlanesEqualInterleaved(LinkSettings settings) {
+        FrameCounters g = codedFramesCompared(settings);
+        assertTrue(g.frameErrors() > 0 && g.frameErrors() < g.frames(), "some frames fail, some pass: " + g.byName());
+    }
+
+    /** The comparison of {@link #codedFramesOnPlanesEqualInterleaved}; the interleaved chain's counters. */
+    private static FrameCounters codedFramesCompared(LinkSettings settings) {
         LinkChain planar = new LinkChain(settings, true);
         LinkChain interleaved = new LinkChain(settings, false);
         assertTrue(planar.planar(), settings.describe());
@@ -141,8 +149,8 @@ class PlanarPathTest {
             interleaved.copyEstimates(interleavedEstimates);
             assertArrayEquals(interleavedEstimates, planarEstimates, "call " + call);
         }
-        assertTrue(g.frameErrors() > 0 && g.frameErrors() < g.frames(), "some frames fail, some pass: " + g.byName());
         assertEquals(interleavedDraws.uniform().nextLong(), planarDraws.uniform().nextLong());
+        return g;
     }
 
     /**
@@ -190,7 +198,84 @@ class PlanarPathTest {
                 .planar());
         assertFalse(new LinkChain(codedAlamouti(Modulation.QPSK, 2, rayleigh.withDoppler(0.01), 256, 0,
                 new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12), LlrMethod.MAXLOG)).planar());
-        assertFalse(new LinkChain(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.G4, 1, 4, Fading.RAYLEIGH, 256, 0))
-                .planar());
+        assertFalse(new LinkChain(new LinkSettings(Modulation.QPSK, SpaceTimeCodes.G4, 1, 4,
+                rayleigh.withDoppler(0.01), 256, 0, Equaliser.MF, FrameCoding.NONE)).planar());
+    }
+
+    /**
+     * Every catalogue code but the single-antenna one, and an orthogonal code read from a code
+     * file, sends on planes (Alamouti with its own kernel, the others with the table-driven
+     * {@link org.fadebench.coding.stbc.DesignKernel}); a code that is not orthogonal does not.
+     */
+    @Test
+    void everyOrthogonalCodeHasAPlanarKernel() {
+        for (SpaceTimeCode code : SpaceTimeCodes.all()) {
+            assertEquals(code != SpaceTimeCodes.NONE, code.hasPlanarKernel(), code.name());
+        }
+        assertTrue(FILE_CODE.hasPlanarKernel());
+        // two symbols in one slot on two antennas (spatial multiplexing): not orthogonal
+        SpaceTimeCode multiplexing = SpaceTimeCodeFile.parse(String.join("\n", "name: \"two-streams\"", "tx: 2",
+                "slots: 1", "symbols:", "  - real: [[\"1\", \"0\"]]", "    imag: [[\"1j\", \"0\"]]",
+                "  - real: [[\"0\", \"1\"]]", "    imag: [[\"0\", \"1j\"]]"), "test");
+        assertFalse(multiplexing.isOrthogonal());
+        assertFalse(multiplexing.hasPlanarKernel());
+    }
+
+    /** H3 read back from its code file: a code the catalogue does not know, with the same matrices. */
+    private static final SpaceTimeCode FILE_CODE = SpaceTimeCodeFile.parse(
+            SpaceTimeCodeFile.format(SpaceTimeCodes.H3).replace("h3", "h3-from-file"), "test");
+
+    private static Stream<SpaceTimeCode> orthogonalCodes() {
+        Stream.Builder<SpaceTimeCode> codes = Stream.builder();
+        for (SpaceTimeCode code : SpaceTimeCodes.all()) {
+            if (code != SpaceTimeCodes.NONE) {
+                codes.add(code);
+            }
+        }
+        return codes.add(FILE_CODE).build();
+    }
+
+    /**
+     * Every orthogonal code × 1–4 receive antennas × every modulation × perfect and imperfect CSI,
+     * uncoded: 6 code blocks a frame, 2 a fading block (so a frame has 3 channels).
+     */
+    static Stream<LinkSettings> orthogonalLinks() {
+        return orthogonalCodes().flatMap(code -> Stream.of(1, 2, 3, 4).flatMap(rx -> Stream.of(Modulation.values())
+                .flatMap(mod -> Stream.of(0.0, 0.05).map(csi -> new LinkSettings(mod, code, rx,
+                        code.transmitAntennas(), csi == 0 ? ChannelSpec.of(Fading.RAYLEIGH)
+                                : ChannelSpec.of(Fading.RAYLEIGH).withCsiError(csi),
+                        6 * code.symbolsPerBlock() * mod.bitsPerSymbol(), 2 * code.slotsPerBlock(), Equaliser.MF,
+                        FrameCoding.NONE)))));
+    }
+
+    @ParameterizedTest
+    @MethodSource("orthogonalLinks")
+    void orthogonalCodesOnPlanesEqualGeneralPath(LinkSettings settings) {
+        planarPathEqualsGeneralPath(settings);
+    }
+
+    /**
+     * Every orthogonal code coded (CRC-16 + rate-1/2 convolutional code, 100 information bits), with
+     * receive antennas, modulation, LLR method and CSI varying from code to code.
+     */
+    static Stream<LinkSettings> codedOrthogonalLinks() {
+        Modulation[] mods = Modulation.values();
+        int[] n = {0};
+        return orthogonalCodes().flatMap(code -> Stream.of(0.0, 0.05).map(csi -> {
+            int i = n[0]++;
+            return new LinkSettings(mods[i % mods.length], code, 1 + i % 4, code.transmitAntennas(),
+                    csi == 0 ? ChannelSpec.of(Fading.RAYLEIGH) : ChannelSpec.of(Fading.RAYLEIGH).withCsiError(csi),
+                    100, 0, Equaliser.MF, new FrameCoding(new FecScheme(Crc.CRC16, PuncturedCode.CONV_R12),
+                    Interleaving.RANDOM, 0, i % 3 == 0 ? LlrMethod.EXACT : LlrMethod.MAXLOG));
+        }));
+    }
+
+    @ParameterizedTest
+    @MethodSource("codedOrthogonalLinks")
+    void codedOrthogonalCodesOnPlanesEqualInterleaved(LinkSettings settings) {
+        // with up to 32 branches of diversity not every link loses frames, but all make raw symbol errors
+        FrameCounters g = codedFramesCompared(settings);
+        assertTrue(g.symbolErrors() > 0 && g.symbolErrors() < g.symbols(), g.byName().toString());
+        planarLlrsEqualInterleaved(settings);
     }
 }

@@ -81,7 +81,7 @@ public final class AlamoutiKernel implements Combiner, PlanarKernel {
     }
 
     @Override
-    public double gain() {
+    public double gain(int symbol) {
         return gain;
     }
 

@@ -66,6 +66,27 @@ final class EffectiveChannel {
         }
     }
 
+    /**
+     * The inverse diagonal of FᵀF for the current F into {@code invDiag} (2K entries; 0 where a
+     * column is zero) and each symbol's matched-filter gain 2 / (1/G_aa + 1/G_bb) into {@code gain}
+     * (K entries; 0 where either is zero). The sums run over the rows of F in order.
+     */
+    void matchedFilterDiagonal(double[] invDiag, double[] gain) {
+        for (int c = 0; c < 2 * k; c++) {
+            double g = 0;
+            for (int row = 0; row < f.numRows; row++) {
+                double v = f.unsafe_get(row, c);
+                g += v * v;
+            }
+            invDiag[c] = g > 0 ? 1.0 / g : 0.0;
+        }
+        for (int i = 0; i < k; i++) {
+            double ia = invDiag[2 * i];
+            double ib = invDiag[2 * i + 1];
+            gain[i] = ia > 0 && ib > 0 ? 2.0 / (ia + ib) : 0.0;
+        }
+    }
+
     /** Copies block {@code blk} of the receive grid (blocks from row {@code yRow}) into {@code y}. */
     void loadBlock(double[] yGrid, int yRow, int blk, DMatrixRMaj y) {
         System.arraycopy(yGrid, 2 * (yRow + blk * t) * nr, y.data, 0, blockLength());

@@ -47,20 +47,7 @@ public final class MatchedFilterCombiner implements Combiner {
     @Override
     public void setChannel(double[] h) {
         channel.fill(h);
-        DMatrixRMaj f = channel.f;
-        for (int c = 0; c < 2 * k; c++) {
-            double g = 0;
-            for (int row = 0; row < f.numRows; row++) {
-                double v = f.unsafe_get(row, c);
-                g += v * v;
-            }
-            invDiag[c] = g > 0 ? 1.0 / g : 0.0;
-        }
-        for (int i = 0; i < k; i++) {
-            double ia = invDiag[2 * i];
-            double ib = invDiag[2 * i + 1];
-            gain[i] = ia > 0 && ib > 0 ? 2.0 / (ia + ib) : 0.0;
-        }
+        channel.matchedFilterDiagonal(invDiag, gain);
     }
 
     @Override

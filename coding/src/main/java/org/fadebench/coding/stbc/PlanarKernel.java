@@ -8,7 +8,7 @@ package org.fadebench.coding.stbc;
  * and the received signal 2·T·Nr (slot τ, receive antenna r: planes 2·(τ·Nr + r) and the next).
  * Every loop then runs over code blocks with unit stride, which the JIT vectorises. A planar
  * kernel gives exactly the numbers of the code's interleaved encoder and combiner; it writes no
- * gains (an orthogonal code's gain is the same for every symbol of a fading block: {@link #gain}). Made by
+ * gains (an orthogonal code's gain is the same for every code block of a fading block: {@link #gain}). Made by
  * {@link SpaceTimeCode#newPlanarKernel}, for the codes that have one; implementations own their
  * work buffers and do not allocate after construction.
  */
@@ -21,10 +21,10 @@ public interface PlanarKernel {
     void setChannel(double[] h);
 
     /**
-     * The post-combining gain of every symbol under the channel last set, the value the code's
-     * interleaved combiner writes for each.
+     * The post-combining gain of symbol k (0 .. K−1) of every code block under the channel last
+     * set, the value the code's interleaved combiner writes for it.
      */
-    double gain();
+    double gain(int symbol);
 
     /** Combines code blocks {@code from .. from+blocks)} of the received planes into estimate planes. */
     void combine(double[][] received, int from, int blocks, double[][] estimates);

@@ -171,16 +171,25 @@ public final class SpaceTimeCode implements Serializable {
 
     /**
      * The kernel that runs this code on planar arrays for {@code nr} receive antennas (see
-     * {@link PlanarKernel}), or empty when the code has none (every code but Alamouti's today).
+     * {@link PlanarKernel}), or empty when the code has none: Alamouti's own kernel, else the
+     * {@link DesignKernel} of an orthogonal code whose grid entries are each ±s_k, ±s_k* or 0 up
+     * to the power scale (the single-antenna code and the other codes have none).
      */
     public Optional<PlanarKernel> newPlanarKernel(int nr) {
         checkReceiveAntennas(nr);
-        return hasPlanarKernel() ? Optional.of(new AlamoutiKernel(nr)) : Optional.empty();
+        switch (kernel) {
+            case ALAMOUTI:
+                return Optional.of(new AlamoutiKernel(nr));
+            case GENERAL:
+                return Optional.ofNullable(DesignKernel.of(this, nr));
+            default:
+                return Optional.empty();
+        }
     }
 
     /** Whether {@link #newPlanarKernel} gives a kernel. */
     public boolean hasPlanarKernel() {
-        return kernel == Kernel.ALAMOUTI;
+        return newPlanarKernel(1).isPresent();
     }
 
     static void checkReceiveAntennas(int nr) {

@@ -1,0 +1,170 @@
+package org.fadebench.coding.stbc;
+
+import java.util.Arrays;
+import org.ejml.data.DMatrixRMaj;
+
+/**
+ * The planar kernel ({@link PlanarKernel}) of any orthogonal code whose grid entries are each
+ * ±c·s_k, ±c·s_k* or 0 — the orthogonal designs of V. Tarokh, H. Jafarkhani and A. R. Calderbank,
+ * "Space-time block codes from orthogonal designs", IEEE Trans. Inf. Theory 45(5), 1999 — made
+ * from the code's dispersion matrices by tables rather than by hand per code:
+ * <ul>
+ *   <li>encoder: each real or imaginary part of a grid entry is one symbol part times a signed
+ *   power scale (or 0), so grid plane p = {@code factor[p]} · symbol plane {@code source[p]};</li>
+ *   <li>combiner: the matched filter z = Fᵀ y of the {@link MatchedFilterCombiner}, summed over
+ *   only the rows of F that the code's structure can make non-zero, in the same row order, with F
+ *   and the diagonal of FᵀF computed by the same {@link EffectiveChannel} once per channel.</li>
+ * </ul>
+ * The received planes are the rows of F in order (plane 2·(τ·Nr + r) + part), so every product and
+ * sum is the general combiner's, in its order: the estimates and gains equal its to the last bit
+ * (the skipped terms are exact zeros). Allocation-free after construction.
+ */
+public final class DesignKernel implements PlanarKernel {
+
+    /** Per grid plane: the symbol plane it copies (2k for Re s_k, 2k + 1 for Im s_k), or −1 for 0. */
+    private final int[] source;
+    /** Per grid plane: the signed power scale of its symbol plane. */
+    private final double[] factor;
+    private final EffectiveChannel channel;
+    /** Per symbol part c (column of F): the rows of F that may be non-zero, ascending. */
+    private final int[][] rows;
+    /** Per symbol part c: F's entries in those rows under the current channel. */
+    private final double[][] weights;
+    private final double[] invDiag;
+    private final double[] gain;
+
+    private DesignKernel(SpaceTimeCode code, int nr, int[] source, double[] factor) {
+        this.source = source;
+        this.factor = factor;
+        this.channel = new EffectiveChannel(code, nr);
+        int k = code.symbolsPerBlock();
+        int t = code.slotsPerBlock();
+        int mt = code.transmitAntennas();
+        this.rows = new int[2 * k][];
+        this.weights = new double[2 * k][];
+        for (int c = 0; c < 2 * k; c++) {
+            double[] d = c % 2 == 0 ? code.realDispersion(c / 2) : code.imagDispersion(c / 2);
+            int[] used = new int[2 * t * nr];
+            int n = 0;
+            for (int slot = 0; slot < t; slot++) {
+                boolean sent = false;
+                for (int i = 2 * slot * mt; i < 2 * (slot + 1) * mt; i++) {
+                    sent |= d[i] != 0;
+                }
+                for (int j = 0; sent && j < 2 * nr; j++) {
+                    used[n++] = 2 * slot * nr + j;
+                }
+            }
+            rows[c] = Arrays.copyOf(used, n);
+            weights[c] = new double[n];
+        }
+        this.invDiag = new double[2 * k];
+        this.gain = new double[k];
+    }
+
+    /**
+     * The kernel of {@code code} for {@code nr} receive antennas, or null when the code is not
+     * orthogonal or some grid entry mixes more than one symbol part.
+     */
+    static DesignKernel of(SpaceTimeCode code, int nr) {
+        if (!code.isOrthogonal()) {
+            return null;
+        }
+        int k = code.symbolsPerBlock();
+        int planes = 2 * code.slotsPerBlock() * code.transmitAntennas();
+        int[] source = new int[planes];
+        double[] factor = new double[planes];
+        Arrays.fill(source, -1);
+        for (int c = 0; c < 2 * k; c++) {
+            double[] d = c % 2 == 0 ? code.realDispersion(c / 2) : code.imagDispersion(c / 2);
+            for (int p = 0; p < planes; p++) {
+                if (d[p] != 0) {
+                    if (source[p] >= 0) {
+                        return null;
+                    }
+                    source[p] = c;
+                    factor[p] = d[p];
+                }
+            }
+        }
+        return new DesignKernel(code, nr, source, factor);
+    }
+
+    /**
+     * The general encoder's values: each grid part is a sum of products of which one alone is not
+     * an exact zero, so it equals that product (up to the sign of a zero).
+     */
+    @Override
+    public void encode(double[][] symbols, int from, int blocks, double[][] grid) {
+        int end = from + blocks;
+        for (int p = 0; p < source.length; p++) {
+            double[] x = grid[p];
+            if (source[p] < 0) {
+                Arrays.fill(x, from, end, 0.0);
+                continue;
+            }
+            double[] s = symbols[source[p]];
+            double a = factor[p];
+            for (int i = from; i < end; i++) {
+                x[i] = s[i] * a;
+            }
+        }
+    }
+
+    @Override
+    public void setChannel(double[] h) {
+        channel.fill(h);
+        channel.matchedFilterDiagonal(invDiag, gain);
+        DMatrixRMaj f = channel.f;
+        for (int c = 0; c < rows.length; c++) {
+            for (int j = 0; j < rows[c].length; j++) {
+                weights[c][j] = f.unsafe_get(rows[c][j], c);
+            }
+        }
+    }
+
+    @Override
+    public double gain(int symbol) {
+        return gain[symbol];
+    }
+
+    /**
+     * z = Fᵀ y over the rows of each column in order, four rows a pass ((z + p1) + p2 … as the
+     * general combiner adds them, from 0), then the division by the diagonal of FᵀF.
+     */
+    @Override
+    public void combine(double[][] received, int from, int blocks, double[][] estimates) {
+        int end = from + blocks;
+        for (int c = 0; c < rows.length; c++) {
+            double[] z = estimates[c];
+            int[] r = rows[c];
+            double[] w = weights[c];
+            Arrays.fill(z, from, end, 0.0);
+            int j = 0;
+            for (; j + 4 <= r.length; j += 4) {
+                double[] y0 = received[r[j]];
+                double[] y1 = received[r[j + 1]];
+                double[] y2 = received[r[j + 2]];
+                double[] y3 = received[r[j + 3]];
+                double w0 = w[j];
+                double w1 = w[j + 1];
+                double w2 = w[j + 2];
+                double w3 = w[j + 3];
+                for (int i = from; i < end; i++) {
+                    z[i] = z[i] + w0 * y0[i] + w1 * y1[i] + w2 * y2[i] + w3 * y3[i];
+                }
+            }
+            for (; j < r.length; j++) {
+                double[] y = received[r[j]];
+                double wj = w[j];
+                for (int i = from; i < end; i++) {
+                    z[i] += wj * y[i];
+                }
+            }
+            double scale = invDiag[c];
+            for (int i = from; i < end; i++) {
+                z[i] *= scale;
+            }
+        }
+    }
+}
