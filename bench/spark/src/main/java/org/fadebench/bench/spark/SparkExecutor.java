@@ -37,9 +37,9 @@ import org.fadebench.bench.sweep.SweepPlan;
  * <p>A round has {@code tasksPerRound} tasks (by default {@link #TASKS_PER_CORE} per core of the
  * cluster, so that cores that finish early find work), and Spark holds two rounds at once, so that
  * no core waits for the slowest task of a round. A task computes as many batches as take about
- * {@link #TASK_SECONDS} (timed in the last finished round's tasks), which keeps Spark's cost per task small; but a round
- * at most doubles the batches a point has been given so far, so that a point that needs few frames
- * is not handed many more.
+ * {@link #TASK_SECONDS} (timed in the last finished round's tasks), which keeps Spark's cost per
+ * task small; but a round at most doubles the batches a point has been given so far, so that a
+ * point that needs few frames is not handed many more.
  */
 public final class SparkExecutor implements BatchExecutor {
 
