@@ -37,9 +37,9 @@ import org.fadebench.bench.sweep.SweepPlan;
  * <p>A round has {@code tasksPerRound} tasks (by default {@link #TASKS_PER_CORE} per core of the
  * cluster, so that cores that finish early find work), and Spark holds two rounds at once, so that
  * no core waits for the slowest task of a round. A task computes as many batches as take about
- * {@link #TASK_SECONDS} (timed in the tasks), which keeps Spark's cost per task small; but a round
- * at most doubles the batches a point has been given so far, so that a point that needs few frames
- * is not handed many more.
+ * {@link #TASK_SECONDS} (timed in the last finished round's tasks), which keeps Spark's cost per
+ * task small; but a round at most doubles the batches a point has been given so far, so that a
+ * point that needs few frames is not handed many more.
  */
 public final class SparkExecutor implements BatchExecutor {
 
@@ -48,7 +48,7 @@ public final class SparkExecutor implements BatchExecutor {
     /** Rounds Spark holds at once. */
     private static final int ROUNDS_IN_FLIGHT = 2;
     /** What a task aims to take, in seconds. */
-    static final double TASK_SECONDS = 0.25;
+    static final double TASK_SECONDS = 1.0;
     /** How long the driver waits for a standalone master to answer before giving up, in ms. */
     private static final int CONNECT_MILLIS = 5000;
 
@@ -168,9 +168,7 @@ public final class SparkExecutor implements BatchExecutor {
     @Override
     public void execute(SweepPlan plan, Feed feed) {
         Broadcast<SweepPlan> shared = spark.broadcast(plan);
-        LongAccumulator taskNanos = spark.sc().longAccumulator("fadebench task nanoseconds");
-        BatchTask task = new BatchTask(shared, version, failFirstAttempt, taskNanos);
-        Deque<JavaFutureAction<List<BatchResult>>> inFlight = new ArrayDeque<>();
+        Deque<Round> inFlight = new ArrayDeque<>();
         int perTask = 1;
         try {
             while (true) {
@@ -180,22 +178,29 @@ public final class SparkExecutor implements BatchExecutor {
                     if (round.isEmpty()) {
                         break;
                     }
-                    inFlight.add(spark.parallelize(round, Math.min(tasksPerRound, round.size())).mapPartitions(task)
-                            .collectAsync());
+                    LongAccumulator nanos = spark.sc().longAccumulator("fadebench nanoseconds per batch");
+                    BatchTask task = new BatchTask(shared, version, failFirstAttempt, nanos);
+                    inFlight.add(new Round(spark.parallelize(round, Math.min(tasksPerRound, round.size()))
+                            .mapPartitions(task).collectAsync(), nanos));
                 }
                 if (inFlight.isEmpty()) {
                     return;
                 }
-                inFlight.remove().get().forEach(feed::done);
-                perTask = nextPerTask(perTask, taskNanos);
+                Round done = inFlight.remove();
+                done.results().get().forEach(feed::done);
+                perTask = nextPerTask(perTask, done.nanosPerBatch());
             }
         } catch (Exception e) {
-            inFlight.forEach(f -> f.cancel(true));
+            inFlight.forEach(r -> r.results().cancel(true));
             throw new Failure("Spark could not compute the batches (" + rootMessage(e) + "); what was merged is kept "
                     + "in the checkpoint: run the same command with --resume to continue", e);
         } finally {
             shared.destroy();
         }
+    }
+
+    /** A round Spark computes: its batches' results, and the time each batch took in its tasks. */
+    private record Round(JavaFutureAction<List<BatchResult>> results, LongAccumulator nanosPerBatch) {
     }
 
     /**
@@ -218,11 +223,15 @@ public final class SparkExecutor implements BatchExecutor {
     }
 
     /**
-     * Batches per task for a task of about {@link #TASK_SECONDS}, from the time the tasks so far
-     * took per batch (measured in the tasks): at most twice as many as before.
+     * Batches per task for a task of about {@link #TASK_SECONDS}, from the time a batch took in the
+     * round just finished (measured in its tasks; not in earlier rounds, whose batches the JIT had
+     * not yet compiled): at most twice as many as before.
      */
-    private static int nextPerTask(int perTask, LongAccumulator taskNanos) {
-        double secondsPerBatch = taskNanos.avg() * 1e-9;
+    private static int nextPerTask(int perTask, LongAccumulator nanosPerBatch) {
+        if (nanosPerBatch.count() == 0) {
+            return perTask;
+        }
+        double secondsPerBatch = nanosPerBatch.avg() * 1e-9;
         long wanted = (long) (TASK_SECONDS / Math.max(secondsPerBatch, 1e-9));
         return (int) Math.max(1, Math.min(2L * perTask, wanted));
     }
