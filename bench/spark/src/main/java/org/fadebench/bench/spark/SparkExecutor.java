@@ -272,8 +272,9 @@ public final class SparkExecutor implements BatchExecutor {
     }
 
     /**
-     * One task: the batches of one partition, computed by one {@link BatchWorker} from the
-     * broadcast plan; a pure function of the plan and the batch ids.
+     * One task: the batches of one partition, computed by one {@link BatchWorker} of the broadcast
+     * plan (an idle one of an earlier task of the sweep, or a new one); a pure function of the plan
+     * and the batch ids.
      */
     static final class BatchTask implements FlatMapFunction<Iterator<long[]>, byte[]> {
         private static final long serialVersionUID = 1L;
@@ -296,7 +297,8 @@ public final class SparkExecutor implements BatchExecutor {
             if (!ToolVersion.version().equals(driverVersion)) {
                 throw new IllegalStateException(mismatch(ToolVersion.version(), driverVersion));
             }
-            BatchWorker worker = new BatchWorker(plan.value());
+            SweepPlan sweep = plan.value();
+            BatchWorker worker = IdleWorkers.borrow(sweep);
             List<byte[]> packed = new ArrayList<>(1);
             while (shares.hasNext()) {
                 long[] ids = shares.next();
@@ -313,7 +315,41 @@ public final class SparkExecutor implements BatchExecutor {
                 }
                 packed.add(BatchPack.results(results));
             }
+            IdleWorkers.giveBack(sweep, worker);
             return packed.iterator();
+        }
+    }
+
+    /**
+     * The workers of this JVM's finished tasks of the current sweep, for its next tasks to reuse: a
+     * worker keeps its frame path's buffers and, with importance sampling, each point's fade scale,
+     * so the scale's pilot runs (8 000 frames a point) are made once per worker and point, not once
+     * per task. Only the latest sweep's workers are kept (a study runs its designs one after
+     * another); a sweep is known by its plan object, which Spark deserialises once per JVM from
+     * the broadcast. A worker's results do not depend on what it computed before, as in the thread
+     * pool.
+     */
+    static final class IdleWorkers {
+        /** The plan the idle workers were built for (the broadcast's value: one object per JVM and sweep). */
+        private static SweepPlan current;
+        private static final Deque<BatchWorker> IDLE = new ArrayDeque<>();
+
+        private IdleWorkers() {
+        }
+
+        static synchronized BatchWorker borrow(SweepPlan plan) {
+            if (plan != current) {
+                IDLE.clear();
+                current = plan;
+            }
+            BatchWorker w = IDLE.poll();
+            return w != null ? w : new BatchWorker(plan);
+        }
+
+        static synchronized void giveBack(SweepPlan plan, BatchWorker worker) {
+            if (plan == current) {
+                IDLE.push(worker);
+            }
         }
     }
 }

@@ -53,6 +53,10 @@ class SparkExecutorTest {
     private static final List<String> CODED = List.of("run", "--fec", "ldpc-r12", "--crc", "crc24", "--rx", "2",
             "--snr", "-2..4/2", "--frame-bits", "576", "--min-errors", "20", "--max-frames", "3000", "--seed", "9",
             "--outage-draws", "1000");
+    /** Importance sampling: each worker searches a point's fade scale from pilot runs, which tasks share. */
+    private static final List<String> FADE_SAMPLING = List.of("run", "--code", "alamouti", "--rx", "2", "--snr",
+            "16,20", "--frame-bits", "128", "--estimator", "fade-sampling", "--rel-precision", "0.3", "--seed", "6",
+            "--fer-floor", "0");
 
     record Outcome(int code, String out, String err) {
     }
@@ -79,7 +83,8 @@ class SparkExecutorTest {
     }
 
     static Stream<Arguments> sweeps() {
-        return Stream.of(Arguments.of("uncoded", UNCODED), Arguments.of("coded", CODED));
+        return Stream.of(Arguments.of("uncoded", UNCODED), Arguments.of("coded", CODED),
+                Arguments.of("fade-sampling", FADE_SAMPLING));
     }
 
     /** The same results.csv from Spark local[2] (default tasks, 1 and 3 tasks per round) as from 2 threads. */
