@@ -73,6 +73,10 @@ class LinkChannelTest {
             }
             assertEquals(generalDraws.gaussian(), planarDraws.gaussian());
         }
+        LinkChannel whole = ChannelSpec.of(Fading.RAYLEIGH).newLinkChannel(1, 2, 6);
+        whole.startBlock(Draws.of(1), 0, 6);
+        assertThrows(IllegalArgumentException.class,
+                () -> whole.transmit(new double[24], 0, 4, 0.1, Draws.of(1), new double[12], 0), "6 slots in runs of 4");
         LinkChannel moving = ChannelSpec.of(Fading.RAYLEIGH).withDoppler(0.01).newLinkChannel(1, 2, 2);
         moving.startBlock(Draws.of(1), 0, 2);
         assertThrows(IllegalStateException.class,
