@@ -373,102 +373,38 @@ public final class QamConstellation {
             llr[l + 1] = (Math.min(d1, d2) - Math.min(d0, d3)) * weight;
             return l + 2;
         }
-        for (int j = 0; j < bitsPerAxis; j++) {
-            llr[l++] = bitLlr(y, weight, exact, bitsPerAxis - 1 - j);
-        }
-        return l;
-    }
-
-    /** The LLR of the axis bit at {@code shift} (0: the last of the axis's bits) by the search over every level. */
-    private double bitLlr(double y, double weight, boolean exact, int shift) {
-        final double[] amp = amplitudeOfLevel;
-        double min0 = Double.POSITIVE_INFINITY;
-        double min1 = Double.POSITIVE_INFINITY;
-        for (int i = 0; i < levels; i++) {
-            double d2 = squared(y - amp[i]);
-            if (((labelOfLevel[i] >>> shift) & 1) == 0) {
-                if (d2 < min0) {
-                    min0 = d2;
-                }
-            } else if (d2 < min1) {
-                min1 = d2;
-            }
-        }
-        double value = (min1 - min0) * weight;
-        if (exact) {
-            double sum0 = 0;
-            double sum1 = 0;
+        final int m = bitsPerAxis;
+        for (int j = 0; j < m; j++) {
+            int shift = m - 1 - j;
+            double min0 = Double.POSITIVE_INFINITY;
+            double min1 = Double.POSITIVE_INFINITY;
             for (int i = 0; i < levels; i++) {
                 double d2 = squared(y - amp[i]);
                 if (((labelOfLevel[i] >>> shift) & 1) == 0) {
-                    sum0 += Math.exp(-(d2 - min0) * weight);
-                } else {
-                    sum1 += Math.exp(-(d2 - min1) * weight);
+                    if (d2 < min0) {
+                        min0 = d2;
+                    }
+                } else if (d2 < min1) {
+                    min1 = d2;
                 }
             }
-            value += Math.log(sum0) - Math.log(sum1);
-        }
-        return value;
-    }
-
-    /**
-     * Max-log LLRs of planar estimates into planes of bits: LLR j of the estimate {@code re[i]},
-     * {@code im[i]} with gain {@code gain[i]} to {@code planes[j][i]} for i in {@code 0 .. count)}
-     * (BPSK: of {@code re} alone), the same doubles as
-     * {@link #demap(LlrMethod, double[], double[], double[], double, double[], int, int, int)}
-     * with {@link LlrMethod#MAXLOG}. With 2 or 4 levels per axis (BPSK, QPSK, 16-QAM) each plane is
-     * written by a unit-stride loop of the same expressions as {@link #axisLlr}'s, which the JIT
-     * vectorises; more levels take the search bit by bit.
-     */
-    public void demapMaxLog(double[] re, double[] im, double[] gain, double n0, double[][] planes, int count) {
-        final double[] amp = amplitudeOfLevel;
-        if (levels == 4) {
-            double[] b0 = planes[0];
-            double[] b1 = planes[1];
-            double[] b2 = planes[2];
-            double[] b3 = planes[3];
-            double a0 = amp[0];
-            double a1 = amp[1];
-            double a2 = amp[2];
-            double a3 = amp[3];
-            for (int i = 0; i < count; i++) {
-                double w = gain[i] / n0;
-                double d0 = squared(re[i] - a0);
-                double d1 = squared(re[i] - a1);
-                double d2 = squared(re[i] - a2);
-                double d3 = squared(re[i] - a3);
-                b0[i] = (Math.min(d2, d3) - Math.min(d0, d1)) * w;
-                b1[i] = (Math.min(d1, d2) - Math.min(d0, d3)) * w;
-                double e0 = squared(im[i] - a0);
-                double e1 = squared(im[i] - a1);
-                double e2 = squared(im[i] - a2);
-                double e3 = squared(im[i] - a3);
-                b2[i] = (Math.min(e2, e3) - Math.min(e0, e1)) * w;
-                b3[i] = (Math.min(e1, e2) - Math.min(e0, e3)) * w;
-            }
-            return;
-        }
-        if (levels == 2) {
-            double[] b0 = planes[0];
-            double a0 = amp[0];
-            double a1 = amp[1];
-            for (int i = 0; i < count; i++) {
-                b0[i] = (squared(re[i] - a1) - squared(re[i] - a0)) * (gain[i] / n0);
-            }
-            if (twoAxes) {
-                double[] b1 = planes[1];
-                for (int i = 0; i < count; i++) {
-                    b1[i] = (squared(im[i] - a1) - squared(im[i] - a0)) * (gain[i] / n0);
+            double value = (min1 - min0) * weight;
+            if (exact) {
+                double sum0 = 0;
+                double sum1 = 0;
+                for (int i = 0; i < levels; i++) {
+                    double d2 = squared(y - amp[i]);
+                    if (((labelOfLevel[i] >>> shift) & 1) == 0) {
+                        sum0 += Math.exp(-(d2 - min0) * weight);
+                    } else {
+                        sum1 += Math.exp(-(d2 - min1) * weight);
+                    }
                 }
+                value += Math.log(sum0) - Math.log(sum1);
             }
-            return;
+            llr[l++] = value;
         }
-        for (int i = 0; i < count; i++) {
-            double w = gain[i] / n0;
-            for (int j = 0; j < bitsPerSymbol; j++) {
-                planes[j][i] = bitLlr(j < bitsPerAxis ? re[i] : im[i], w, false, bitsPerAxis - 1 - j % bitsPerAxis);
-            }
-        }
+        return l;
     }
 
     private static double squared(double d) {

@@ -123,7 +123,7 @@ class QamConstellationTest {
     /**
      * Mapping bits into planes and LLRs out of them (every third symbol in a plane, the bits of the
      * others in between) give exactly the interleaved map's symbols and the interleaved demapper's
-     * LLRs, max-log and exact (max-log also by planes of bits), and map agrees with mapLabels.
+     * LLRs, max-log and exact, and map agrees with mapLabels.
      */
     @ParameterizedTest
     @EnumSource(Modulation.class)
@@ -175,19 +175,6 @@ class QamConstellationTest {
             }
             // assertArrayEquals on double[] without a delta compares the bit patterns
             assertArrayEquals(interleaved, planar, mod + " " + method);
-            if (method == LlrMethod.MAXLOG) {
-                double[] fromPlanes = new double[k * n];
-                double[][] planes = new double[k][blocks];
-                for (int j = 0; j < perBlock; j++) {
-                    c.demapMaxLog(re[j], im[j], blockGain, 0.3, planes, blocks);
-                    for (int b = 0; b < blocks; b++) {
-                        for (int bit = 0; bit < k; bit++) {
-                            fromPlanes[(perBlock * b + j) * k + bit] = planes[bit][b];
-                        }
-                    }
-                }
-                assertArrayEquals(interleaved, fromPlanes, mod + " in planes");
-            }
         }
     }
 
@@ -261,7 +248,7 @@ class QamConstellationTest {
     /**
      * The max-log LLRs are, bit for bit, those of the plain search over every level of the bit's
      * axis, min over d² = (y - a)² with the bit 1 less min with the bit 0, times gain / n0 (the form
-     * the demapper keeps for 8 and 16 levels; common practice, no source), interleaved and by planes of bits:
+     * the demapper keeps for 8 and 16 levels; common practice, no source):
      * for estimates on and within ulps of every boundary and amplitude, far outside, infinite, NaN,
      * and Gaussian around the points.
      */
@@ -283,7 +270,6 @@ class QamConstellationTest {
         double[] y = new double[2];
         double[] gain = new double[1];
         double[] llr = new double[k];
-        double[][] planes = new double[k][1];
         for (int trial = 0; trial < 40000; trial++) {
             for (int a = 0; a < 2; a++) {
                 y[a] = trial % 2 == 0 ? axis.get(rnd.nextInt(axis.size()))
@@ -292,7 +278,6 @@ class QamConstellationTest {
             gain[0] = 0.1 + 3 * rnd.nextDouble();
             double n0 = 0.05 + rnd.nextDouble();
             c.demapMaxLog(y, gain, 0, n0, llr, 0, 1);
-            c.demapMaxLog(new double[] {y[0]}, new double[] {y[1]}, gain, n0, planes, 1);
             for (int j = 0; j < k; j++) {
                 double v = y[j / m];
                 int shift = m - 1 - j % m;
@@ -310,8 +295,6 @@ class QamConstellationTest {
                 double expected = (min1 - min0) * (gain[0] / n0);
                 assertEquals(Double.doubleToLongBits(expected), Double.doubleToLongBits(llr[j]),
                         mod + " y = " + v + " bit " + j + ": " + expected + " against " + llr[j]);
-                assertEquals(Double.doubleToLongBits(expected), Double.doubleToLongBits(planes[j][0]),
-                        mod + " y = " + v + " bit " + j + " in planes: " + expected + " against " + planes[j][0]);
             }
         }
     }

@@ -27,8 +27,6 @@ final class PlanarTransmission extends Transmission {
     private final int bitsPerSymbol;
     private final double[][] grid;
     private final double[][] received;
-    /** Max-log LLRs of one symbol of each code block, a plane per bit of the symbol. */
-    private final double[][] llrPlanes;
 
     PlanarTransmission(LinkSettings settings, LinkChannel channel, PlanarKernel kernel) {
         super(settings, channel);
@@ -42,13 +40,12 @@ final class PlanarTransmission extends Transmission {
         this.bitsPerSymbol = settings.modulation().bitsPerSymbol();
         this.grid = new double[2 * slots * settings.transmitAntennas()][blocks];
         this.received = new double[2 * slots * settings.receiveAntennas()][blocks];
-        this.llrPlanes = new double[bitsPerSymbol][blocks];
     }
 
     /** Bytes of the planes and gains the constructor allocates. */
     static long bufferBytes(LinkSettings settings) {
         SpaceTimeCode code = settings.code();
-        long planes = 5L * code.symbolsPerBlock() + settings.modulation().bitsPerSymbol()
+        long planes = 5L * code.symbolsPerBlock()
                 + 2L * code.slotsPerBlock() * (settings.transmitAntennas() + settings.receiveAntennas());
         return 8 * planes * settings.blocksPerFrame();
     }
@@ -86,21 +83,9 @@ final class PlanarTransmission extends Transmission {
     @Override
     void demap(QamConstellation constellation, LlrMethod method, double n0, double[] llr) {
         int k = estimates.length / 2;
-        int blocks = gain[0].length;
         for (int j = 0; j < k; j++) {
-            if (method == LlrMethod.MAXLOG) {
-                // into planes by loops the JIT vectorises, then into bit order
-                constellation.demapMaxLog(estimates[2 * j], estimates[2 * j + 1], gain[j], n0, llrPlanes, blocks);
-                for (int b = 0; b < bitsPerSymbol; b++) {
-                    double[] plane = llrPlanes[b];
-                    for (int i = 0, l = j * bitsPerSymbol + b; i < blocks; i++, l += k * bitsPerSymbol) {
-                        llr[l] = plane[i];
-                    }
-                }
-            } else {
-                constellation.demap(method, estimates[2 * j], estimates[2 * j + 1], gain[j], n0, llr, j * bitsPerSymbol,
-                        k * bitsPerSymbol, blocks);
-            }
+            constellation.demap(method, estimates[2 * j], estimates[2 * j + 1], gain[j], n0, llr, j * bitsPerSymbol,
+                    k * bitsPerSymbol, gain[j].length);
         }
     }
 }
