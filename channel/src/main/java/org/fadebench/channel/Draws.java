@@ -59,17 +59,30 @@ public final class Draws {
     }
 
     /**
-     * The planar form of {@link #fillGaussian(double[], int, int, double)}: the same draws in the
-     * same order, for an interleaved array of rows of {@code planes.length} values stored as one
-     * plane per column. Row i, column j lands in {@code planes[j][i]}; rows {@code from ..
-     * from+rows)} are filled, the columns of a row one after the other.
+     * Fills {@code rows} rows of {@code width} values, from {@code out[off]}, with independent
+     * N(0, sigma²) draws taken column by column: value 0 of every row, then value 1 of every row,
+     * and so on; row i, value j is {@code out[off + i·width + j]}. With one row this is
+     * {@link #fillGaussian(double[], int, int, double)}. The noise of a fading block is drawn so,
+     * a row being a code block's received values: the planar channel then fills each plane in one
+     * unit-stride run ({@link #fillGaussian(double[][], int, int, double)}, the same draws).
+     */
+    public void fillGaussianColumns(double[] out, int off, int rows, int width, double sigma) {
+        final UniformRandomProvider rng = uniform;
+        for (int j = off, endColumn = off + width; j < endColumn; j++) {
+            for (int i = j, end = j + rows * width; i < end; i += width) {
+                out[i] = sigma * Ziggurat.sample(rng);
+            }
+        }
+    }
+
+    /**
+     * The planar form of {@link #fillGaussianColumns}: the same draws in the same order for rows of
+     * {@code planes.length} values stored as one plane per value; row i, value j lands in {@code
+     * planes[j][i]}. Rows {@code from .. from+rows)} of each plane are filled, plane after plane.
      */
     public void fillGaussian(double[][] planes, int from, int rows, double sigma) {
-        final UniformRandomProvider rng = uniform;
-        for (int i = from, end = from + rows; i < end; i++) {
-            for (double[] plane : planes) {
-                plane[i] = sigma * Ziggurat.sample(rng);
-            }
+        for (double[] plane : planes) {
+            fillGaussian(plane, from, rows, sigma);
         }
     }
 

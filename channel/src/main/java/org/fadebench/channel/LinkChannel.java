@@ -6,7 +6,7 @@ package org.fadebench.channel;
  * receiver its channel estimate. Per fading block, in this order:
  * <pre>
  *   startBlock(draws, blockIndex, slots)   the block's channel: one matrix, or one per slot with Doppler
- *   transmit(x, xRow, n0, draws, y, yRow)  Y = X Hᵀ + N over the block's slots (noise drawn first)
+ *   transmit(x, xRow, rowSlots, n0, draws, y, yRow)  Y = X Hᵀ + N over the block's slots (noise first)
  *   estimate(n0, draws, hHat)              the receiver's CSI Ĥ for the block
  * </pre>
  * Random draws come only from {@code draws}, in that order (fading, noise, CSI), so a block depends
@@ -124,12 +124,14 @@ public final class LinkChannel {
     /**
      * Passes the block's slots, rows {@code xRow ..} of the transmit grid {@code x} (slots x Mt), through
      * the channel with noise of variance {@code n0}, into rows {@code yRow ..} of {@code y} (slots x Nr).
+     * The noise is drawn for runs of {@code rowSlots} slots (the code block) as rows, column by
+     * column (see {@link MimoChannel#apply}), as the planar form below draws it.
      */
-    public void transmit(double[] x, int xRow, double n0, Draws draws, double[] y, int yRow) {
+    public void transmit(double[] x, int xRow, int rowSlots, double n0, Draws draws, double[] y, int yRow) {
         if (varies) {
-            MimoChannel.applyPerSlot(h, nr, mt, x, xRow, slots, n0, draws, y, yRow);
+            MimoChannel.applyPerSlot(h, nr, mt, x, xRow, slots, rowSlots, n0, draws, y, yRow);
         } else {
-            MimoChannel.apply(h, nr, mt, x, xRow, slots, n0, draws, y, yRow);
+            MimoChannel.apply(h, nr, mt, x, xRow, slots, rowSlots, n0, draws, y, yRow);
         }
     }
 

@@ -18,14 +18,22 @@ public final class MimoChannel {
     /**
      * Passes {@code slots} rows of {@code x} (from row {@code xRow}) through {@code h} and adds
      * complex Gaussian noise of variance {@code n0}, writing rows of {@code y} from {@code yRow}.
+     * The noise is drawn first, for runs of {@code rowSlots} slots (a code block; {@code slots} a
+     * multiple of it) as rows: the first value (slot, antenna, re/im) of every run, then the second,
+     * and so on (see {@link Draws#fillGaussianColumns}), the order in which the planar channel
+     * fills its planes.
      */
-    public static void apply(double[] h, int nr, int mt, double[] x, int xRow, int slots,
+    public static void apply(double[] h, int nr, int mt, double[] x, int xRow, int slots, int rowSlots,
                              double n0, Draws draws, double[] y, int yRow) {
         int yo = 2 * yRow * nr;
-        // noise first, drawn in the order of the receive grid (slot, antenna, re, im) ...
-        draws.fillGaussian(y, yo, 2 * slots * nr, Math.sqrt(0.5 * n0));
-        // ... then the signal is added on top
+        fillNoise(slots, rowSlots, nr, n0, draws, y, yo);
         addSignal(h, 0, nr, mt, x, 2 * xRow * mt, slots, y, yo);
+    }
+
+    /** {@link #apply} with the slots as one run (noise drawn in the order of the receive grid). */
+    public static void apply(double[] h, int nr, int mt, double[] x, int xRow, int slots,
+                             double n0, Draws draws, double[] y, int yRow) {
+        apply(h, nr, mt, x, xRow, slots, slots, n0, draws, y, yRow);
     }
 
     /**
@@ -34,10 +42,10 @@ public final class MimoChannel {
      * {@code hSlots[2·s·Nr·Mt]}). The noise is drawn first, in the same order as {@code apply}, so a
      * channel that does not change over the slots gives exactly the output of {@code apply}.
      */
-    public static void applyPerSlot(double[] hSlots, int nr, int mt, double[] x, int xRow, int slots,
+    public static void applyPerSlot(double[] hSlots, int nr, int mt, double[] x, int xRow, int slots, int rowSlots,
                                     double n0, Draws draws, double[] y, int yRow) {
         int yo = 2 * yRow * nr;
-        draws.fillGaussian(y, yo, 2 * slots * nr, Math.sqrt(0.5 * n0));
+        fillNoise(slots, rowSlots, nr, n0, draws, y, yo);
         int xo = 2 * xRow * mt;
         int matrix = 2 * nr * mt;
         for (int s = 0; s < slots; s++) {
@@ -45,8 +53,17 @@ public final class MimoChannel {
         }
     }
 
+    /** The noise of {@code slots} slots from {@code y[yo]}, in runs of {@code rowSlots} (see {@link #apply}). */
+    private static void fillNoise(int slots, int rowSlots, int nr, double n0, Draws draws, double[] y, int yo) {
+        if (rowSlots < 1 || slots % rowSlots != 0) {
+            throw new IllegalArgumentException("slots (" + slots + ") must be whole runs of " + rowSlots);
+        }
+        draws.fillGaussianColumns(y, yo, slots / rowSlots, 2 * rowSlots * nr, Math.sqrt(0.5 * n0));
+    }
+
     /**
-     * {@link #apply} for two transmit antennas on planar arrays: the same noise draws and the same
+     * {@link #apply} for two transmit antennas on planar arrays: the same noise draws (rows of T
+     * slots) and the same
      * arithmetic per element, with the grid and the received signal split into planes of real and
      * imaginary parts so that each product is a unit-stride loop over rows.
      *

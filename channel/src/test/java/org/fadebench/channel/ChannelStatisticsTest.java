@@ -90,25 +90,36 @@ class ChannelStatisticsTest {
     }
 
     /**
-     * The planar fill takes the same draws as the interleaved one and puts row i, column j in plane
-     * j at i, for any number of planes, and leaves the stream where the interleaved fill leaves it.
+     * The planar fill takes the same draws as the interleaved one, column by column: row i, column
+     * j in plane j at i, for any number of planes; each column is one unit-stride run of the flat
+     * fill (the planes in order make up the flat sequence), and both leave the stream at the same
+     * place.
      */
     @Test
     void planarFillTakesTheSameDraws() {
         for (int cols : new int[] {1, 3, 4, 8, 16}) {
             int rows = 37;
-            double[] flat = new double[cols * rows];
+            double[] interleaved = new double[cols * (rows + 1)];
             Draws a = Draws.of(8, cols);
-            a.fillGaussian(flat, 0, flat.length, 0.7);
+            a.fillGaussianColumns(interleaved, cols, rows, cols, 0.7);
             double[][] planes = new double[cols][rows + 2];
             Draws b = Draws.of(8, cols);
             b.fillGaussian(planes, 2, rows, 0.7);
+            double[] flat = new double[cols * rows];
+            Draws c = Draws.of(8, cols);
+            c.fillGaussian(flat, 0, flat.length, 0.7);
+            for (int j = 0; j < cols; j++) {
+                assertEquals(0.0, interleaved[j], 0.0, "row before the first untouched");
+            }
             for (int i = 0; i < rows; i++) {
                 for (int j = 0; j < cols; j++) {
-                    assertEquals(flat[i * cols + j], planes[j][i + 2], 0.0, cols + " planes, row " + i);
+                    assertEquals(interleaved[(i + 1) * cols + j], planes[j][i + 2], 0.0, cols + " planes, row " + i);
+                    assertEquals(flat[j * rows + i], planes[j][i + 2], 0.0, cols + " planes, row " + i);
                 }
             }
-            assertEquals(a.gaussian(), b.gaussian(), 0.0, cols + " planes: stream position");
+            double next = c.gaussian();
+            assertEquals(next, a.gaussian(), 0.0, cols + " columns: stream position");
+            assertEquals(next, b.gaussian(), 0.0, cols + " planes: stream position");
         }
     }
 

@@ -148,13 +148,13 @@ class DopplerFadingTest {
         Draws.of(2).fillGaussian(x, 0, x.length, 1.0);
         double[] a = new double[2 * nr * (slots + 2)];
         double[] b = new double[a.length];
-        MimoChannel.apply(h, nr, mt, x, 1, slots, 0.3, Draws.of(5), a, 2);
-        MimoChannel.applyPerSlot(hSlots, nr, mt, x, 1, slots, 0.3, Draws.of(5), b, 2);
+        MimoChannel.apply(h, nr, mt, x, 1, slots, 2, 0.3, Draws.of(5), a, 2);
+        MimoChannel.applyPerSlot(hSlots, nr, mt, x, 1, slots, 2, 0.3, Draws.of(5), b, 2);
         assertArrayEquals(a, b, 0.0);
 
         new RayleighFading().draw(Draws.of(3), nr, mt, h);
         System.arraycopy(h, 0, hSlots, 4 * h.length, h.length);
-        MimoChannel.applyPerSlot(hSlots, nr, mt, x, 1, slots, 0.0, Draws.of(6), b, 2);
+        MimoChannel.applyPerSlot(hSlots, nr, mt, x, 1, slots, 2, 0.0, Draws.of(6), b, 2);
         double[] one = new double[2 * nr];
         MimoChannel.apply(h, nr, mt, x, 5, 1, 0.0, Draws.of(7), one, 0);
         for (int i = 0; i < one.length; i++) {

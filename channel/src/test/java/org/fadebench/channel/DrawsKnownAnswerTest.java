@@ -33,7 +33,10 @@ class DrawsKnownAnswerTest {
                 + Long.toHexString(d.uniform().nextLong()) + " " + d.uniform().nextDouble();
     }
 
-    /** Standard normal draws (Ziggurat), one at a time and in bulk with a σ; the planar form equals the bulk one. */
+    /**
+     * Standard normal draws (Ziggurat), one at a time and in bulk with a σ; the planar form fills
+     * plane after plane and the interleaved one column by column, the same draws.
+     */
     @Test
     void gaussians() {
         Draws d = Draws.of(SEED, 1, 2);
@@ -46,8 +49,11 @@ class DrawsKnownAnswerTest {
             0.1546059126001028, 0.7155018824546548, -0.9127311359121966}, bulk, 0.0, Arrays.toString(bulk));
         double[][] planes = new double[2][3];
         Draws.of(SEED, 1, 3).fillGaussian(planes, 0, 3, 0.5);
-        assertArrayEquals(bulk, new double[] {planes[0][0], planes[1][0], planes[0][1], planes[1][1], planes[0][2],
+        assertArrayEquals(bulk, new double[] {planes[0][0], planes[0][1], planes[0][2], planes[1][0], planes[1][1],
             planes[1][2]}, 0.0);
+        double[] columns = new double[6];
+        Draws.of(SEED, 1, 3).fillGaussianColumns(columns, 0, 3, 2, 0.5);
+        assertArrayEquals(new double[] {bulk[0], bulk[3], bulk[1], bulk[4], bulk[2], bulk[5]}, columns, 0.0);
     }
 
     /** Uniform labels of 4 and 6 bits, and the planar form for rows of two labels. */

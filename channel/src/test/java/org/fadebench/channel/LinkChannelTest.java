@@ -29,14 +29,14 @@ class LinkChannelTest {
         double[] hHat = new double[2 * nr * mt];
         Draws draws = Draws.of(2);
         channel.startBlock(draws, 0, slots);
-        channel.transmit(x, 0, 0.25, draws, y, 0);
+        channel.transmit(x, 0, 2, 0.25, draws, y, 0);
         channel.estimate(0.25, draws, hHat);
 
         double[] h = new double[2 * nr * mt];
         double[] yOld = new double[y.length];
         Draws old = Draws.of(2);
         new RayleighFading().draw(old, nr, mt, h);
-        MimoChannel.apply(h, nr, mt, x, 0, slots, 0.25, old, yOld, 0);
+        MimoChannel.apply(h, nr, mt, x, 0, slots, 2, 0.25, old, yOld, 0);
         assertArrayEquals(yOld, y, 0.0);
         assertArrayEquals(h, hHat, 0.0);
         assertEquals(old.gaussian(), draws.gaussian(), 0.0);
@@ -65,7 +65,7 @@ class LinkChannelTest {
             Draws planarDraws = Draws.of(4);
             general.startBlock(generalDraws, 0, slots);
             planar.startBlock(planarDraws, 0, slots);
-            general.transmit(x, 0, 0.3, generalDraws, y, 0);
+            general.transmit(x, 0, 2, 0.3, generalDraws, y, 0);
             planar.transmit(xPlanes, from, 0.3, planarDraws, yPlanes);
             double[][] expected = planes(y, 4 * nr, from);
             for (int j = 0; j < expected.length; j++) {
@@ -73,6 +73,10 @@ class LinkChannelTest {
             }
             assertEquals(generalDraws.gaussian(), planarDraws.gaussian());
         }
+        LinkChannel whole = ChannelSpec.of(Fading.RAYLEIGH).newLinkChannel(1, 2, 6);
+        whole.startBlock(Draws.of(1), 0, 6);
+        assertThrows(IllegalArgumentException.class,
+                () -> whole.transmit(new double[24], 0, 4, 0.1, Draws.of(1), new double[12], 0), "6 slots in runs of 4");
         LinkChannel moving = ChannelSpec.of(Fading.RAYLEIGH).withDoppler(0.01).newLinkChannel(1, 2, 2);
         moving.startBlock(Draws.of(1), 0, 2);
         assertThrows(IllegalStateException.class,
@@ -132,7 +136,7 @@ class LinkChannelTest {
         double[] x = new double[40];
         x[2 * 7] = 1.0;
         double[] y = new double[80];
-        channel.transmit(x, 0, 0.0, draws, y, 0);
+        channel.transmit(x, 0, 2, 0.0, draws, y, 0);
         channel.trueChannel(7, later);
         assertArrayEquals(later, Arrays.copyOfRange(y, 4 * 7, 4 * 7 + 4), 0.0);
         assertThrows(IllegalArgumentException.class, () -> channel.trueChannel(20, first));
@@ -159,10 +163,10 @@ class LinkChannelTest {
         Draws b = Draws.of(2);
         for (long block = 0; block < 5; block++) {
             fromTrace.startBlock(a, block, 4);
-            fromTrace.transmit(x, 0, 0.5, a, y1, 0);
+            fromTrace.transmit(x, 0, 2, 0.5, a, y1, 0);
             fromTrace.estimate(0.5, a, e1);
             none.startBlock(b, block, 4);
-            none.transmit(x, 0, 0.5, b, y2, 0);
+            none.transmit(x, 0, 2, 0.5, b, y2, 0);
             none.estimate(0.5, b, e2);
             assertArrayEquals(y2, y1, 0.0);
             assertArrayEquals(e2, e1, 0.0);
@@ -209,7 +213,7 @@ class LinkChannelTest {
                                   long first, int blocks) {
         for (int b = 0; b < blocks; b++) {
             channel.startBlock(draws, first + b, 16);
-            channel.transmit(x, 0, 0.1, draws, y, 0);
+            channel.transmit(x, 0, 2, 0.1, draws, y, 0);
             channel.estimate(0.1, draws, hHat);
         }
     }

@@ -20,6 +20,8 @@ final class InterleavedTransmission extends Transmission {
     private final Equaliser equaliser;
     private final int nr;
     private final int symbolsPerBlock;
+    /** Slots per code block: the rows in which the noise is drawn. */
+    private final int slotsPerBlock;
     private final StbcEncoder encoder;
     private Combiner combiner;
     /** The noise level the combiner was made for (only MMSE depends on it). */
@@ -38,6 +40,7 @@ final class InterleavedTransmission extends Transmission {
         this.equaliser = settings.equaliser();
         this.nr = settings.receiveAntennas();
         this.symbolsPerBlock = code.symbolsPerBlock();
+        this.slotsPerBlock = code.slotsPerBlock();
         this.encoder = code.newEncoder();
         this.combinerN0 = 1.0;
         this.combiner = code.newCombiner(nr, equaliser, combinerN0);
@@ -69,7 +72,7 @@ final class InterleavedTransmission extends Transmission {
     @Override
     void sendBlocks(Draws draws, double n0, int first, int blocks) {
         encoder.encode(symbols, first * symbolsPerBlock, blocks, grid, 0);
-        channel.transmit(grid, 0, n0, draws, received, 0);
+        channel.transmit(grid, 0, slotsPerBlock, n0, draws, received, 0);
         channel.estimate(n0, draws, hHat);
         combiner.setChannel(hHat);
         combiner.combine(received, 0, blocks, estimates, gain, first * symbolsPerBlock);

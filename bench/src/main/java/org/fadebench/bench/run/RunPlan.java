@@ -326,9 +326,13 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
         return m;
     }
 
-    /** Every setting that changes the numbers, for the checkpoint's fingerprint. */
+    /**
+     * Every setting that changes the numbers, for the checkpoint's fingerprint. Its first field
+     * changes when the same settings give other numbers: v4 since the noise order of version 0.2.0,
+     * so that a checkpoint of 0.1.0 is not resumed with draws in another order.
+     */
     public String numbersFingerprintText(int batchFrames) {
-        return String.join("|", "v3", link.describe(), link.coding().toString(), parityChecks(link),
+        return String.join("|", "v4", link.describe(), link.coding().toString(), parityChecks(link),
                 link.channel().describe(),
                 SpaceTimeCodeFile.format(link.code()), link.equaliser().cliName(), link.modulation().cliName(),
                 link.fading(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),

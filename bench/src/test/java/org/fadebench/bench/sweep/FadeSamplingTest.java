@@ -158,13 +158,16 @@ class FadeSamplingTest {
      * At FER 1e-7 the estimate's 95 % interval covers the closed form, for 1×2 MRC and Alamouti
      * 2×2, BPSK and QPSK, 256-bit quasi-static frames, and the point stopped on its precision
      * (±20 %) with enough effective error frames. Each check fails by chance with probability
-     * about 5 % if the interval is honest; the seed is fixed.
+     * about 5 % if the interval is honest; the seed is fixed. It was changed once, from 20261203 to
+     * 20261205 (the first other seed tried), with the noise order of version 0.2.0: under the old
+     * seed the interval of Alamouti 2×2 QPSK, [6.59e-8, 9.87e-8], then missed 1e-7; seeds 1 to 20
+     * covered it 17 times for that link (P(at most 17 of 20) = 0.075 at a true 95 %).
      */
     @Test
     void coversTheClosedFormAtFer1e7() {
         for (SpaceTimeCode code : new SpaceTimeCode[] {SpaceTimeCodes.NONE, SpaceTimeCodes.ALAMOUTI}) {
             for (Modulation mod : new Modulation[] {Modulation.BPSK, Modulation.QPSK}) {
-                assertCoversClosedFormAtFer1e7(link(mod, code, 2, 256), 20261203L);
+                assertCoversClosedFormAtFer1e7(link(mod, code, 2, 256), 20261205L);
             }
         }
     }
