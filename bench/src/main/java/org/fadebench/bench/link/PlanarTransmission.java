@@ -38,7 +38,7 @@ final class PlanarTransmission extends Transmission {
         this.estimates = new double[2 * code.symbolsPerBlock()][blocks];
         this.gain = new double[code.symbolsPerBlock()][blocks];
         this.bitsPerSymbol = settings.modulation().bitsPerSymbol();
-        this.grid = new double[2 * slots * settings.transmitAntennas()][blocks];
+        this.grid = kernel.newGrid(2 * slots * settings.transmitAntennas(), blocks);
         this.received = new double[2 * slots * settings.receiveAntennas()][blocks];
     }
 

@@ -25,6 +25,8 @@ public final class DesignKernel implements PlanarKernel {
     private final int[] source;
     /** Per grid plane: the signed power scale of its symbol plane. */
     private final double[] factor;
+    /** Per grid plane: the first grid plane of the same source and factor (itself if none before). */
+    private final int[] first;
     private final EffectiveChannel channel;
     /** Per symbol part c (column of F): the rows of F that may be non-zero, ascending. */
     private final int[][] rows;
@@ -36,6 +38,14 @@ public final class DesignKernel implements PlanarKernel {
     private DesignKernel(SpaceTimeCode code, int nr, int[] source, double[] factor) {
         this.source = source;
         this.factor = factor;
+        this.first = new int[source.length];
+        for (int p = 0; p < source.length; p++) {
+            int q = 0;
+            while (source[q] != source[p] || factor[q] != factor[p]) {
+                q++;
+            }
+            first[p] = q;
+        }
         this.channel = new EffectiveChannel(code, nr);
         int k = code.symbolsPerBlock();
         int t = code.slotsPerBlock();
@@ -92,13 +102,17 @@ public final class DesignKernel implements PlanarKernel {
 
     /**
      * The general encoder's values: each grid part is a sum of products of which one alone is not
-     * an exact zero, so it equals that product (up to the sign of a zero).
+     * an exact zero, so it equals that product (up to the sign of a zero). A plane that shares its
+     * array with an earlier plane of the same values ({@link #newGrid}) is written once.
      */
     @Override
     public void encode(double[][] symbols, int from, int blocks, double[][] grid) {
         int end = from + blocks;
         for (int p = 0; p < source.length; p++) {
             double[] x = grid[p];
+            if (first[p] != p && x == grid[first[p]]) {
+                continue;
+            }
             if (source[p] < 0) {
                 Arrays.fill(x, from, end, 0.0);
                 continue;
@@ -109,6 +123,23 @@ public final class DesignKernel implements PlanarKernel {
                 x[i] = s[i] * a;
             }
         }
+    }
+
+    /**
+     * One array per distinct pair of symbol part and signed scale (and one for the zero entries),
+     * shared by the grid planes that carry it: 16 arrays instead of 64 for G4, which keeps the grid
+     * of a frame in the first-level cache.
+     */
+    @Override
+    public double[][] newGrid(int gridPlanes, int blocks) {
+        if (gridPlanes != source.length) {
+            throw new IllegalArgumentException("grid planes: the code has " + source.length + ", got " + gridPlanes);
+        }
+        double[][] grid = new double[gridPlanes][];
+        for (int p = 0; p < gridPlanes; p++) {
+            grid[p] = first[p] == p ? new double[blocks] : grid[first[p]];
+        }
+        return grid;
     }
 
     @Override
