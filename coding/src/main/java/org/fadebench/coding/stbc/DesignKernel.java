@@ -28,9 +28,14 @@ public final class DesignKernel implements PlanarKernel {
     /** Per grid plane: the first grid plane of the same source and factor (itself if none before). */
     private final int[] first;
     private final EffectiveChannel channel;
-    /** Per symbol part c (column of F): the rows of F that may be non-zero, ascending. */
+    /**
+     * Per symbol part c (column of F): the rows of F that may be non-zero, ascending, then as many
+     * more (row 0) as make the count a multiple of 4.
+     */
     private final int[][] rows;
-    /** Per symbol part c: F's entries in those rows under the current channel. */
+    /** Per symbol part c: how many of its rows are those of F (the rest are padding). */
+    private final int[] used;
+    /** Per symbol part c: F's entries in its rows under the current channel (0 for the padding). */
     private final double[][] weights;
     private final double[] invDiag;
     private final double[] gain;
@@ -51,10 +56,11 @@ public final class DesignKernel implements PlanarKernel {
         int t = code.slotsPerBlock();
         int mt = code.transmitAntennas();
         this.rows = new int[2 * k][];
+        this.used = new int[2 * k];
         this.weights = new double[2 * k][];
         for (int c = 0; c < 2 * k; c++) {
             double[] d = c % 2 == 0 ? code.realDispersion(c / 2) : code.imagDispersion(c / 2);
-            int[] used = new int[2 * t * nr];
+            int[] list = new int[2 * t * nr + 3];
             int n = 0;
             for (int slot = 0; slot < t; slot++) {
                 boolean sent = false;
@@ -62,11 +68,12 @@ public final class DesignKernel implements PlanarKernel {
                     sent |= d[i] != 0;
                 }
                 for (int j = 0; sent && j < 2 * nr; j++) {
-                    used[n++] = 2 * slot * nr + j;
+                    list[n++] = 2 * slot * nr + j;
                 }
             }
-            rows[c] = Arrays.copyOf(used, n);
-            weights[c] = new double[n];
+            used[c] = n;
+            rows[c] = Arrays.copyOf(list, Math.max(4, (n + 3) / 4 * 4));
+            weights[c] = new double[rows[c].length];
         }
         this.invDiag = new double[2 * k];
         this.gain = new double[k];
@@ -148,7 +155,7 @@ public final class DesignKernel implements PlanarKernel {
         channel.matchedFilterDiagonal(invDiag, gain);
         DMatrixRMaj f = channel.f;
         for (int c = 0; c < rows.length; c++) {
-            for (int j = 0; j < rows[c].length; j++) {
+            for (int j = 0; j < used[c]; j++) {
                 weights[c][j] = f.unsafe_get(rows[c][j], c);
             }
         }
@@ -161,7 +168,9 @@ public final class DesignKernel implements PlanarKernel {
 
     /**
      * z = Fᵀ y over the rows of each column in order, four rows a pass ((z + p1) + p2 … as the
-     * general combiner adds them, from 0), then the division by the diagonal of FᵀF.
+     * general combiner adds them, from 0), the last pass multiplied by the inverse diagonal of FᵀF
+     * (the others by 1, exactly). The padding rows add products of weight 0, exact zeros, to a sum
+     * that started from +0 and so never is −0: they change no bit.
      */
     @Override
     public void combine(double[][] received, int from, int blocks, double[][] estimates) {
@@ -170,31 +179,24 @@ public final class DesignKernel implements PlanarKernel {
             double[] z = estimates[c];
             int[] r = rows[c];
             double[] w = weights[c];
-            Arrays.fill(z, from, end, 0.0);
-            int j = 0;
-            for (; j + 4 <= r.length; j += 4) {
-                double[] y0 = received[r[j]];
-                double[] y1 = received[r[j + 1]];
-                double[] y2 = received[r[j + 2]];
-                double[] y3 = received[r[j + 3]];
-                double w0 = w[j];
-                double w1 = w[j + 1];
-                double w2 = w[j + 2];
-                double w3 = w[j + 3];
-                for (int i = from; i < end; i++) {
-                    z[i] = z[i] + w0 * y0[i] + w1 * y1[i] + w2 * y2[i] + w3 * y3[i];
-                }
+            for (int j = 0; j < r.length; j += 4) {
+                double scale = j + 4 == r.length ? invDiag[c] : 1.0;
+                sumFour(z, j > 0, scale, w[j], received[r[j]], w[j + 1], received[r[j + 1]], w[j + 2],
+                        received[r[j + 2]], w[j + 3], received[r[j + 3]], from, end);
             }
-            for (; j < r.length; j++) {
-                double[] y = received[r[j]];
-                double wj = w[j];
-                for (int i = from; i < end; i++) {
-                    z[i] += wj * y[i];
-                }
-            }
-            double scale = invDiag[c];
+        }
+    }
+
+    /** {@code z[i] = ((add ? z[i] : 0) + w0·y0[i] + w1·y1[i] + w2·y2[i] + w3·y3[i]) · scale}, i in {@code from .. end)}. */
+    private static void sumFour(double[] z, boolean add, double scale, double w0, double[] y0, double w1, double[] y1,
+                                double w2, double[] y2, double w3, double[] y3, int from, int end) {
+        if (add) {
             for (int i = from; i < end; i++) {
-                z[i] *= scale;
+                z[i] = (z[i] + w0 * y0[i] + w1 * y1[i] + w2 * y2[i] + w3 * y3[i]) * scale;
+            }
+        } else {
+            for (int i = from; i < end; i++) {
+                z[i] = (0.0 + w0 * y0[i] + w1 * y1[i] + w2 * y2[i] + w3 * y3[i]) * scale;
             }
         }
     }
