@@ -1,7 +1,6 @@
 package org.fadebench.coding.stbc;
 
 import java.util.Arrays;
-import org.ejml.data.DMatrixRMaj;
 
 /**
  * The planar kernel ({@link PlanarKernel}) of any orthogonal code whose grid entries are each
@@ -12,12 +11,15 @@ import org.ejml.data.DMatrixRMaj;
  *   <li>encoder: each real or imaginary part of a grid entry is one symbol part times a signed
  *   power scale (or 0), so grid plane p = {@code factor[p]} · symbol plane {@code source[p]};</li>
  *   <li>combiner: the matched filter z = Fᵀ y of the {@link MatchedFilterCombiner}, summed over
- *   only the rows of F that the code's structure can make non-zero, in the same row order, with F
- *   and the diagonal of FᵀF computed by the same {@link EffectiveChannel} once per channel.</li>
+ *   only the rows of F that the code's structure can make non-zero, in the same row order; those
+ *   entries of F (the {@link EffectiveChannel}'s sums over the antennas, as EJML's
+ *   {@code mult_small} runs them, over the non-zero dispersion entries only) and the diagonal of
+ *   FᵀF are computed once per channel.</li>
  * </ul>
  * The received planes are the rows of F in order (plane 2·(τ·Nr + r) + part), so every product and
- * sum is the general combiner's, in its order: the estimates and gains equal its to the last bit
- * (the skipped terms are exact zeros). Allocation-free after construction.
+ * sum is the general combiner's, in its order: the estimates and gains equal its to the last bit.
+ * The skipped terms are exact zeros, and every sum here starts from +0, so it never is −0 and
+ * adding an exact zero (of either sign) to it changes no bit. Allocation-free after construction.
  */
 public final class DesignKernel implements PlanarKernel {
 
@@ -27,7 +29,8 @@ public final class DesignKernel implements PlanarKernel {
     private final double[] factor;
     /** Per grid plane: the first grid plane of the same source and factor (itself if none before). */
     private final int[] first;
-    private final EffectiveChannel channel;
+    private final int nr;
+    private final int mt;
     /**
      * Per symbol part c (column of F): the rows of F that may be non-zero, ascending, then as many
      * more (row 0) as make the count a multiple of 4.
@@ -37,6 +40,17 @@ public final class DesignKernel implements PlanarKernel {
     private final int[] used;
     /** Per symbol part c: F's entries in its rows under the current channel (0 for the padding). */
     private final double[][] weights;
+    /**
+     * Per symbol part c, the terms of F's entry in its j-th row: from {@code termEnd[c][j − 1]} (0
+     * for j = 0) to {@code termEnd[c][j]} in the arrays below, one per transmit antenna t whose
+     * dispersion entry d = (dr, di) in that row's slot is not 0, t ascending.
+     */
+    private final int[][] termEnd;
+    /** Per symbol part c and term: the offset in H (Nr x Mt, interleaved) of H[r][t]. */
+    private final int[][] termChannel;
+    /** Per symbol part c and term: dr and di. */
+    private final double[][] termReal;
+    private final double[][] termImag;
     private final double[] invDiag;
     private final double[] gain;
 
@@ -51,13 +65,19 @@ public final class DesignKernel implements PlanarKernel {
             }
             first[p] = q;
         }
-        this.channel = new EffectiveChannel(code, nr);
+        SpaceTimeCode.checkReceiveAntennas(nr);
+        this.nr = nr;
         int k = code.symbolsPerBlock();
         int t = code.slotsPerBlock();
         int mt = code.transmitAntennas();
+        this.mt = mt;
         this.rows = new int[2 * k][];
         this.used = new int[2 * k];
         this.weights = new double[2 * k][];
+        this.termEnd = new int[2 * k][];
+        this.termChannel = new int[2 * k][];
+        this.termReal = new double[2 * k][];
+        this.termImag = new double[2 * k][];
         for (int c = 0; c < 2 * k; c++) {
             double[] d = c % 2 == 0 ? code.realDispersion(c / 2) : code.imagDispersion(c / 2);
             int[] list = new int[2 * t * nr + 3];
@@ -74,9 +94,34 @@ public final class DesignKernel implements PlanarKernel {
             used[c] = n;
             rows[c] = Arrays.copyOf(list, Math.max(4, (n + 3) / 4 * 4));
             weights[c] = new double[rows[c].length];
+            tableTerms(c, d);
         }
         this.invDiag = new double[2 * k];
         this.gain = new double[k];
+    }
+
+    /** The term tables of symbol part c, whose dispersion matrix is {@code d}. */
+    private void tableTerms(int c, double[] d) {
+        int n = used[c];
+        termEnd[c] = new int[n];
+        termChannel[c] = new int[n * mt];
+        termReal[c] = new double[n * mt];
+        termImag[c] = new double[n * mt];
+        int q = 0;
+        for (int j = 0; j < n; j++) {
+            int slot = rows[c][j] / (2 * nr);
+            int r = rows[c][j] / 2 % nr;
+            for (int t = 0; t < mt; t++) {
+                int e = 2 * (slot * mt + t);
+                if (d[e] != 0 || d[e + 1] != 0) {
+                    termChannel[c][q] = 2 * (r * mt + t);
+                    termReal[c][q] = d[e];
+                    termImag[c][q] = d[e + 1];
+                    q++;
+                }
+            }
+            termEnd[c][j] = q;
+        }
     }
 
     /**
@@ -149,16 +194,35 @@ public final class DesignKernel implements PlanarKernel {
         return grid;
     }
 
+    /**
+     * F's entries in the rows of each column: the received image D Hᵀ of the column's dispersion
+     * matrix D, row 2·(τ·Nr + r) + part, summed over the antennas from 0 as {@code mult_small} sums
+     * it (real part dr·hr − di·hi, imaginary dr·hi + di·hr), then the diagonal of FᵀF over the
+     * same rows in order and its inverse, as {@link EffectiveChannel#matchedFilterDiagonal}.
+     */
     @Override
     public void setChannel(double[] h) {
-        channel.fill(h);
-        channel.matchedFilterDiagonal(invDiag, gain);
-        DMatrixRMaj f = channel.f;
         for (int c = 0; c < rows.length; c++) {
-            for (int j = 0; j < used[c]; j++) {
-                weights[c][j] = f.unsafe_get(rows[c][j], c);
+            int[] ends = termEnd[c];
+            int[] at = termChannel[c];
+            double[] dr = termReal[c];
+            double[] di = termImag[c];
+            double g = 0;
+            int q = 0;
+            for (int j = 0; j < ends.length; j++) {
+                boolean real = (rows[c][j] & 1) == 0;
+                double v = 0;
+                for (; q < ends[j]; q++) {
+                    double hr = h[at[q]];
+                    double hi = h[at[q] + 1];
+                    v += real ? dr[q] * hr - di[q] * hi : dr[q] * hi + di[q] * hr;
+                }
+                weights[c][j] = v;
+                g += v * v;
             }
+            invDiag[c] = g;
         }
+        EffectiveChannel.invertDiagonal(invDiag, gain);
     }
 
     @Override
