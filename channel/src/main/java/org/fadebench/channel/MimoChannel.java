@@ -92,7 +92,7 @@ public final class MimoChannel {
      * element, the sum of the interleaved {@code addGeneral}, 0 + p_0 + … + p_Mt−1 in that order,
      * added to the noise. The sum runs in {@code sum}, a work plane of at least {@code from + rows}
      * entries, two antennas a pass: a loop of four planes, which C2 vectorises (one of eight
-     * planes it does not).
+     * planes, four antennas a pass, it does not); the last pass adds the sum to the noise.
      */
     public static void applyPlanar(double[] h, int nr, int mt, double[][] x, int from, int rows, double n0,
                                    Draws draws, double[][] y, double[] sum) {
@@ -106,13 +106,17 @@ public final class MimoChannel {
         for (int tau = 0; tau < slots; tau++) {
             for (int r = 0; r < nr; r++) {
                 for (int part = 0; part < 2; part++) {
-                    for (int t = 0; t < mt; t += 2) {
-                        addTwo(sum, t == 0, h, 2 * (r * mt + t), x, 2 * (tau * mt + t), Math.min(2, mt - t), part,
-                                from, end);
-                    }
                     double[] yp = y[2 * (tau * nr + r) + part];
-                    for (int i = from; i < end; i++) {
-                        yp[i] += sum[i];
+                    for (int t = 0; t < mt; t += 2) {
+                        // the sum's last pass adds it to the noise, unless it is also the first
+                        double[] into = t > 0 && t + 2 >= mt ? yp : null;
+                        addTwo(sum, t == 0, into, h, 2 * (r * mt + t), x, 2 * (tau * mt + t), Math.min(2, mt - t),
+                                part, from, end);
+                    }
+                    if (mt <= 2) {
+                        for (int i = from; i < end; i++) {
+                            yp[i] += sum[i];
+                        }
                     }
                 }
             }
@@ -121,13 +125,14 @@ public final class MimoChannel {
 
     /**
      * Adds the products p_t (real part for part 0, imaginary for 1) of {@code count} (1 or 2)
-     * antennas to {@code acc}, or to 0 when {@code start}: h from {@code h[ho]}, x in planes
-     * {@code xp, xp+1, …}. The real part hr·xr − hi·xi is summed as hr·xr + (−hi)·xi, the same
-     * number. A missing second antenna counts as h = 0, whose products are exact zeros and change
-     * no sum (which never is −0, having started from +0).
+     * antennas to the sum {@code acc}, or to 0 when {@code start}, and keeps the sum in
+     * {@code acc}, or adds it to {@code into} when that is not null (and not {@code start}): h from
+     * {@code h[ho]}, x in planes {@code xp, xp+1, …}. The real part hr·xr − hi·xi is summed as
+     * hr·xr + (−hi)·xi, the same number. A missing second antenna counts as h = 0, whose products
+     * are exact zeros and change no sum (which never is −0, having started from +0).
      */
-    private static void addTwo(double[] acc, boolean start, double[] h, int ho, double[][] x, int xp, int count,
-                               int part, int from, int end) {
+    private static void addTwo(double[] acc, boolean start, double[] into, double[] h, int ho, double[][] x, int xp,
+                               int count, int part, int from, int end) {
         // real part: hr·xr + (−hi)·xi, a = xr, b = xi; imaginary: hr·xi + hi·xr, a = xi, b = xr
         double sign = part == 0 ? -1.0 : 1.0;
         double c0 = h[ho];
@@ -141,6 +146,10 @@ public final class MimoChannel {
         if (start) {
             for (int i = from; i < end; i++) {
                 acc[i] = 0.0 + (c0 * a0[i] + d0 * b0[i]) + (c1 * a1[i] + d1 * b1[i]);
+            }
+        } else if (into != null) {
+            for (int i = from; i < end; i++) {
+                into[i] = into[i] + (acc[i] + (c0 * a0[i] + d0 * b0[i]) + (c1 * a1[i] + d1 * b1[i]));
             }
         } else {
             for (int i = from; i < end; i++) {
