@@ -55,6 +55,7 @@ public final class DesignKernel implements PlanarKernel {
     private final double[] gain;
 
     private DesignKernel(SpaceTimeCode code, int nr, int[] source, double[] factor) {
+        SpaceTimeCode.checkReceiveAntennas(nr);
         this.source = source;
         this.factor = factor;
         this.first = new int[source.length];
@@ -65,7 +66,6 @@ public final class DesignKernel implements PlanarKernel {
             }
             first[p] = q;
         }
-        SpaceTimeCode.checkReceiveAntennas(nr);
         this.nr = nr;
         int k = code.symbolsPerBlock();
         int t = code.slotsPerBlock();
