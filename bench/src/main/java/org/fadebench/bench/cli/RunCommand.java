@@ -66,7 +66,7 @@ final class RunCommand implements Callable<Integer> {
         if (!plan.quiet()) {
             plan.warnings().forEach(w -> spec.commandLine().getErr().println("fadebench run: warning: " + w));
         }
-        SweepJob job = new SweepJob(plan, resume, spec.commandLine().getOut(), commandArgs());
+        SweepJob job = new SweepJob(plan, plan.engine(), resume, spec.commandLine().getOut(), commandArgs());
         int code = job.run();
         summary = job.summary();
         return code;

@@ -18,6 +18,7 @@ import org.fadebench.bench.study.Screening;
 import org.fadebench.bench.study.StudyOutputs;
 import org.fadebench.bench.study.StudyPlan;
 import org.fadebench.bench.study.StudyTable;
+import org.fadebench.bench.sweep.BatchExecutor;
 
 /**
  * Runs a {@link StudyPlan}: each design in turn, on all the study's threads, into its own folder as
@@ -84,60 +85,74 @@ final class StudyRunner {
         }
     }
 
-    /** Runs every design not finished yet; returns the exit code (130 or 143 when interrupted). */
+    /**
+     * Runs every design not finished yet, all on one executor (started before the first design
+     * that runs, so that a study starts Spark once, not once per design); returns the exit code
+     * (130 or 143 when interrupted).
+     */
     int run() {
-        List<DesignRow> rows = new ArrayList<>();
-        List<StudyTable.Named> screened = new ArrayList<>();
-        int n = plan.designs().size();
-        boolean quiet = plan.designs().get(0).plan().quiet();
-        for (int i = 0; i < n; i++) {
-            StudyPlan.Entry e = plan.designs().get(i);
-            if (!quiet) {
-                out.println();
-                out.println("== " + e.name() + " (design " + (i + 1) + " of " + n + ") ==");
-            }
-            if (plan.file().screen()) {
-                Screening s = Screening.of(e.plan(), plan.file().budgetDb(), plan.file().screenMargin());
-                if (!quiet) {
-                    out.println(s.words());
-                }
-                if (s.outcome() == Screening.Outcome.SCREENED_OUT) {
-                    screened.add(new StudyTable.Named(e.name(), s.words()));
-                    continue;
-                }
-            }
-            if (resume && finished(e)) {
-                if (!quiet) {
-                    out.println("finished earlier; kept: " + e.plan().outDir());
-                }
-            } else {
-                if (!quiet) {
-                    e.plan().warnings().forEach(w -> err.println("fadebench study: " + e.name() + ": warning: " + w));
-                }
-                int code = new SweepJob(e.plan(), resume, out, args).run();
-                if (code != ExitCodes.OK) {
-                    out.println("study interrupted in design " + e.name() + "; run the same command with --resume to "
-                            + "continue (finished designs are kept)");
-                    out.flush();
-                    return code;
-                }
-            }
-            rows.add(read(e));
-        }
-        List<StudyTable.Named> skipped = plan.skipped().stream()
-                .map(s -> new StudyTable.Named(s.name(), s.reason())).toList();
-        table = StudyTable.ranked(plan.file().title(), plan.file().budgetDb(), rows, screened, skipped, List.of());
+        BatchExecutor executor = null;
         try {
-            List<Path> written = StudyOutputs.write(plan.dir(), table, figure, sentences.apply(table), args);
-            out.println();
-            out.println("Ranking (" + plan.file().title() + "):");
-            table.lines().forEach(out::println);
-            written.forEach(p -> out.println("wrote " + p));
-        } catch (IOException ex) {
-            throw new UncheckedIOException(ex);
+            List<DesignRow> rows = new ArrayList<>();
+            List<StudyTable.Named> screened = new ArrayList<>();
+            int n = plan.designs().size();
+            boolean quiet = plan.designs().get(0).plan().quiet();
+            for (int i = 0; i < n; i++) {
+                StudyPlan.Entry e = plan.designs().get(i);
+                if (!quiet) {
+                    out.println();
+                    out.println("== " + e.name() + " (design " + (i + 1) + " of " + n + ") ==");
+                }
+                if (plan.file().screen()) {
+                    Screening s = Screening.of(e.plan(), plan.file().budgetDb(), plan.file().screenMargin());
+                    if (!quiet) {
+                        out.println(s.words());
+                    }
+                    if (s.outcome() == Screening.Outcome.SCREENED_OUT) {
+                        screened.add(new StudyTable.Named(e.name(), s.words()));
+                        continue;
+                    }
+                }
+                if (resume && finished(e)) {
+                    if (!quiet) {
+                        out.println("finished earlier; kept: " + e.plan().outDir());
+                    }
+                } else {
+                    if (!quiet) {
+                        e.plan().warnings().forEach(w -> err.println("fadebench study: " + e.name() + ": warning: " + w));
+                    }
+                    if (executor == null) {
+                        executor = SweepJob.startExecutor(plan.engine(), plan.threads());
+                    }
+                    int code = new SweepJob(e.plan(), plan.engine(), resume, out, args).run(executor);
+                    if (code != ExitCodes.OK) {
+                        out.println("study interrupted in design " + e.name() + "; run the same command with --resume to "
+                                + "continue (finished designs are kept)");
+                        out.flush();
+                        return code;
+                    }
+                }
+                rows.add(read(e));
+            }
+            List<StudyTable.Named> skipped = plan.skipped().stream()
+                    .map(s -> new StudyTable.Named(s.name(), s.reason())).toList();
+            table = StudyTable.ranked(plan.file().title(), plan.file().budgetDb(), rows, screened, skipped, List.of());
+            try {
+                List<Path> written = StudyOutputs.write(plan.dir(), table, figure, sentences.apply(table), args);
+                out.println();
+                out.println("Ranking (" + plan.file().title() + "):");
+                table.lines().forEach(out::println);
+                written.forEach(p -> out.println("wrote " + p));
+            } catch (IOException ex) {
+                throw new UncheckedIOException(ex);
+            }
+            out.flush();
+            return ExitCodes.OK;
+        } finally {
+            if (executor != null) {
+                executor.close();
+            }
         }
-        out.flush();
-        return ExitCodes.OK;
     }
 
     /** The ranking of the finished study, or null before. */

@@ -22,6 +22,7 @@ import org.fadebench.bench.report.Numbers;
 import org.fadebench.bench.report.ResultsCsv;
 import org.fadebench.bench.report.ResultsJson;
 import org.fadebench.bench.report.ResultsTable;
+import org.fadebench.bench.run.Engine;
 import org.fadebench.bench.run.RunPlan;
 import org.fadebench.bench.sweep.BatchExecutor;
 import org.fadebench.bench.sweep.PointResult;
@@ -38,6 +39,8 @@ import org.fadebench.bench.sweep.SweepOutcome;
 final class SweepJob {
 
     private final RunPlan plan;
+    /** Who computes the batches, as the run's lines name it. */
+    private final Engine engine;
     private final boolean resume;
     private final PrintWriter out;
     /** The command line's arguments after {@code fadebench}, for the report's provenance. */
@@ -45,9 +48,13 @@ final class SweepJob {
     /** The summary of the finished sweep, once {@link #run} has written the outputs. */
     private RunSummary summary;
 
-    /** @param args the command line's arguments after {@code fadebench}, named in report.html */
-    SweepJob(RunPlan plan, boolean resume, PrintWriter out, List<String> args) {
+    /**
+     * @param engine who computes the batches: the plan's own for {@code run}, the study's for a design
+     * @param args   the command line's arguments after {@code fadebench}, named in report.html
+     */
+    SweepJob(RunPlan plan, Engine engine, boolean resume, PrintWriter out, List<String> args) {
         this.plan = plan;
+        this.engine = engine;
         this.resume = resume;
         this.out = out;
         this.args = List.copyOf(args);
@@ -65,29 +72,36 @@ final class SweepJob {
         return dir;
     }
 
-    /** Runs the sweep; returns the exit code. */
+    /** Runs the sweep on an executor of its own; returns the exit code. */
     int run() {
-        try (BatchExecutor executor = startExecutor()) {
+        try (BatchExecutor executor = startExecutor(engine, plan.threads())) {
             return run(executor);
         }
     }
 
-    /** Starts the run's executor, before anything is written (a cluster that cannot be used is invalid input). */
-    private BatchExecutor startExecutor() {
+    /**
+     * Starts an executor, before anything is written (a cluster that cannot be used is invalid
+     * input); the caller closes it.
+     */
+    static BatchExecutor startExecutor(Engine engine, int threads) {
         try {
-            return plan.engine().start(plan.threads());
+            return engine.start(threads);
         } catch (IllegalArgumentException e) {
             throw new InvalidInputException(e.getMessage());
         }
     }
 
-    private int run(BatchExecutor executor) {
+    /**
+     * Runs the sweep on an executor already started from {@link #engine}, which stays open (a
+     * study's designs share one). Returns the exit code.
+     */
+    int run(BatchExecutor executor) {
         var link = plan.link();
-        SweepEngine engine = new SweepEngine(link, plan.rules(), plan.seed(), executor, plan.confidence());
-        engine.progressMillis(250);
-        engine.recordChannels(plan.traceOut() == null ? 0 : plan.traceOutBlocks());
-        String fingerprint = Checkpoint.fingerprint(plan.numbersFingerprintText(engine.batchFrames()));
-        List<PointState> resumed = resume ? readCheckpoint(fingerprint, engine) : null;
+        SweepEngine sweep = new SweepEngine(link, plan.rules(), plan.seed(), executor, plan.confidence());
+        sweep.progressMillis(250);
+        sweep.recordChannels(plan.traceOut() == null ? 0 : plan.traceOutBlocks());
+        String fingerprint = Checkpoint.fingerprint(plan.numbersFingerprintText(sweep.batchFrames()));
+        List<PointState> resumed = resume ? readCheckpoint(fingerprint, sweep) : null;
         RunOutputs.checkWritable(plan);
 
         boolean talk = !plan.quiet();
@@ -105,7 +119,7 @@ final class SweepJob {
                             : plan.rules().minErrors() == 0 ? "no minimum of" : Long.toString(plan.rules().minErrors()),
                     plan.rules().maxFrames(),
                     plan.rules().maxSeconds() > 0 ? " or " + Numbers.db(plan.rules().maxSeconds()) + " s" : "",
-                    plan.seed(), plan.engine().describe(plan.threads())));
+                    plan.seed(), engine.describe(plan.threads())));
             if (resumed != null) {
                 long done = resumed.stream().filter(PointState::done).count();
                 out.println("resuming from " + plan.outDir().resolve(Checkpoint.FILE_NAME) + " (" + done + " of "
@@ -119,10 +133,10 @@ final class SweepJob {
         ProgressDisplay progress = ProgressDisplay.startIfTerminal(plan.snrDb(), plan.quiet());
         long start = System.nanoTime();
         // the handler stays installed while the outputs are written: a signal then changes nothing
-        try (SignalStop signals = SignalStop.install(engine::requestStop)) {
+        try (SignalStop signals = SignalStop.install(sweep::requestStop)) {
             SweepOutcome outcome;
             try {
-                outcome = engine.run(plan.snrDb(), resumed, listener(table, progress, fingerprint, start));
+                outcome = sweep.run(plan.snrDb(), resumed, listener(table, progress, fingerprint, start));
             } finally {
                 if (progress != null) {
                     progress.close();
@@ -243,7 +257,7 @@ final class SweepJob {
                 out.println(String.format(Locale.ROOT,
                         "simulated %d frames in %.2f s: %.2f M symbols/s, %.2f M information bits/s on %s",
                         outcome.framesSimulated(), seconds, run.symbolsPerSecond() * 1e-6,
-                        run.infoBitsPerSecond() * 1e-6, plan.engine().describe(plan.threads())));
+                        run.infoBitsPerSecond() * 1e-6, engine.describe(plan.threads())));
                 for (Path p : written) {
                     out.println("wrote " + p);
                 }

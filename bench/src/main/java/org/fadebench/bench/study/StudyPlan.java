@@ -3,26 +3,31 @@ package org.fadebench.bench.study;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import org.fadebench.bench.run.Engine;
 import org.fadebench.bench.run.RunPlan;
 import org.fadebench.bench.scenario.ScenarioException;
 import org.fadebench.bench.settings.InvalidSettingException;
 import org.fadebench.bench.settings.RunSettings;
+import org.fadebench.bench.settings.Setting;
 import org.fadebench.bench.settings.SettingValues;
 
 /**
  * A checked study: one {@link RunPlan} per design, each writing into {@code DIR/<design>/} exactly
- * what {@code run} writes, on the study's thread count, with the thread count and quietness kept
- * out of its settings (so each design's scenario.yaml is the same on any machine). A design of {@code designs:}
+ * what {@code run} writes, on the study's thread count and engine, with the thread count, the
+ * engine and quietness kept out of its settings (none changes a number, so each design's
+ * scenario.yaml is the same on any machine and engine). A design of {@code designs:}
  * that is invalid is refused; a combination of {@code vary:} that is impossible is skipped with its
  * reason, unless a value is used by no design at all or no design is left.
  *
  * @param file     the study file
  * @param dir      the study's folder
  * @param threads  worker threads of every design
+ * @param engine   who computes every design's batches (one executor serves the whole study)
  * @param designs  the designs to run, in file order
  * @param skipped  the impossible combinations of the grid, with their reasons
  */
-public record StudyPlan(StudyFile file, Path dir, int threads, List<Entry> designs, List<Skipped> skipped) {
+public record StudyPlan(StudyFile file, Path dir, int threads, Engine engine, List<Entry> designs,
+                        List<Skipped> skipped) {
 
     /** A design and its run. */
     public record Entry(StudyFile.Design design, RunPlan plan) {
@@ -53,7 +58,11 @@ public record StudyPlan(StudyFile file, Path dir, int threads, List<Entry> desig
                 : common.isSet(RunSettings.THREADS) ? common.integer(RunSettings.THREADS)
                 : Runtime.getRuntime().availableProcessors();
         boolean silent = quiet || common.flag(RunSettings.QUIET);
-        common = common.with(RunSettings.THREADS, null, null);
+        Engine engine = Engine.from(SettingValues.defaults(RunSettings.all()).overlaidBy(common));
+        for (Setting s : List.of(RunSettings.THREADS, RunSettings.ENGINE, RunSettings.SPARK_MASTER,
+                RunSettings.SPARK_TASKS)) {
+            common = common.with(s, null, null);
+        }
         List<Entry> designs = new ArrayList<>();
         List<Skipped> skipped = new ArrayList<>();
         for (StudyFile.Design d : file.designs()) {
@@ -86,7 +95,7 @@ public record StudyPlan(StudyFile file, Path dir, int threads, List<Entry> desig
                         + ": the value '" + v.text() + "' makes no possible design (e.g. " + example + ")");
             }
         }
-        return new StudyPlan(file, dir, workers, List.copyOf(designs), List.copyOf(skipped));
+        return new StudyPlan(file, dir, workers, engine, List.copyOf(designs), List.copyOf(skipped));
     }
 
 }

@@ -39,7 +39,8 @@ import org.fadebench.bench.sweep.SweepPlan;
  * no core waits for the slowest task of a round. A task computes as many batches as take about
  * {@link #TASK_SECONDS} (timed in the last finished round's tasks), which keeps Spark's cost per
  * task small; but a round at most doubles the batches a point has been given so far, so that a
- * point that needs few frames is not handed many more.
+ * point that needs few frames is not handed many more. A task's batch ids and its results each
+ * travel as one packed value ({@link BatchPack}), not as an object per batch.
  */
 public final class SparkExecutor implements BatchExecutor {
 
@@ -180,14 +181,17 @@ public final class SparkExecutor implements BatchExecutor {
                     }
                     LongAccumulator nanos = spark.sc().longAccumulator("fadebench nanoseconds per batch");
                     BatchTask task = new BatchTask(shared, version, failFirstAttempt, nanos);
-                    inFlight.add(new Round(spark.parallelize(round, Math.min(tasksPerRound, round.size()))
-                            .mapPartitions(task).collectAsync(), nanos));
+                    List<long[]> shares = shares(round);
+                    inFlight.add(new Round(spark.parallelize(shares, shares.size()).mapPartitions(task)
+                            .collectAsync(), nanos));
                 }
                 if (inFlight.isEmpty()) {
                     return;
                 }
                 Round done = inFlight.remove();
-                done.results().get().forEach(feed::done);
+                for (byte[] results : done.results().get()) {
+                    BatchPack.results(results).forEach(feed::done);
+                }
                 perTask = nextPerTask(perTask, done.nanosPerBatch());
             }
         } catch (Exception e) {
@@ -200,7 +204,7 @@ public final class SparkExecutor implements BatchExecutor {
     }
 
     /** A round Spark computes: its batches' results, and the time each batch took in its tasks. */
-    private record Round(JavaFutureAction<List<BatchResult>> results, LongAccumulator nanosPerBatch) {
+    private record Round(JavaFutureAction<List<byte[]>> results, LongAccumulator nanosPerBatch) {
     }
 
     /**
@@ -220,6 +224,21 @@ public final class SparkExecutor implements BatchExecutor {
             round.add(id);
         }
         return round;
+    }
+
+    /**
+     * The round's batches cut into its tasks' shares, consecutive and as even as can be, each
+     * share packed into one value ({@link BatchPack}).
+     */
+    private List<long[]> shares(List<BatchId> round) {
+        int tasks = Math.min(tasksPerRound, round.size());
+        List<long[]> shares = new ArrayList<>(tasks);
+        for (int t = 0; t < tasks; t++) {
+            int from = (int) ((long) t * round.size() / tasks);
+            int to = (int) ((long) (t + 1) * round.size() / tasks);
+            shares.add(BatchPack.ids(round.subList(from, to)));
+        }
+        return shares;
     }
 
     /**
@@ -253,10 +272,11 @@ public final class SparkExecutor implements BatchExecutor {
     }
 
     /**
-     * One task: the batches of one partition, computed by one {@link BatchWorker} from the
-     * broadcast plan; a pure function of the plan and the batch ids.
+     * One task: the batches of one partition, computed by one {@link BatchWorker} of the broadcast
+     * plan (an idle one of an earlier task of the sweep, or a new one); a pure function of the plan
+     * and the batch ids.
      */
-    static final class BatchTask implements FlatMapFunction<Iterator<BatchId>, BatchResult> {
+    static final class BatchTask implements FlatMapFunction<Iterator<long[]>, byte[]> {
         private static final long serialVersionUID = 1L;
 
         private final Broadcast<SweepPlan> plan;
@@ -273,22 +293,63 @@ public final class SparkExecutor implements BatchExecutor {
         }
 
         @Override
-        public Iterator<BatchResult> call(Iterator<BatchId> ids) {
+        public Iterator<byte[]> call(Iterator<long[]> shares) {
             if (!ToolVersion.version().equals(driverVersion)) {
                 throw new IllegalStateException(mismatch(ToolVersion.version(), driverVersion));
             }
-            BatchWorker worker = new BatchWorker(plan.value());
-            List<BatchResult> results = new ArrayList<>();
-            while (ids.hasNext()) {
-                BatchId id = ids.next();
-                if (id.equals(failFirstAttempt) && TaskContext.get().attemptNumber() == 0) {
-                    throw new IllegalStateException("the first attempt of the task of batch " + id + " fails (a test)");
+            SweepPlan sweep = plan.value();
+            BatchWorker worker = IdleWorkers.borrow(sweep);
+            List<byte[]> packed = new ArrayList<>(1);
+            while (shares.hasNext()) {
+                long[] ids = shares.next();
+                List<BatchResult> results = new ArrayList<>(BatchPack.count(ids));
+                for (int i = 0; i < BatchPack.count(ids); i++) {
+                    BatchId id = BatchPack.id(ids, i);
+                    if (id.equals(failFirstAttempt) && TaskContext.get().attemptNumber() == 0) {
+                        throw new IllegalStateException("the first attempt of the task of batch " + id
+                                + " fails (a test)");
+                    }
+                    long start = System.nanoTime();
+                    results.add(worker.compute(id));
+                    nanosPerBatch.add(System.nanoTime() - start);
                 }
-                long start = System.nanoTime();
-                results.add(worker.compute(id));
-                nanosPerBatch.add(System.nanoTime() - start);
+                packed.add(BatchPack.results(results));
             }
-            return results.iterator();
+            IdleWorkers.giveBack(sweep, worker);
+            return packed.iterator();
+        }
+    }
+
+    /**
+     * The workers of this JVM's finished tasks of the current sweep, for its next tasks to reuse: a
+     * worker keeps its frame path's buffers and, with importance sampling, each point's fade scale,
+     * so the scale's pilot runs (8 000 frames a point) are made once per worker and point, not once
+     * per task. Only the latest sweep's workers are kept (a study runs its designs one after
+     * another); a sweep is known by its plan object, which Spark deserialises once per JVM from
+     * the broadcast. A worker's results do not depend on what it computed before, as in the thread
+     * pool.
+     */
+    static final class IdleWorkers {
+        /** The plan the idle workers were built for (the broadcast's value: one object per JVM and sweep). */
+        private static SweepPlan current;
+        private static final Deque<BatchWorker> IDLE = new ArrayDeque<>();
+
+        private IdleWorkers() {
+        }
+
+        static synchronized BatchWorker borrow(SweepPlan plan) {
+            if (plan != current) {
+                IDLE.clear();
+                current = plan;
+            }
+            BatchWorker w = IDLE.poll();
+            return w != null ? w : new BatchWorker(plan);
+        }
+
+        static synchronized void giveBack(SweepPlan plan, BatchWorker worker) {
+            if (plan == current) {
+                IDLE.push(worker);
+            }
         }
     }
 }

@@ -100,13 +100,28 @@ public enum LdpcFamily {
 
     private final String cliName;
     private final Protograph protograph;
-    private final ShiftSearch search;
+    /** The cycles of the template, enumerated on the first lifting asked for (not at start-up). */
+    private volatile ShiftSearch search;
     private final ConcurrentHashMap<Integer, QcBaseMatrix> lifted = new ConcurrentHashMap<>();
 
     LdpcFamily(String cliName, int infoColumns, int parityColumns, int highDegree, int highCount) {
         this.cliName = cliName;
         this.protograph = new Protograph(infoColumns, parityColumns, highDegree, highCount);
-        this.search = new ShiftSearch(protograph.template());
+    }
+
+    /** The shift search of this family's template; built once, on first use. */
+    private ShiftSearch search() {
+        ShiftSearch s = search;
+        if (s == null) {
+            synchronized (this) {
+                s = search;
+                if (s == null) {
+                    s = new ShiftSearch(protograph.template());
+                    search = s;
+                }
+            }
+        }
+        return s;
     }
 
     /** The name on the command line. */
@@ -142,7 +157,7 @@ public enum LdpcFamily {
         if (lifting < 2) {
             throw new IllegalArgumentException("lifting size " + lifting + "; valid: at least 2");
         }
-        return lifted.computeIfAbsent(lifting, z -> new QcBaseMatrix(search.shifts(z), z));
+        return lifted.computeIfAbsent(lifting, z -> new QcBaseMatrix(search().shifts(z), z));
     }
 
     /** The lifting size for k information bits, ⌈k / kb⌉. */

@@ -1,0 +1,113 @@
+package org.fadebench.bench.spark;
+
+import java.io.ByteArrayInputStream;
+import java.io.ByteArrayOutputStream;
+import java.io.DataInputStream;
+import java.io.DataOutputStream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.fadebench.bench.link.FrameCounters;
+import org.fadebench.bench.sweep.BatchId;
+import org.fadebench.bench.sweep.BatchResult;
+
+/**
+ * A task's batches and their results as one value each, not one serialised object per batch.
+ * Spark sends a task's data and results through Java serialisation; thousands of small objects a
+ * round make its reflective writer and reader hot, and the JIT then spends seconds of a core
+ * compiling them (seen in a flight recording of a sweep on {@code local[2]}). Here a task's batch
+ * ids travel as one {@code long[]} and its results as one {@code byte[]}, whose contents are the
+ * counts of {@link FrameCounters#byName()} (the names and order the checkpoint uses) with every
+ * value's exact bits.
+ */
+final class BatchPack {
+
+    private static final byte WHOLE = 'L';
+    private static final byte REAL = 'D';
+
+    private BatchPack() {
+    }
+
+    /** The batch ids as (point, batch) pairs. */
+    static long[] ids(List<BatchId> ids) {
+        long[] packed = new long[2 * ids.size()];
+        for (int i = 0; i < ids.size(); i++) {
+            packed[2 * i] = ids.get(i).point();
+            packed[2 * i + 1] = ids.get(i).batch();
+        }
+        return packed;
+    }
+
+    /** Batch {@code i} of {@link #ids(List)}'s array. */
+    static BatchId id(long[] packed, int i) {
+        return new BatchId((int) packed[2 * i], packed[2 * i + 1]);
+    }
+
+    /** How many batch ids {@link #ids(List)}'s array holds. */
+    static int count(long[] packed) {
+        return packed.length / 2;
+    }
+
+    /** The results, in order, as bytes that {@link #results(byte[])} reads back exactly. */
+    static byte[] results(List<BatchResult> results) {
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream(256 * results.size() + 4);
+        try (DataOutputStream out = new DataOutputStream(bytes)) {
+            out.writeInt(results.size());
+            for (BatchResult r : results) {
+                out.writeInt(r.id().point());
+                out.writeLong(r.id().batch());
+                Map<String, Number> counts = r.counts().byName();
+                out.writeInt(counts.size());
+                for (Map.Entry<String, Number> e : counts.entrySet()) {
+                    out.writeUTF(e.getKey());
+                    if (e.getValue() instanceof Double d) {
+                        out.writeByte(REAL);
+                        out.writeLong(Double.doubleToRawLongBits(d));
+                    } else {
+                        out.writeByte(WHOLE);
+                        out.writeLong(e.getValue().longValue());
+                    }
+                }
+                double[] channels = r.channels();
+                out.writeInt(channels.length);
+                for (double v : channels) {
+                    out.writeLong(Double.doubleToRawLongBits(v));
+                }
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return bytes.toByteArray();
+    }
+
+    /** The results {@link #results(List)} packed. */
+    static List<BatchResult> results(byte[] packed) {
+        try (DataInputStream in = new DataInputStream(new ByteArrayInputStream(packed))) {
+            int n = in.readInt();
+            List<BatchResult> results = new ArrayList<>(n);
+            for (int i = 0; i < n; i++) {
+                BatchId id = new BatchId(in.readInt(), in.readLong());
+                int names = in.readInt();
+                Map<String, Number> counts = new LinkedHashMap<>();
+                for (int j = 0; j < names; j++) {
+                    String name = in.readUTF();
+                    byte kind = in.readByte();
+                    long bits = in.readLong();
+                    counts.put(name, kind == REAL ? (Number) Double.longBitsToDouble(bits) : (Number) bits);
+                }
+                double[] channels = new double[in.readInt()];
+                for (int j = 0; j < channels.length; j++) {
+                    channels[j] = Double.longBitsToDouble(in.readLong());
+                }
+                results.add(new BatchResult(id, FrameCounters.of(counts), channels));
+            }
+            return results;
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}
