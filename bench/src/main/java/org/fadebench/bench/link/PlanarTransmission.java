@@ -42,11 +42,12 @@ final class PlanarTransmission extends Transmission {
         this.received = new double[2 * slots * settings.receiveAntennas()][blocks];
     }
 
-    /** Bytes of the planes and gains the constructor allocates. */
+    /** Bytes of the planes and gains the constructor allocates (the grid's as its kernel makes them). */
     static long bufferBytes(LinkSettings settings) {
         SpaceTimeCode code = settings.code();
-        long planes = 5L * code.symbolsPerBlock()
-                + 2L * code.slotsPerBlock() * (settings.transmitAntennas() + settings.receiveAntennas());
+        int gridPlanes = 2 * code.slotsPerBlock() * settings.transmitAntennas();
+        long grid = code.newPlanarKernel(settings.receiveAntennas()).orElseThrow().gridArrays(gridPlanes);
+        long planes = 5L * code.symbolsPerBlock() + grid + 2L * code.slotsPerBlock() * settings.receiveAntennas();
         return 8 * planes * settings.blocksPerFrame();
     }
 

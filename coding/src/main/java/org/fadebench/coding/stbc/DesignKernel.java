@@ -184,14 +184,28 @@ public final class DesignKernel implements PlanarKernel {
      */
     @Override
     public double[][] newGrid(int gridPlanes, int blocks) {
-        if (gridPlanes != source.length) {
-            throw new IllegalArgumentException("grid planes: the code has " + source.length + ", got " + gridPlanes);
-        }
+        checkGridPlanes(gridPlanes);
         double[][] grid = new double[gridPlanes][];
         for (int p = 0; p < gridPlanes; p++) {
             grid[p] = first[p] == p ? new double[blocks] : grid[first[p]];
         }
         return grid;
+    }
+
+    @Override
+    public int gridArrays(int gridPlanes) {
+        checkGridPlanes(gridPlanes);
+        int arrays = 0;
+        for (int p = 0; p < gridPlanes; p++) {
+            arrays += first[p] == p ? 1 : 0;
+        }
+        return arrays;
+    }
+
+    private void checkGridPlanes(int gridPlanes) {
+        if (gridPlanes != source.length) {
+            throw new IllegalArgumentException("grid planes: the code has " + source.length + ", got " + gridPlanes);
+        }
     }
 
     /**

@@ -26,6 +26,11 @@ public interface PlanarKernel {
         return new double[gridPlanes][blocks];
     }
 
+    /** How many arrays {@link #newGrid} makes for {@code gridPlanes} planes. */
+    default int gridArrays(int gridPlanes) {
+        return gridPlanes;
+    }
+
     /** Takes the channel matrix (Nr x Mt, interleaved complex, row-major) for the blocks that follow. */
     void setChannel(double[] h);
 
