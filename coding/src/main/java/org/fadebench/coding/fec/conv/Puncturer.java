@@ -18,6 +18,8 @@ public final class Puncturer implements Serializable {
     private final boolean[] keep;
     /** keptBefore[c]: bits sent by columns 0 .. c-1 of one period. */
     private final int[] keptBefore;
+    /** Whether every output bit is sent (the stream is copied as it is). */
+    private final boolean keepsAll;
 
     /**
      * @param code    the mother code
@@ -63,6 +65,7 @@ public final class Puncturer implements Serializable {
             }
             keptBefore[c + 1] = keptBefore[c] + kept;
         }
+        this.keepsAll = keptBefore[p] == p * n;
     }
 
     /** No puncturing: every coded bit is sent. */
@@ -108,6 +111,11 @@ public final class Puncturer implements Serializable {
      * @return the number of bits written, {@link #codedBits(int) codedBits(k)}
      */
     public int puncture(byte[] mother, int off, int infoBits, byte[] out, int outOff) {
+        if (keepsAll) {
+            int bits = code.codedBits(infoBits);
+            System.arraycopy(mother, off, out, outOff, bits);
+            return bits;
+        }
         int o = outOff;
         int p = 0;
         for (int m = off, end = off + code.codedBits(infoBits); m < end; m++) {
@@ -125,6 +133,10 @@ public final class Puncturer implements Serializable {
      * {@code mother[motherOff ..]}, with 0 at every removed position.
      */
     public void depuncture(double[] llr, int off, int infoBits, double[] mother, int motherOff) {
+        if (keepsAll) {
+            System.arraycopy(llr, off, mother, motherOff, code.codedBits(infoBits));
+            return;
+        }
         int l = off;
         int p = 0;
         for (int m = motherOff, end = motherOff + code.codedBits(infoBits); m < end; m++) {

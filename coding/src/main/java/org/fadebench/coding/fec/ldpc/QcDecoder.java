@@ -51,10 +51,13 @@ final class QcDecoder extends LayeredDecoder {
      * shift of its last block in the schedule), the turn channel values and decisions are kept at.
      */
     private final int[] turn;
-    /** Per column of H: its place in the group's rows (base column · Z·WIDTH + turned row · WIDTH). */
-    private final int[] slot;
+    /** Per column of H: its base column, whose rows hold it. */
+    private final int[] columnBlock;
+    /** Per column of H: its place in its base column's rows (turned row · WIDTH, at the home turn). */
+    private final int[] columnAt;
     private final MinSumLoops.Correction correction;
-    private final int[][] channel;
+    /** Per group and base column: the channel values of its lanes as [turned row][lane], at the home turn. */
+    private final int[][][] channel;
     /** Per group and base column: the posteriors of its lanes when they finished, at the home turn. */
     private final int[][][] decided;
     /** Per base column: its posteriors as [turned row][lane] (row z holds position z + turn mod Z). */
@@ -102,20 +105,23 @@ final class QcDecoder extends LayeredDecoder {
         for (int b = 0; b < blocks; b++) {
             turn[blockColumn[b]] = blockShift[b];
         }
-        slot = new int[columns];
+        columnBlock = new int[columns];
+        columnAt = new int[columns];
         for (int c = 0; c < columns; c++) {
             int j = qc.position(c) / lifting;
             int z = qc.position(c) % lifting;
-            slot[c] = j * slice + Math.floorMod(z - turn[j], lifting) * WIDTH;
+            columnBlock[c] = j;
+            columnAt[c] = Math.floorMod(z - turn[j], lifting) * WIDTH;
         }
         correction = MinSumLoops.Correction.of(decoding);
         int groups = groups(lanes);
-        int frame = baseColumns * slice;
-        channel = new int[groups][frame];
-        for (int[] group : channel) {
-            Arrays.fill(group, SHORTENED);
+        channel = new int[groups][baseColumns][slice];
+        for (int[][] group : channel) {
+            for (int[] row : group) {
+                Arrays.fill(row, SHORTENED);
+            }
             for (int c = 0; c < columns; c++) {
-                Arrays.fill(group, slot[c], slot[c] + WIDTH, 0);
+                Arrays.fill(group[columnBlock[c]], columnAt[c], columnAt[c] + WIDTH, 0);
             }
         }
         decided = new int[groups][baseColumns][slice];
@@ -158,9 +164,8 @@ final class QcDecoder extends LayeredDecoder {
         int blocks = blocks(base);
         int groups = groups(lanes);
         return sharedBytes(lanes) + Lanes.rowBytes(4L * (base.baseRows() + 1)) + 2 * Lanes.rowBytes(4L * blocks)
-                + 2 * Lanes.rowBytes(4L * base.baseColumns()) + Lanes.rowBytes(4L * qc.columns())
-                + Lanes.rowBytes(4L * groups) + groups * Lanes.rowBytes(base.baseColumns() * slice)
-                + Lanes.rowBytes(4L * groups) + groups * columnRows + columnRows
+                + 2 * Lanes.rowBytes(4L * base.baseColumns()) + 2 * Lanes.rowBytes(4L * qc.columns())
+                + 2 * (Lanes.rowBytes(4L * groups) + groups * columnRows) + columnRows
                 + Lanes.rowBytes(4L * blocks) + blocks * Lanes.rowBytes(slice) + 9 * Lanes.rowBytes(slice)
                 + MinSumLoops.Group.bytes(base.lifting() * WIDTH)
                 + 2 * Lanes.rowBytes(WIDTH) + Lanes.rowBytes(4L * WIDTH);
@@ -173,7 +178,7 @@ final class QcDecoder extends LayeredDecoder {
     @Override
     public void load(int lane, double[] llr, int off) {
         Lanes.checkLane(lane, lanes);
-        int[] group = channel[lane / WIDTH];
+        int[][] group = channel[lane / WIDTH];
         int w = lane % WIDTH;
         if (lane < WIDTH) {
             loaded[lane] = false;
@@ -183,7 +188,7 @@ final class QcDecoder extends LayeredDecoder {
             if (!Double.isFinite(value)) {
                 throw notFinite(lane, c, value);
             }
-            group[slot[c] + w] = FixedPointDecoder.quantise(value);
+            group[columnBlock[c]][columnAt[c] + w] = FixedPointDecoder.quantise(value);
         }
         if (lane < WIDTH) {
             loaded[lane] = true;
@@ -192,8 +197,7 @@ final class QcDecoder extends LayeredDecoder {
 
     @Override
     int decision(int lane, int column) {
-        int at = slot[column] + lane % WIDTH;
-        return decided[lane / WIDTH][at / slice][at % slice] >>> 31;
+        return decided[lane / WIDTH][columnBlock[column]][columnAt[column] + lane % WIDTH] >>> 31;
     }
 
     @Override
@@ -203,7 +207,7 @@ final class QcDecoder extends LayeredDecoder {
         for (int g = 0; g * WIDTH < frames; g++) {
             int n = Math.min(WIDTH, frames - g * WIDTH);
             for (int j = 0; j < baseColumns; j++) {
-                System.arraycopy(channel[g], j * slice, posterior[j], 0, slice);
+                System.arraycopy(channel[g][j], 0, posterior[j], 0, slice);
             }
             for (int[] row : check) {
                 Arrays.fill(row, 0);
@@ -233,11 +237,19 @@ final class QcDecoder extends LayeredDecoder {
     @Override
     public int advance(int[] finished) {
         int started = 0;
-        for (int w = 0; w < continuousLanes(); w++) {
+        boolean starting = false;
+        for (int w = 0; w < WIDTH; w++) {
+            mask[w] = loaded[w] ? -1 : 0;
             if (loaded[w]) {
-                start(w);
+                starting = true;
+                loaded[w] = false;
+                active[w] = true;
+                done[w] = 0;
             }
             started += active[w] ? 1 : 0;
+        }
+        if (starting) {
+            start();
         }
         decodedLanes = continuousLanes();
         int count = 0;
@@ -247,22 +259,34 @@ final class QcDecoder extends LayeredDecoder {
         return count;
     }
 
-    /** Lane w of group 0 from its channel values: posteriors, messages 0, running, no iteration done. */
-    private void start(int w) {
-        int[] values = channel[0];
+    /**
+     * The lanes of group 0 where {@code mask[0 .. WIDTH)} is −1 from their channel values:
+     * posteriors from the channel, messages 0. One pass over each row for all of them, with the
+     * mask spread over the row (a lane's values are every {@value #WIDTH}th int, one per cache
+     * line, so a pass per lane would touch every line of the working set once per lane).
+     */
+    private void start() {
+        spreadMask();
         for (int j = 0; j < baseColumns; j++) {
-            for (int x = w; x < slice; x += WIDTH) {
-                posterior[j][x] = values[j * slice + x];
-            }
+            MinSumLoops.keep(channel[0][j], posterior[j], mask, slice);
         }
         for (int[] row : check) {
-            for (int x = w; x < slice; x += WIDTH) {
-                row[x] = 0;
-            }
+            clear(row, mask, slice);
         }
-        loaded[w] = false;
-        active[w] = true;
-        done[w] = 0;
+    }
+
+    /** {@code mask[0 .. WIDTH)}, one value per lane, repeated over the whole row. */
+    private void spreadMask() {
+        for (int at = WIDTH; at < slice; at += WIDTH) {
+            System.arraycopy(mask, 0, mask, at, WIDTH);
+        }
+    }
+
+    /** row = 0 where mask is −1, unchanged where 0. */
+    private static void clear(int[] row, int[] mask, int len) {
+        for (int x = 0; x < len; x++) {
+            row[x] &= ~mask[x];
+        }
     }
 
     /**
@@ -309,9 +333,7 @@ final class QcDecoder extends LayeredDecoder {
             }
         }
         if (count > 0) {
-            for (int at = WIDTH; at < slice; at += WIDTH) {
-                System.arraycopy(mask, 0, mask, at, WIDTH);
-            }
+            spreadMask();
             for (int j = 0; j < baseColumns; j++) {
                 MinSumLoops.keep(posterior[j], decided[group][j], mask, slice);
             }

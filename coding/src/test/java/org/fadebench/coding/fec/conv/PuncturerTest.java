@@ -53,6 +53,45 @@ class PuncturerTest {
         assertEquals("[1 1; 1 0]", PuncturedCode.CONV_R23.puncturer().toString());
     }
 
+    /**
+     * Every built-in code, unpunctured ones (copied whole) included, with the streams at offsets and
+     * sizes that end inside a period: puncturing sends exactly the pattern's kept bits in order,
+     * depuncturing puts each LLR back at its bit and 0 at every removed one.
+     */
+    @Test
+    void everyCodeSendsThePatternsBitsInOrder() {
+        java.util.Random random = new java.util.Random(3);
+        for (PuncturedCode code : new PuncturedCode[] {PuncturedCode.CONV_R12, PuncturedCode.CONV_R23,
+            PuncturedCode.CONV_R34, PuncturedCode.CONV_SMALL}) {
+            Puncturer p = code.puncturer();
+            int n = p.code().outputs();
+            for (int k : new int[] {20, 21, 22, 1024}) {
+                int motherBits = p.code().codedBits(k);
+                byte[] mother = CrcTest.randomBits(random, 3 + motherBits);
+                byte[] sent = new byte[5 + p.codedBits(k)];
+                assertEquals(p.codedBits(k), p.puncture(mother, 3, k, sent, 5));
+                double[] received = new double[2 + p.codedBits(k)];
+                for (int i = 0; i < p.codedBits(k); i++) {
+                    received[2 + i] = (i + 1) * (1 - 2 * sent[5 + i]);
+                }
+                double[] llr = new double[4 + motherBits];
+                p.depuncture(received, 2, k, llr, 4);
+                int next = 0;
+                for (int m = 0; m < motherBits; m++) {
+                    String where = code + " k " + k + " position " + m;
+                    if (p.keeps((m / n) % p.period(), m % n)) {
+                        assertEquals(mother[3 + m], sent[5 + next], where);
+                        next++;
+                        assertEquals(next * (1 - 2 * mother[3 + m]), llr[4 + m], 0, where);
+                    } else {
+                        assertEquals(0, llr[4 + m], 0, where);
+                    }
+                }
+                assertEquals(p.codedBits(k), next, code + " k " + k);
+            }
+        }
+    }
+
     @Test
     void patternsThatDoNotFitAreNamed() {
         assertEquals("puncturing pattern has 3 rows but code K=7 (133, 171)_8 has 2 outputs; need one row per output",
