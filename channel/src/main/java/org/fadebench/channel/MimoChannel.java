@@ -1,7 +1,5 @@
 package org.fadebench.channel;
 
-import java.util.Arrays;
-
 /**
  * The flat MIMO channel over a run of slots with one channel matrix: for each slot τ and receive
  * antenna r, {@code y[τ][r] = Σ_t H[r][t] · x[τ][t] + n}, with n ~ CN(0, n0). In matrix form
@@ -108,9 +106,10 @@ public final class MimoChannel {
     /**
      * {@link #apply} on planar arrays as {@link #applyTwoTransmittersPlanar} lays them out, for any
      * number of transmit antennas but two (which that method serves): the same noise draws and, per
-     * element, the sums of the interleaved {@code addGeneral} (with one antenna its sum 0 + p is the
-     * single-antenna product p), four antennas a pass. Above four antennas the sum runs in
-     * {@code sum}, a work plane of at least {@code from + rows} entries.
+     * element, the sum of the interleaved {@code addGeneral}, 0 + p_0 + … + p_Mt−1 in that order,
+     * added to the noise. The sum runs in {@code sum}, a work plane of at least {@code from + rows}
+     * entries, two antennas a pass: a loop of four planes, which C2 vectorises (one of eight
+     * planes, four antennas a pass, it does not); the last pass adds the sum to the noise.
      */
     public static void applyPlanar(double[] h, int nr, int mt, double[][] x, int from, int rows, double n0,
                                    Draws draws, double[][] y, double[] sum) {
@@ -120,21 +119,21 @@ public final class MimoChannel {
                     + " and " + y.length);
         }
         draws.fillGaussian(y, from, rows, Math.sqrt(0.5 * n0));
+        int end = from + rows;
         for (int tau = 0; tau < slots; tau++) {
             for (int r = 0; r < nr; r++) {
                 for (int part = 0; part < 2; part++) {
                     double[] yp = y[2 * (tau * nr + r) + part];
-                    if (mt <= 4) {
-                        addFour(yp, true, h, 2 * r * mt, x, 2 * tau * mt, mt, part, from, rows);
-                        continue;
+                    for (int t = 0; t < mt; t += 2) {
+                        // the sum's last pass adds it to the noise, unless it is also the first
+                        double[] into = t > 0 && t + 2 >= mt ? yp : null;
+                        addTwo(sum, t == 0, into, h, 2 * (r * mt + t), x, 2 * (tau * mt + t), Math.min(2, mt - t),
+                                part, from, end);
                     }
-                    Arrays.fill(sum, from, from + rows, 0.0);
-                    for (int t = 0; t < mt; t += 4) {
-                        addFour(sum, false, h, 2 * (r * mt + t), x, 2 * (tau * mt + t), Math.min(4, mt - t), part,
-                                from, rows);
-                    }
-                    for (int i = from; i < from + rows; i++) {
-                        yp[i] += sum[i];
+                    if (mt <= 2) {
+                        for (int i = from; i < end; i++) {
+                            yp[i] += sum[i];
+                        }
                     }
                 }
             }
@@ -142,56 +141,36 @@ public final class MimoChannel {
     }
 
     /**
-     * The products p_t (real part for part 0, imaginary for 1) of {@code count} (1 to 4) antennas:
-     * h from {@code h[ho]}, x in planes {@code xp, xp+1, …}, rows {@code from ..}. Whole: the sum
-     * of addGeneral, y += 0 + p_0 + … + p_count−1; else acc += p_0 + … in that order. Missing
-     * antennas count as h = 0, whose products are exact zeros and change no sum.
+     * Adds the products p_t (real part for part 0, imaginary for 1) of {@code count} (1 or 2)
+     * antennas to the sum {@code acc}, or to 0 when {@code start}, and keeps the sum in
+     * {@code acc}, or adds it to {@code into} when that is not null (and not {@code start}): h from
+     * {@code h[ho]}, x in planes {@code xp, xp+1, …}. The real part hr·xr − hi·xi is summed as
+     * hr·xr + (−hi)·xi, the same number. A missing second antenna counts as h = 0, whose products
+     * are exact zeros and change no sum (which never is −0, having started from +0).
      */
-    private static void addFour(double[] acc, boolean whole, double[] h, int ho, double[][] x, int xp, int count,
-                                int part, int from, int rows) {
-        double h0r = h[ho];
-        double h0i = h[ho + 1];
-        double h1r = count > 1 ? h[ho + 2] : 0.0;
-        double h1i = count > 1 ? h[ho + 3] : 0.0;
-        double h2r = count > 2 ? h[ho + 4] : 0.0;
-        double h2i = count > 2 ? h[ho + 5] : 0.0;
-        double h3r = count > 3 ? h[ho + 6] : 0.0;
-        double h3i = count > 3 ? h[ho + 7] : 0.0;
-        // real part: hr·xr − hi·xi, a = xr, b = xi; imaginary: hr·xi + hi·xr, a = xi, b = xr
-        int own = part;
-        int other = 1 - part;
-        double[] a0 = x[xp + own];
-        double[] b0 = x[xp + other];
-        double[] a1 = count > 1 ? x[xp + 2 + own] : a0;
-        double[] b1 = count > 1 ? x[xp + 2 + other] : b0;
-        double[] a2 = count > 2 ? x[xp + 4 + own] : a0;
-        double[] b2 = count > 2 ? x[xp + 4 + other] : b0;
-        double[] a3 = count > 3 ? x[xp + 6 + own] : a0;
-        double[] b3 = count > 3 ? x[xp + 6 + other] : b0;
-        int end = from + rows;
-        if (part == 0) {
-            if (whole) {
-                for (int i = from; i < end; i++) {
-                    acc[i] += 0.0 + (h0r * a0[i] - h0i * b0[i]) + (h1r * a1[i] - h1i * b1[i])
-                            + (h2r * a2[i] - h2i * b2[i]) + (h3r * a3[i] - h3i * b3[i]);
-                }
-            } else {
-                for (int i = from; i < end; i++) {
-                    acc[i] = acc[i] + (h0r * a0[i] - h0i * b0[i]) + (h1r * a1[i] - h1i * b1[i])
-                            + (h2r * a2[i] - h2i * b2[i]) + (h3r * a3[i] - h3i * b3[i]);
-                }
+    private static void addTwo(double[] acc, boolean start, double[] into, double[] h, int ho, double[][] x, int xp,
+                               int count, int part, int from, int end) {
+        // real part: hr·xr + (−hi)·xi, a = xr, b = xi; imaginary: hr·xi + hi·xr, a = xi, b = xr
+        double sign = part == 0 ? -1.0 : 1.0;
+        double c0 = h[ho];
+        double d0 = sign * h[ho + 1];
+        double c1 = count > 1 ? h[ho + 2] : 0.0;
+        double d1 = count > 1 ? sign * h[ho + 3] : 0.0;
+        double[] a0 = x[xp + part];
+        double[] b0 = x[xp + 1 - part];
+        double[] a1 = count > 1 ? x[xp + 2 + part] : a0;
+        double[] b1 = count > 1 ? x[xp + 3 - part] : b0;
+        if (start) {
+            for (int i = from; i < end; i++) {
+                acc[i] = 0.0 + (c0 * a0[i] + d0 * b0[i]) + (c1 * a1[i] + d1 * b1[i]);
+            }
+        } else if (into != null) {
+            for (int i = from; i < end; i++) {
+                into[i] = into[i] + (acc[i] + (c0 * a0[i] + d0 * b0[i]) + (c1 * a1[i] + d1 * b1[i]));
             }
         } else {
-            if (whole) {
-                for (int i = from; i < end; i++) {
-                    acc[i] += 0.0 + (h0r * a0[i] + h0i * b0[i]) + (h1r * a1[i] + h1i * b1[i])
-                            + (h2r * a2[i] + h2i * b2[i]) + (h3r * a3[i] + h3i * b3[i]);
-                }
-            } else {
-                for (int i = from; i < end; i++) {
-                    acc[i] = acc[i] + (h0r * a0[i] + h0i * b0[i]) + (h1r * a1[i] + h1i * b1[i])
-                            + (h2r * a2[i] + h2i * b2[i]) + (h3r * a3[i] + h3i * b3[i]);
-                }
+            for (int i = from; i < end; i++) {
+                acc[i] = acc[i] + (c0 * a0[i] + d0 * b0[i]) + (c1 * a1[i] + d1 * b1[i]);
             }
         }
     }

@@ -44,34 +44,41 @@ class LinkChannelTest {
     }
 
     /**
-     * The planar transmit (two antennas, block fading) writes exactly the interleaved transmit's
-     * numbers, from the same draws: the received planes are the interleaved output read as rows of
-     * one code block (T = 2 slots), and both streams end at the same place. An exact claim, checked
-     * without tolerance.
+     * The planar transmit (block fading; two antennas by their own method, 1 and 3 to 8 by the
+     * general one, whose odd counts end on a single antenna) writes exactly the interleaved
+     * transmit's numbers, from the same draws: the received planes are the interleaved output read
+     * as rows of one code block (T = 2 slots), and both streams end at the same place. Some grid
+     * entries are exact zeros, as in the orthogonal designs. An exact claim, checked without
+     * tolerance.
      */
     @Test
     void planarTransmitEqualsInterleaved() {
-        for (int nr = 1; nr <= 3; nr++) {
-            int slots = 6;
-            int from = 2;
-            double[] x = new double[2 * 2 * slots];
-            Draws.of(3).fillGaussian(x, 0, x.length, 1.0);
-            double[] y = new double[2 * nr * slots];
-            double[][] yPlanes = new double[4 * nr][from + slots / 2];
-            double[][] xPlanes = planes(x, 8, from);
-            LinkChannel general = ChannelSpec.of(Fading.RAYLEIGH).withCsiError(0.1).newLinkChannel(nr, 2, slots);
-            LinkChannel planar = ChannelSpec.of(Fading.RAYLEIGH).withCsiError(0.1).newLinkChannel(nr, 2, slots);
-            Draws generalDraws = Draws.of(4);
-            Draws planarDraws = Draws.of(4);
-            general.startBlock(generalDraws, 0, slots);
-            planar.startBlock(planarDraws, 0, slots);
-            general.transmit(x, 0, 2, 0.3, generalDraws, y, 0);
-            planar.transmit(xPlanes, from, 0.3, planarDraws, yPlanes);
-            double[][] expected = planes(y, 4 * nr, from);
-            for (int j = 0; j < expected.length; j++) {
-                assertArrayEquals(expected[j], yPlanes[j], "nr " + nr + " plane " + j);
+        for (int mt : new int[] {1, 2, 3, 4, 5, 8}) {
+            for (int nr = 1; nr <= 3; nr++) {
+                int slots = 6;
+                int from = 2;
+                double[] x = new double[2 * mt * slots];
+                Draws.of(3).fillGaussian(x, 0, x.length, 1.0);
+                for (int i = 0; i < x.length; i += 7) {
+                    x[i] = 0.0;
+                }
+                double[] y = new double[2 * nr * slots];
+                double[][] yPlanes = new double[4 * nr][from + slots / 2];
+                double[][] xPlanes = planes(x, 4 * mt, from);
+                LinkChannel general = ChannelSpec.of(Fading.RAYLEIGH).withCsiError(0.1).newLinkChannel(nr, mt, slots);
+                LinkChannel planar = ChannelSpec.of(Fading.RAYLEIGH).withCsiError(0.1).newLinkChannel(nr, mt, slots);
+                Draws generalDraws = Draws.of(4);
+                Draws planarDraws = Draws.of(4);
+                general.startBlock(generalDraws, 0, slots);
+                planar.startBlock(planarDraws, 0, slots);
+                general.transmit(x, 0, 2, 0.3, generalDraws, y, 0);
+                planar.transmit(xPlanes, from, 0.3, planarDraws, yPlanes);
+                double[][] expected = planes(y, 4 * nr, from);
+                for (int j = 0; j < expected.length; j++) {
+                    assertArrayEquals(expected[j], yPlanes[j], "mt " + mt + ", nr " + nr + ", plane " + j);
+                }
+                assertEquals(generalDraws.gaussian(), planarDraws.gaussian());
             }
-            assertEquals(generalDraws.gaussian(), planarDraws.gaussian());
         }
         LinkChannel whole = ChannelSpec.of(Fading.RAYLEIGH).newLinkChannel(1, 2, 6);
         whole.startBlock(Draws.of(1), 0, 6);

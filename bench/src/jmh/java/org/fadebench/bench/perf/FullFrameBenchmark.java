@@ -17,9 +17,12 @@ import org.openjdk.jmh.annotations.Warmup;
 
 /**
  * One idea: the whole frame, hard decisions, per-frame Rayleigh fading, at 15 dB, 512 symbols:
- * Alamouti 2x2 16-QAM and G4 4x1 QPSK (each link in its own state, so one benchmark's code does
- * not shape the other's compilation). Score: data QAM symbols per second on one thread. Run with
- * {@code -prof gc} to see bytes allocated per frame (expected: 0 in steady state).
+ * Alamouti 2x2 16-QAM and G4 4x1 QPSK, both 4 Gaussian draws per symbol (each link in its own
+ * state, so one benchmark's code does not shape the other's compilation); beside them the
+ * heaviest orthogonal design, rate 1/2 on 8 antennas with one receive antenna (also 4 draws per
+ * symbol), and H4 4x1 QPSK (rate 3/4, 8/3 draws per symbol, 513 symbols: whole code blocks).
+ * Score: data QAM symbols per second on one thread. Run with {@code -prof gc} to see bytes
+ * allocated per frame (expected: 0 in steady state).
  */
 @Warmup(iterations = 4, time = 1)
 public class FullFrameBenchmark extends ThroughputBenchmark {
@@ -35,8 +38,12 @@ public class FullFrameBenchmark extends ThroughputBenchmark {
         final double n0 = Math.pow(10, -1.5);
 
         void set(Modulation mod, SpaceTimeCode code, int rx) {
+            set(mod, code, rx, SYMBOLS);
+        }
+
+        void set(Modulation mod, SpaceTimeCode code, int rx, int symbols) {
             chain = new LinkChain(new LinkSettings(mod, code, rx, code.transmitAntennas(), Fading.RAYLEIGH,
-                    SYMBOLS * mod.bitsPerSymbol(), 0));
+                    symbols * mod.bitsPerSymbol(), 0));
             draws = Draws.of(1, 0, 0);
             counters = new FrameCounters();
         }
@@ -63,6 +70,25 @@ public class FullFrameBenchmark extends ThroughputBenchmark {
         }
     }
 
+    @State(Scope.Thread)
+    public static class R12x8x1Qpsk extends Link {
+        @Setup
+        public void setUp() {
+            set(Modulation.QPSK, SpaceTimeCodes.R12_8, 1);
+        }
+    }
+
+    /** Whole code blocks of H4 (3 symbols each) nearest 512 symbols. */
+    static final int H4_SYMBOLS = 513;
+
+    @State(Scope.Thread)
+    public static class H4x1Qpsk extends Link {
+        @Setup
+        public void setUp() {
+            set(Modulation.QPSK, SpaceTimeCodes.H4, 1, H4_SYMBOLS);
+        }
+    }
+
     @Benchmark
     @OperationsPerInvocation(SYMBOLS)
     public long alamouti2x2Qam16Frame(Alamouti2x2Qam16 link) {
@@ -72,6 +98,18 @@ public class FullFrameBenchmark extends ThroughputBenchmark {
     @Benchmark
     @OperationsPerInvocation(SYMBOLS)
     public long g4x1QpskFrame(G4x1Qpsk link) {
+        return link.run();
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(SYMBOLS)
+    public long r12x8x1QpskFrame(R12x8x1Qpsk link) {
+        return link.run();
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(H4_SYMBOLS)
+    public long h4x1QpskFrame(H4x1Qpsk link) {
         return link.run();
     }
 }

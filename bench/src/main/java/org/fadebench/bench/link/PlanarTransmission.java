@@ -38,15 +38,16 @@ final class PlanarTransmission extends Transmission {
         this.estimates = new double[2 * code.symbolsPerBlock()][blocks];
         this.gain = new double[code.symbolsPerBlock()][blocks];
         this.bitsPerSymbol = settings.modulation().bitsPerSymbol();
-        this.grid = new double[2 * slots * settings.transmitAntennas()][blocks];
+        this.grid = kernel.newGrid(2 * slots * settings.transmitAntennas(), blocks);
         this.received = new double[2 * slots * settings.receiveAntennas()][blocks];
     }
 
-    /** Bytes of the planes and gains the constructor allocates. */
+    /** Bytes of the planes and gains the constructor allocates (the grid's as its kernel makes them). */
     static long bufferBytes(LinkSettings settings) {
         SpaceTimeCode code = settings.code();
-        long planes = 5L * code.symbolsPerBlock()
-                + 2L * code.slotsPerBlock() * (settings.transmitAntennas() + settings.receiveAntennas());
+        int gridPlanes = 2 * code.slotsPerBlock() * settings.transmitAntennas();
+        long grid = code.newPlanarKernel(settings.receiveAntennas()).orElseThrow().gridArrays(gridPlanes);
+        long planes = 5L * code.symbolsPerBlock() + grid + 2L * code.slotsPerBlock() * settings.receiveAntennas();
         return 8 * planes * settings.blocksPerFrame();
     }
 

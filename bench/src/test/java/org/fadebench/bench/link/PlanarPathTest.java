@@ -213,6 +213,8 @@ class PlanarPathTest {
             assertEquals(code != SpaceTimeCodes.NONE, code.hasPlanarKernel(), code.name());
         }
         assertTrue(FILE_CODE.hasPlanarKernel());
+        assertTrue(TURNED_CODE.isOrthogonal());
+        assertTrue(TURNED_CODE.hasPlanarKernel());
         // two symbols in one slot on two antennas (spatial multiplexing): not orthogonal
         SpaceTimeCode multiplexing = SpaceTimeCodeFile.parse(String.join("\n", "name: \"two-streams\"", "tx: 2",
                 "slots: 1", "symbols:", "  - real: [[\"1\", \"0\"]]", "    imag: [[\"1j\", \"0\"]]",
@@ -225,6 +227,20 @@ class PlanarPathTest {
     private static final SpaceTimeCode FILE_CODE = SpaceTimeCodeFile.parse(
             SpaceTimeCodeFile.format(SpaceTimeCodes.H3).replace("h3", "h3-from-file"), "test");
 
+    /**
+     * H3 with its second antenna turned by j (X·diag(1, j, 1): X^H X is unchanged, so it stays
+     * orthogonal): grid entries ±j·s_k and ±j·s_k*, whose dispersion entries are imaginary, a
+     * structure no catalogue code has. An own example of this suite.
+     */
+    private static final SpaceTimeCode TURNED_CODE = SpaceTimeCodeFile.parse(String.join("\n",
+            "name: \"h3-turned\"", "tx: 3", "slots: 4", "symbols:",
+            "  - real: [[1, 0, 0], [0, \"j\", 0], [0, 0, 1], [0, 0, 0]]",
+            "    imag: [[\"j\", 0, 0], [0, 1, 0], [0, 0, \"-j\"], [0, 0, 0]]",
+            "  - real: [[0, \"j\", 0], [-1, 0, 0], [0, 0, 0], [0, 0, 1]]",
+            "    imag: [[0, -1, 0], [\"j\", 0, 0], [0, 0, 0], [0, 0, \"-j\"]]",
+            "  - real: [[0, 0, 1], [0, 0, 0], [-1, 0, 0], [0, \"-j\", 0]]",
+            "    imag: [[0, 0, \"j\"], [0, 0, 0], [\"j\", 0, 0], [0, -1, 0]]"), "test");
+
     private static Stream<SpaceTimeCode> orthogonalCodes() {
         Stream.Builder<SpaceTimeCode> codes = Stream.builder();
         for (SpaceTimeCode code : SpaceTimeCodes.all()) {
@@ -232,7 +248,7 @@ class PlanarPathTest {
                 codes.add(code);
             }
         }
-        return codes.add(FILE_CODE).build();
+        return codes.add(FILE_CODE).add(TURNED_CODE).build();
     }
 
     /**

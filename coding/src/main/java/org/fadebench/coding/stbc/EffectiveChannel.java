@@ -78,9 +78,22 @@ final class EffectiveChannel {
                 double v = f.unsafe_get(row, c);
                 g += v * v;
             }
+            invDiag[c] = g;
+        }
+        invertDiagonal(invDiag, gain);
+    }
+
+    /**
+     * Replaces the diagonal of FᵀF in {@code invDiag} by its inverse (0 where a column is zero) and
+     * writes each symbol's matched-filter gain 2 / (1/G_aa + 1/G_bb) into {@code gain} (0 where
+     * either is zero).
+     */
+    static void invertDiagonal(double[] invDiag, double[] gain) {
+        for (int c = 0; c < invDiag.length; c++) {
+            double g = invDiag[c];
             invDiag[c] = g > 0 ? 1.0 / g : 0.0;
         }
-        for (int i = 0; i < k; i++) {
+        for (int i = 0; i < gain.length; i++) {
             double ia = invDiag[2 * i];
             double ib = invDiag[2 * i + 1];
             gain[i] = ia > 0 && ib > 0 ? 2.0 / (ia + ib) : 0.0;

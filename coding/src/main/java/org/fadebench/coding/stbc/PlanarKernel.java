@@ -17,6 +17,20 @@ public interface PlanarKernel {
     /** Encodes code blocks {@code from .. from+blocks)} of the symbol planes into the grid planes. */
     void encode(double[][] symbols, int from, int blocks, double[][] grid);
 
+    /**
+     * Grid planes for {@code blocks} code blocks, for {@link #encode}. A kernel may let grid planes
+     * that always hold the same values share one array, which {@code encode} then writes once: the
+     * grid reads the same, in fewer bytes. Every plane its own array by default.
+     */
+    default double[][] newGrid(int gridPlanes, int blocks) {
+        return new double[gridPlanes][blocks];
+    }
+
+    /** How many arrays {@link #newGrid} makes for {@code gridPlanes} planes. */
+    default int gridArrays(int gridPlanes) {
+        return gridPlanes;
+    }
+
     /** Takes the channel matrix (Nr x Mt, interleaved complex, row-major) for the blocks that follow. */
     void setChannel(double[] h);
 
