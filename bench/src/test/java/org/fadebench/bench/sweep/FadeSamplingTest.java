@@ -161,7 +161,11 @@ class FadeSamplingTest {
      * about 5 % if the interval is honest; the seed is fixed. It was changed once, from 20261203 to
      * 20261205 (the first other seed tried), with the noise order of version 0.2.0: under the old
      * seed the interval of Alamouti 2×2 QPSK, [6.59e-8, 9.87e-8], then missed 1e-7; seeds 1 to 20
-     * covered it 17 times for that link (P(at most 17 of 20) = 0.075 at a true 95 %).
+     * covered it 17 times for that link (P(at most 17 of 20) = 0.075 at a true 95 %). A later scan
+     * of 200 seeds (1000 to 1199) showed the interval of that link to be too narrow, not unlucky:
+     * 166 of 200 covered (83 %), every miss below the closed form, the mean estimate 4.5 % low; at
+     * ±10 %, 88 of 100. 1×2 QPSK: 185 of 200. So this check holds for its seed and the README states
+     * the shortfall; making the interval honest at diversity 4 is open work.
      */
     @Test
     void coversTheClosedFormAtFer1e7() {
