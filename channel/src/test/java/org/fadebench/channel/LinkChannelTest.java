@@ -93,12 +93,14 @@ class LinkChannelTest {
     /**
      * Planar labels are the interleaved labels read as rows of the planes' count, from the same
      * draws, for every label width of the modulations (1, 2, 4, 6, 8 bits) and for widths whose
-     * draws do not hold whole rows (3 bits: 21 labels per draw).
+     * draws do not hold whole rows (3 bits: 21 labels per draw), for 1 to 8 planes (the symbols of
+     * a code block: 2 for Alamouti, 3 for H3 and H4, 4 for G3 and G4, 8 for the rate-1/2 codes on 5
+     * to 8 antennas).
      */
     @Test
     void planarLabelsEqualInterleaved() {
         for (int bits : new int[] {1, 2, 3, 4, 6, 8}) {
-            for (int width = 1; width <= 3; width++) {
+            for (int width = 1; width <= 8; width++) {
                 int rows = 37;
                 int[] flat = new int[width * rows];
                 int[][] planes = new int[width][rows + 1];

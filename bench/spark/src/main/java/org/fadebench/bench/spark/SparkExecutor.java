@@ -21,6 +21,7 @@ import org.apache.spark.util.LongAccumulator;
 import org.fadebench.bench.report.ToolVersion;
 import org.fadebench.bench.sweep.BatchExecutor;
 import org.fadebench.bench.sweep.BatchId;
+import org.fadebench.bench.sweep.BatchPack;
 import org.fadebench.bench.sweep.BatchResult;
 import org.fadebench.bench.sweep.BatchWorker;
 import org.fadebench.bench.sweep.SweepPlan;

@@ -1,12 +1,10 @@
-package org.fadebench.bench.spark;
+package org.fadebench.bench.sweep;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.List;
 import org.fadebench.bench.link.FrameCounters;
-import org.fadebench.bench.sweep.BatchId;
-import org.fadebench.bench.sweep.BatchResult;
 import org.junit.jupiter.api.Test;
 
 /** A task's packed ids and results read back exactly: every count, every bit of every double. */
