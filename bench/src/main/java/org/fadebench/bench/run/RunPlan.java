@@ -329,7 +329,10 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
     /**
      * Every setting that changes the numbers, for the checkpoint's fingerprint. Its first field
      * changes when the same settings give other numbers: v4 since the noise order of version 0.2.0,
-     * so that a checkpoint of 0.1.0 is not resumed with draws in another order.
+     * so that a checkpoint of 0.1.0 is not resumed with draws in another order. A fade-sampling
+     * run's own fields end in {@code scale2} since its frozen fade scale became twice the
+     * cross-entropy one (after 0.2.0), so that its earlier checkpoints, drawn with another scale,
+     * are not resumed; plain runs' numbers did not change and their checkpoints still resume.
      */
     public String numbersFingerprintText(int batchFrames) {
         return String.join("|", "v4", link.describe(), link.coding().toString(), parityChecks(link),
@@ -338,7 +341,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
                 link.fading(), Integer.toString(link.coherenceSlots()), Arrays.toString(snrDb),
                 Long.toString(rules.minErrors()), Long.toString(rules.maxFrames()), Double.toString(rules.maxSeconds()),
                 Double.toString(rules.ferFloor()), Long.toString(seed), Integer.toString(batchFrames))
-                + (rules.fadeSampling() ? "|" + rules.estimator().cliName() + "|" + rules.relPrecision() : "");
+                + (rules.fadeSampling() ? "|" + rules.estimator().cliName() + "|" + rules.relPrecision() + "|scale2" : "");
     }
 
     /**

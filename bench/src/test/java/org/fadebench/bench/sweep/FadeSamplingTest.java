@@ -4,11 +4,13 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator;
 import org.apache.commons.statistics.distribution.GammaDistribution;
 import org.apache.commons.statistics.distribution.NormalDistribution;
 import org.fadebench.bench.link.FrameCoding;
+import org.fadebench.bench.link.LinkChain;
 import org.fadebench.bench.link.LinkSettings;
 import org.fadebench.channel.ChannelSpec;
 import org.fadebench.channel.Fading;
@@ -61,22 +63,47 @@ class FadeSamplingTest {
      * γ = ‖H‖²·SNR/(Mt·rate) (our power convention), so FER = E[1 − (1 − P(γ))^n] over ‖H‖², the
      * sum of Nr·Mt independent powers: Gamma(Nr·Mt, 1) in Rayleigh fading, Gamma(m·Nr·Mt, 1/m) in
      * Nakagami-m fading (M. K. Simon and M.-S. Alouini, Digital Communication over Fading Channels,
-     * 2nd ed., Wiley 2005, Sec. 2.2.1 for the laws, Sec. 9.2 for MRC; section numbers from memory). Computed by Gauss-Legendre quadrature (Commons Math) on
-     * geometric pieces of the g axis, where the integrand's mass lies.
+     * 2nd ed., Wiley 2005, Sec. 2.2.1 for the laws, Sec. 9.2 for MRC; section numbers from memory).
      */
     static double closedFormFer(LinkSettings link, double snrDb) {
+        return overFades(link, snrDb, g -> 0);
+    }
+
+    /**
+     * The relative variance per frame of the fade-sampling FER estimate with scale {@code s}, from
+     * the same closed form: E_q[(w·1{error})²]/FER² − 1 = E_p[1{error}·w]/FER² − 1, with the
+     * weight of a frame of fade energy g = ‖H‖², w = p/q = s^(m·L)·exp(m (1/s − 1) g) (the README's
+     * likelihood ratio, L = Nr·Mt).
+     */
+    static double relativeVariance(LinkSettings link, double snrDb, double s) {
+        int l = link.receiveAntennas() * link.transmitAntennas();
+        double m = link.channel().model().fadeShape();
+        double fer = closedFormFer(link, snrDb);
+        return overFades(link, snrDb, g -> m * (l * Math.log(s) + (1 / s - 1) * g)) / (fer * fer) - 1;
+    }
+
+    /**
+     * E[P(frame error | g)·exp(logFactor(g))] over the law of g = ‖H‖², by Gauss-Legendre quadrature
+     * (Commons Math) on geometric pieces of the g axis, where the integrand's mass lies; the factor
+     * is taken in logs so that a large weight meets a vanishing error probability as 0, not NaN.
+     */
+    private static double overFades(LinkSettings link, double snrDb, DoubleUnaryOperator logFactor) {
         int l = link.receiveAntennas() * link.transmitAntennas();
         double m = link.channel().model().fadeShape();
         GammaDistribution gain = GammaDistribution.of(m * l, 1.0 / m);
         double snr = Math.pow(10, snrDb / 10);
         double perGain = snr / (link.transmitAntennas() * link.code().rate());
         int n = link.symbolsPerFrame();
-        UnivariateFunction given = g -> -Math.expm1(n * Math.log1p(-symbolError(link.modulation(), g * perGain)));
-        UnivariateFunction f = g -> given.value(g) * gain.density(g);
+        DoubleUnaryOperator given = g -> {
+            double error = -Math.expm1(n * Math.log1p(-symbolError(link.modulation(), g * perGain)));
+            double factor = logFactor.applyAsDouble(g);
+            return factor == 0 ? error : error == 0 ? 0 : Math.exp(Math.log(error) + factor);
+        };
+        UnivariateFunction f = g -> given.applyAsDouble(g) * gain.density(g);
         IterativeLegendreGaussIntegrator integrator = new IterativeLegendreGaussIntegrator(16, 1e-10, 1e-30);
         // below 1e-6 the density may have a singular derivative (shape < 2): there, over u = F(g)
         double from = 1e-6;
-        double sum = integrator.integrate(1_000_000, u -> given.value(gain.inverseCumulativeProbability(u)), 0,
+        double sum = integrator.integrate(1_000_000, u -> given.applyAsDouble(gain.inverseCumulativeProbability(u)), 0,
                 gain.cumulativeProbability(from));
         for (double to = 2 * from; to < 80; to *= 2) {
             sum += integrator.integrate(1_000_000, f, from, to);
@@ -158,21 +185,57 @@ class FadeSamplingTest {
      * At FER 1e-7 the estimate's 95 % interval covers the closed form, for 1×2 MRC and Alamouti
      * 2×2, BPSK and QPSK, 256-bit quasi-static frames, and the point stopped on its precision
      * (±20 %) with enough effective error frames. Each check fails by chance with probability
-     * about 5 % if the interval is honest; the seed is fixed. It was changed once, from 20261203 to
-     * 20261205 (the first other seed tried), with the noise order of version 0.2.0: under the old
-     * seed the interval of Alamouti 2×2 QPSK, [6.59e-8, 9.87e-8], then missed 1e-7; seeds 1 to 20
-     * covered it 17 times for that link (P(at most 17 of 20) = 0.075 at a true 95 %). A later scan
-     * of 200 seeds (1000 to 1199) showed the interval of that link to be too narrow, not unlucky:
-     * 166 of 200 covered (83 %), every miss below the closed form, the mean estimate 4.5 % low; at
-     * ±10 %, 88 of 100. 1×2 QPSK: 185 of 200. So this check holds for its seed and the README states
-     * the shortfall; making the interval honest at diversity 4 is open work.
+     * about 5 % if the interval is honest; the seed is fixed. History: with the noise order of
+     * version 0.2.0 and the cross-entropy scale as frozen scale, seed 20261203 gave Alamouti 2×2
+     * QPSK [6.59e-8, 9.87e-8], which misses 1e-7, and the seed was moved to 20261205; a scan of 200
+     * seeds (1000 to 1199) then showed that interval too narrow, not unlucky: 166 of 200 covered,
+     * every miss below. With the scale widened to twice the cross-entropy one
+     * ({@link FadeScaleSearch#WIDEN}) the same seeds cover 189 of 200 (fresh seeds 2000 to 2199:
+     * 188), 1×2 QPSK 190 (before 185; fresh seeds 189), in the binomial band 184-196 of an honest
+     * 95 % interval, so the check is back on seed 20261203, whose Alamouti 2×2 QPSK interval is
+     * now [7.09e-8, 1.05e-7]: this check fails with the cross-entropy scale and passes with the
+     * widened one.
      */
     @Test
     void coversTheClosedFormAtFer1e7() {
         for (SpaceTimeCode code : new SpaceTimeCode[] {SpaceTimeCodes.NONE, SpaceTimeCodes.ALAMOUTI}) {
             for (Modulation mod : new Modulation[] {Modulation.BPSK, Modulation.QPSK}) {
-                assertCoversClosedFormAtFer1e7(link(mod, code, 2, 256), 20261205L);
+                assertCoversClosedFormAtFer1e7(link(mod, code, 2, 256), 20261203L);
             }
+        }
+    }
+
+    /**
+     * The frozen scale is the cross-entropy one widened by {@link FadeScaleSearch#WIDEN}, and that
+     * puts it near the least variance of the estimate, computed from the closed form
+     * ({@link #relativeVariance}) at the scale the search finds for seed 20261203 at FER 1e-7,
+     * 256-bit quasi-static QPSK frames: within 30 % of the least relative variance over the scales
+     * s·2^(k/4), k = −4 … 8 (from the cross-entropy scale to 4s), for Alamouti 2×2 and 1×2 MRC;
+     * and, for Alamouti 2×2, at least 4 times below the variance at the cross-entropy scale. That
+     * variance is the cause of the cross-entropy scale's too narrow intervals: seeds 1000 to 1199
+     * covered 166 of 200 at ±20 %, every miss below, while a point stopped after about 1 200
+     * frames, far too few to draw the frames that make the variance up. Values for this seed:
+     * Alamouti 2×2 s = 0.0193, relative variance 15.1, least 14.2, 285 at s/2; 1×2 2.54, least
+     * 2.15, 3.24 at s/2. Deterministic: fixed seed, quadrature.
+     */
+    @Test
+    void frozenScaleIsNearTheLeastVariance() {
+        for (SpaceTimeCode code : new SpaceTimeCode[] {SpaceTimeCodes.ALAMOUTI, SpaceTimeCodes.NONE}) {
+            LinkSettings link = link(Modulation.QPSK, code, 2, 256);
+            double snrDb = snrDbAt(link, 1e-7);
+            SweepPlan plan = new SweepPlan(link, new double[] {snrDb}, new StopRules(0, 1000, 0, 0,
+                    Estimator.FADE_SAMPLING, 0.2), 20261203L);
+            double s = FadeScaleSearch.scale(plan, new LinkChain(link), 0);
+            double at = relativeVariance(link, snrDb, s);
+            double least = Double.POSITIVE_INFINITY;
+            for (int k = -4; k <= 8; k++) {
+                least = Math.min(least, relativeVariance(link, snrDb, s * Math.pow(2, k / 4.0)));
+            }
+            double crossEntropy = relativeVariance(link, snrDb, s / FadeScaleSearch.WIDEN);
+            String what = link.describe() + ": s " + s + ", relative variance " + at + ", least " + least
+                    + ", at the cross-entropy scale " + crossEntropy;
+            assertTrue(at <= 1.3 * least, what);
+            assertTrue(code != SpaceTimeCodes.ALAMOUTI || crossEntropy >= 4 * at, what);
         }
     }
 
@@ -181,7 +244,7 @@ class FadeSamplingTest {
      * the closed form's FER 1e-3), the 95 % interval covers the closed form 92 to 98 % of the time.
      * If the true coverage is 95 %, the count of 200 is Binomial(200, 0.95): 92-98 % (184-196) holds
      * it with probability above 0.95 (the binomial law from Commons Statistics, checked below). This
-     * seed set covers 190 times.
+     * seed set covers 189 times (190 with the cross-entropy scale, before it was widened).
      */
     @Test
     void intervalsAreHonest() {
