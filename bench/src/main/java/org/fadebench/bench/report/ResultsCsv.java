@@ -72,8 +72,12 @@ public final class ResultsCsv {
         if (link.channel().pilots() > 0) {
             w.append("# ").append(pilotLine(link)).append('\n');
         }
-        w.append("# fer_ci_*: two-sided ").append(level).append(" Clopper-Pearson interval over frames; ber_ci_*: ")
-                .append(level).append(" interval with frames as clusters of bits (see README)\n");
+        boolean weighted = results.stream().anyMatch(r -> r.counts().weighted());
+        if (!weighted) {
+            // a fade-sampling run's intervals are described with its estimator below
+            w.append("# fer_ci_*: two-sided ").append(level).append(" Clopper-Pearson interval over frames; ber_ci_*: ")
+                    .append(level).append(" interval with frames as clusters of bits (see README)\n");
+        }
         boolean awgn = link.channel().awgn();
         if (bounds != null) {
             BoundSettings b = bounds.settings();
@@ -111,7 +115,6 @@ public final class ResultsCsv {
                     .append(" coded bits per frame; symbols and ser count raw decisions on the coded bits; ")
                     .append("crc_failures: frames whose CRC did not check; undetected_errors: wrong frames whose CRC checked\n");
         }
-        boolean weighted = results.stream().anyMatch(r -> r.counts().weighted());
         if (weighted) {
             w.append("# estimator fade-sampling: fades drawn with each entry's power scaled by fade_scale, each frame ")
                     .append("weighted by its likelihood ratio; fer, ber, ser are weighted means, frame_errors and the other ")

@@ -331,7 +331,7 @@ public record RunPlan(SettingValues values, String source, LinkSettings link, do
      * changes when the same settings give other numbers: v4 since the noise order of version 0.2.0,
      * so that a checkpoint of 0.1.0 is not resumed with draws in another order. A fade-sampling
      * run's own fields end in {@code scale2} since its frozen fade scale became twice the
-     * cross-entropy one (after 0.2.0), so that its earlier checkpoints, drawn with another scale,
+     * cross-entropy one (version 0.3.0), so that its earlier checkpoints, drawn with another scale,
      * are not resumed; plain runs' numbers did not change and their checkpoints still resume.
      */
     public String numbersFingerprintText(int batchFrames) {

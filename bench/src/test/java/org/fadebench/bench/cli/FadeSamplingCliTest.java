@@ -43,12 +43,17 @@ class FadeSamplingCliTest {
         assertTrue(Double.parseDouble(row[row.length - 3]) <= 0.3, "relative half-width " + row[row.length - 3]);
         assertTrue(Double.parseDouble(row[row.length - 2]) < 1, "fade scale " + row[row.length - 2]);
         assertTrue(Files.readString(weighted.resolve("results.json")).contains("\"fade_scale\""));
+        // the header names the intervals each run has: normal from the weights, or Clopper-Pearson
+        String weightedText = String.join("\n", lines);
+        assertTrue(weightedText.contains("normal intervals from the weighted sample variance"), weightedText);
+        assertFalse(weightedText.contains("Clopper-Pearson"), weightedText);
 
         Path plain = tmp.resolve("plain");
         assertEquals(0, run(plain, "--snr", "6", "--max-frames", "2000").code());
         List<String> plainLines = Files.readAllLines(plain.resolve("results.csv"));
         assertEquals(ResultsCsv.HEADER, plainLines.get(plainLines.size() - 2));
         assertFalse(String.join("\n", plainLines).contains("estimator"));
+        assertTrue(String.join("\n", plainLines).contains("Clopper-Pearson interval over frames"));
     }
 
     /** A point cut at 10 frames cannot have 10 effective error frames: results.csv and results.json say so. */
