@@ -33,11 +33,16 @@ public class DriverBenchmark extends ThroughputBenchmark {
 
     static final int TASK = 512;
 
+    /** A batch's counts as the uncoded link gives them (128 frames of 1024 bits, a few errors). */
+    static FrameCounters batchCounts() {
+        return FrameCounters.of(128, 3, 131_072, 17, 32_768, 9, 0.0, 0, 0);
+    }
+
     /** A ledger of one point that never finishes, the next round's ids and their results packed. */
     @State(Scope.Thread)
     public static class Driver {
         SweepLedger ledger;
-        final FrameCounters counts = FrameCounters.of(128, 3, 131_072, 17, 32_768, 9, 0.0, 0, 0);
+        final FrameCounters counts = batchCounts();
         List<BatchId> ids = new ArrayList<>(TASK);
         byte[] packed;
         long clock;
@@ -86,8 +91,7 @@ public class DriverBenchmark extends ThroughputBenchmark {
         @Setup
         public void setUp() {
             for (int i = 0; i < TASK; i++) {
-                results.add(new BatchResult(new BatchId(0, i), FrameCounters.of(128, 3, 131_072, 17, 32_768, 9, 0.0, 0, 0),
-                        new double[0]));
+                results.add(new BatchResult(new BatchId(0, i), batchCounts(), new double[0]));
             }
         }
     }

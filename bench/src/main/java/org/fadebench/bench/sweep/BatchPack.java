@@ -16,9 +16,9 @@ import org.fadebench.bench.link.FrameCounters;
 
 /**
  * A task's batches and their results as one value each, not one serialised object per batch, for
- * executors whose workers run in other processes (the Spark executor). Spark sends a task's data and results through Java serialisation; thousands of small objects a
- * round make its reflective writer and reader hot, and the JIT then spends seconds of a core
- * compiling them (seen in a flight recording of a sweep on {@code local[2]}). Here a task's batch
+ * executors whose workers run in other processes (the Spark executor). Spark sends a task's data
+ * and results through Java serialisation; thousands of small objects a round make its reflective
+ * writer and reader hot, and the JIT then spends seconds of a core compiling them (seen in a flight recording of a sweep on {@code local[2]}). Here a task's batch
  * ids travel as one {@code long[]} and its results as one {@code byte[]}, whose contents are the
  * counts of {@link FrameCounters#byName()} (the names and order the checkpoint uses) with every
  * value's exact bits.
